@@ -1,0 +1,74 @@
+/**
+ * Darcy friction factor formulas for full pipes.
+ * All take Re (dimensionless, > 0) and relative roughness ε/D (dimensionless, ≥ 0)
+ * and throw RangeError naming the argument otherwise.
+ */
+
+function checkArgs(re: number, relRoughness: number): void {
+  if (!(re > 0) || !Number.isFinite(re)) throw new RangeError(`re must be > 0 and finite, got ${re}`);
+  if (!(relRoughness >= 0 && relRoughness < 1)) {
+    throw new RangeError(`relRoughness must be in [0, 1), got ${relRoughness}`);
+  }
+}
+
+/** Laminar (Hagen–Poiseuille) Darcy factor f = 64/Re. Valid Re < ~2300. */
+export function laminar(re: number): number {
+  if (!(re > 0) || !Number.isFinite(re)) throw new RangeError(`re must be > 0 and finite, got ${re}`);
+  return 64 / re;
+}
+
+/**
+ * Colebrook–White (Colebrook 1939, J. ICE 11:133):
+ *   1/√f = −2·log10( (ε/D)/3.7 + 2.51/(Re·√f) )
+ * Solved by Newton's method on x = 1/√f, started from Haaland, iterated until
+ * |Δx| < 1e-10 (at most 50 steps; converges in 3–5). Validity: turbulent flow,
+ * Re ≳ 4000, 0 ≤ ε/D ≤ 0.05 (the Moody chart range).
+ */
+export function colebrook(re: number, relRoughness: number): number {
+  checkArgs(re, relRoughness);
+  const a = relRoughness / 3.7;
+  const b = 2.51 / re;
+  let x = 1 / Math.sqrt(haaland(re, relRoughness));
+  for (let k = 0; k < 50; k++) {
+    const arg = a + b * x;
+    const g = x + 2 * Math.log10(arg);
+    const dg = 1 + (2 * b) / (arg * Math.LN10);
+    const dx = g / dg;
+    x -= dx;
+    if (Math.abs(dx) < 1e-10) break;
+  }
+  return 1 / (x * x);
+}
+
+/**
+ * Swamee–Jain (Swamee & Jain 1976, J. Hydraul. Div. ASCE 102(5):657):
+ *   f = 0.25 / [log10( (ε/D)/3.7 + 5.74/Re^0.9 )]²
+ * Stated validity 5e3 ≤ Re ≤ 1e8, 1e-6 ≤ ε/D ≤ 1e-2 (≈ 1 % from Colebrook there;
+ * up to 3.1 % near Re 4000 and ε/D 0.01, references.md §3.1).
+ */
+export function swameeJain(re: number, relRoughness: number): number {
+  checkArgs(re, relRoughness);
+  const l = Math.log10(relRoughness / 3.7 + 5.74 / re ** 0.9);
+  return 0.25 / (l * l);
+}
+
+/**
+ * Haaland (Haaland 1983, J. Fluids Eng. 105:89; White, Fluid Mechanics, eq. 6.49):
+ *   1/√f = −1.8·log10[ ((ε/D)/3.7)^1.11 + 6.9/Re ]
+ * Validity 4e3 ≤ Re ≤ 1e8, within ~1.5 % of Colebrook.
+ */
+export function haaland(re: number, relRoughness: number): number {
+  checkArgs(re, relRoughness);
+  const x = -1.8 * Math.log10((relRoughness / 3.7) ** 1.11 + 6.9 / re);
+  return 1 / (x * x);
+}
+
+/**
+ * Fully rough (Re → ∞) limit of Colebrook, von Kármán–Nikuradse:
+ *   f = 0.25 / [log10((ε/D)/3.7)]²  — Crane TP-410's "fT". ε/D must be > 0.
+ */
+export function fullyRoughFrictionFactor(relRoughness: number): number {
+  if (!(relRoughness > 0 && relRoughness < 1)) throw new RangeError(`relRoughness must be in (0, 1), got ${relRoughness}`);
+  const l = Math.log10(relRoughness / 3.7);
+  return 0.25 / (l * l);
+}

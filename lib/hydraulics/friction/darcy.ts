@@ -1,0 +1,37 @@
+import { colebrook, laminar } from "./colebrook";
+
+export type FlowRegime = "laminar" | "transition" | "turbulent";
+
+/** Upper end of the laminar range (Re). Common textbook value 2300 (references.md §3.2). */
+export const RE_LAMINAR_MAX = 2300;
+/** Start of fully turbulent flow for friction purposes (Re), where Colebrook is used. */
+export const RE_TURBULENT_MIN = 4000;
+
+/**
+ * Darcy friction factor with the regime used, for any Re ≥ 0.
+ *
+ * Rule chosen (an engineering convention, not a physical law — the transition
+ * zone has no unique f):
+ * - Re = 0 → f = 0, regime "laminar": no flow, no loss (keeps Δp(Q) continuous
+ *   through Q = 0 for the network solver, since Δp = f·(L/D)·ρv²/2 → 0).
+ * - 0 < Re < 2300 → laminar f = 64/Re.
+ * - 2300 ≤ Re < 4000 → "transition": linear interpolation in Re between
+ *   64/2300 and Colebrook(4000, ε/D). Chosen because it is continuous at both
+ *   ends (no jump that would stall a Newton solver) and lies between the two
+ *   bounding physical laws; the true factor in this zone is intermittent.
+ * - Re ≥ 4000 → Colebrook–White.
+ * Throws RangeError for negative or non-finite Re, or ε/D outside [0, 1).
+ */
+export function darcyFrictionFactor(re: number, relRoughness: number): { f: number; regime: FlowRegime } {
+  if (!(re >= 0) || !Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
+  if (!(relRoughness >= 0 && relRoughness < 1)) throw new RangeError(`relRoughness must be in [0, 1), got ${relRoughness}`);
+  if (re === 0) return { f: 0, regime: "laminar" };
+  if (re < RE_LAMINAR_MAX) return { f: laminar(re), regime: "laminar" };
+  if (re < RE_TURBULENT_MIN) {
+    const fLam = laminar(RE_LAMINAR_MAX);
+    const fTurb = colebrook(RE_TURBULENT_MIN, relRoughness);
+    const w = (re - RE_LAMINAR_MAX) / (RE_TURBULENT_MIN - RE_LAMINAR_MAX);
+    return { f: fLam + w * (fTurb - fLam), regime: "transition" };
+  }
+  return { f: colebrook(re, relRoughness), regime: "turbulent" };
+}

@@ -1,0 +1,92 @@
+import { darcyFrictionFactor, type FlowRegime } from "../friction/darcy";
+
+export interface PipePressureDropInput {
+  /** Volume flow Q, m³/s; sign = direction (from → to). */
+  flowM3s: number;
+  /** Inner diameter D, m (> 0). */
+  innerDiameterM: number;
+  /** Length L, m (≥ 0). */
+  lengthM: number;
+  /** Absolute roughness ε, m (≥ 0). */
+  roughnessM: number;
+  /** Density ρ, kg/m³ (> 0). */
+  densityKgM3: number;
+  /** Kinematic viscosity ν, m²/s (> 0). */
+  kinematicViscosityM2s: number;
+  /** Sum of minor-loss coefficients ΣK (≥ 0), referred to this pipe's velocity. */
+  sumK: number;
+}
+
+export interface PipePressureDrop {
+  /** Mean velocity v = Q/A, m/s, signed like the flow. */
+  velocityMps: number;
+  reynolds: number;
+  frictionFactor: number;
+  regime: FlowRegime;
+  /** f·(L/D)·ρv²/2, Pa, signed like the flow. */
+  frictionDpPa: number;
+  /** ΣK·ρv²/2, Pa, signed like the flow. */
+  fittingsDpPa: number;
+  /** frictionDpPa + fittingsDpPa, Pa, signed like the flow. */
+  dpPa: number;
+  /** Friction gradient R = f·ρv²/(2D), Pa/m, always ≥ 0 (straight pipe only, no fittings). */
+  gradientPaPerM: number;
+}
+
+function positive(name: string, x: number, allowZero: boolean): void {
+  const ok = Number.isFinite(x) && (allowZero ? x >= 0 : x > 0);
+  if (!ok) throw new RangeError(`${name} must be ${allowZero ? "≥ 0" : "> 0"} and finite, got ${x}`);
+}
+
+/**
+ * Pressure drop in a straight pipe with fittings, Darcy–Weisbach (Weisbach 1845,
+ * Darcy 1857; e.g. White, Fluid Mechanics, eq. 6.10):
+ *   Δp = (f·L/D + ΣK)·ρ·v²/2,  v = Q/(πD²/4),  Re = |v|·D/ν,
+ * f from darcyFrictionFactor (laminar / transition / Colebrook). Δp carries the
+ * sign of Q (Δp = p_from − p_to). Q = 0 gives all zeros. Throws RangeError naming
+ * the field for a non-finite flow, D, ν or ρ ≤ 0, or L, ε, ΣK < 0.
+ */
+export function pipePressureDrop(input: PipePressureDropInput): PipePressureDrop {
+  const { flowM3s, innerDiameterM, lengthM, roughnessM, densityKgM3, kinematicViscosityM2s, sumK } = input;
+  if (!Number.isFinite(flowM3s)) throw new RangeError(`flowM3s must be finite, got ${flowM3s}`);
+  positive("innerDiameterM", innerDiameterM, false);
+  positive("lengthM", lengthM, true);
+  positive("roughnessM", roughnessM, true);
+  positive("densityKgM3", densityKgM3, false);
+  positive("kinematicViscosityM2s", kinematicViscosityM2s, false);
+  positive("sumK", sumK, true);
+  const area = (Math.PI * innerDiameterM * innerDiameterM) / 4;
+  const velocityMps = flowM3s / area;
+  const re = (Math.abs(velocityMps) * innerDiameterM) / kinematicViscosityM2s;
+  const { f, regime } = darcyFrictionFactor(re, roughnessM / innerDiameterM);
+  const dynamicPressurePa = (densityKgM3 * velocityMps * velocityMps) / 2;
+  const sign = Math.sign(flowM3s);
+  const gradientPaPerM = (f * dynamicPressurePa) / innerDiameterM;
+  const frictionDpPa = sign * gradientPaPerM * lengthM;
+  const fittingsDpPa = sign * sumK * dynamicPressurePa;
+  return {
+    velocityMps,
+    reynolds: re,
+    frictionFactor: f,
+    regime,
+    frictionDpPa,
+    fittingsDpPa,
+    dpPa: frictionDpPa + fittingsDpPa,
+    gradientPaPerM,
+  };
+}
+
+/**
+ * d(Δp)/dQ (Pa per m³/s) of pipePressureDrop at input.flowM3s, for a Newton
+ * network solver. Numerical central difference with step h = max(1e-6·|Q|, 1e-12 m³/s).
+ * Δp(Q) is odd and increasing, so the result is ≥ 0; at Q = 0 it tends to the
+ * laminar slope 128·μ·L/(π·D⁴) (Hagen–Poiseuille), which is 0 for L = 0 — a
+ * solver must then regularise (e.g. a small floor on the derivative).
+ */
+export function pipeDpDerivative(input: PipePressureDropInput): number {
+  const q = input.flowM3s;
+  const h = Math.max(1e-6 * Math.abs(q), 1e-12);
+  const up = pipePressureDrop({ ...input, flowM3s: q + h }).dpPa;
+  const down = pipePressureDrop({ ...input, flowM3s: q - h }).dpPa;
+  return Math.max(0, (up - down) / (2 * h));
+}

@@ -1,0 +1,119 @@
+/**
+ * The Results document (contract v1). Tests parse every engine answer with
+ * `resultsSchema`: zod 4's z.number() rejects NaN and ±Infinity, so a parsed
+ * answer is proof that no non-finite number leaked out. A number the engine
+ * could not compute is null, with a finding saying why.
+ */
+import { z } from "zod";
+
+const num = z.number();
+const nnum = z.number().nullable();
+
+export const findingSchema = z.object({
+  severity: z.enum(["error", "warning", "info"]),
+  code: z.string().regex(/^[a-z0-9-]+(\.[a-z0-9-]+)+$/),
+  message: z.string().min(1),
+  refs: z.array(z.string()),
+});
+
+export const pipeResultSchema = z.object({
+  id: z.string(),
+  flowM3h: nnum,
+  velocityMps: nnum,
+  reynolds: nnum,
+  frictionFactor: nnum,
+  pressureDropKpa: nnum,
+  gradientPaPerM: nnum,
+  suggestedSize: z.string().nullable(),
+});
+
+export const partResultSchema = z.object({ id: z.string(), flowM3h: nnum, pressureDropKpa: nnum });
+
+export const circuitSchema = z.object({
+  load: z.string(),
+  pump: z.string().nullable(),
+  path: z.array(z.string()),
+  pressureDropKpa: nnum,
+  index: z.boolean(),
+  excessKpa: nnum,
+  balancingKv: nnum,
+});
+
+export const pumpDutySchema = z.object({
+  id: z.string(),
+  designFlowM3h: nnum,
+  requiredHeadKpa: nnum,
+  availableHeadKpa: nnum,
+  ok: z.boolean().nullable(),
+});
+
+export const modeResultSchema = z.object({
+  mode: z.enum(["heating", "hot-water"]),
+  heatSourceFlowM3h: nnum,
+  pipes: z.array(pipeResultSchema),
+  parts: z.array(partResultSchema),
+  circuits: z.array(circuitSchema),
+  pump: pumpDutySchema.nullable(),
+  pumps: z.array(pumpDutySchema),
+});
+
+export const scenarioResultSchema = z.object({
+  name: z.string(),
+  mode: z.enum(["heating", "hot-water"]),
+  converged: z.boolean(),
+  iterations: z.number().int().min(0),
+  heatSourceFlowM3h: nnum,
+  heatSourceReturnC: nnum,
+  pipes: z.array(z.object({ id: z.string(), flowM3h: nnum, pressureDropKpa: nnum })),
+  parts: z.array(partResultSchema),
+  emitters: z.array(
+    z.object({ id: z.string(), flowM3h: nnum, outputW: nnum, returnTemperatureC: nnum }),
+  ),
+});
+
+export const resultsSchema = z.object({
+  engine: z.string(),
+  ok: z.literal(true),
+  findings: z.array(findingSchema),
+  fluid: z.object({
+    temperatureC: num,
+    densityKgM3: nnum,
+    kinematicViscosityM2s: nnum,
+    specificHeatJkgK: nnum,
+  }),
+  modes: z.array(modeResultSchema),
+  bypass: z
+    .object({
+      id: z.string(),
+      recommendedOpeningKpa: nnum,
+      heatSourceFlowAllZonesClosedM3h: nnum,
+      minFlowMet: z.boolean().nullable(),
+    })
+    .nullable(),
+  expansionVessel: z
+    .object({
+      systemVolumeL: nnum,
+      expansionVolumeL: nnum,
+      requiredVolumeL: nnum,
+      recommendedPrechargeBar: nnum,
+      providedVolumeL: nnum,
+      ok: z.boolean().nullable(),
+    })
+    .nullable(),
+  volume: z.object({ systemL: nnum, minimumL: nnum, bufferRecommended: z.boolean().nullable() }),
+  emitters: z.array(
+    z.object({ id: z.string(), outputAtDesignW: nnum, heatLoadW: nnum, ok: z.boolean().nullable() }),
+  ),
+  hotWater: z.object({ id: z.string(), reheatMinutes: nnum }).nullable(),
+  scenarios: z.array(scenarioResultSchema),
+});
+
+export type Finding = z.output<typeof findingSchema>;
+export type Severity = Finding["severity"];
+export type PipeResult = z.output<typeof pipeResultSchema>;
+export type PartResult = z.output<typeof partResultSchema>;
+export type Circuit = z.output<typeof circuitSchema>;
+export type PumpDuty = z.output<typeof pumpDutySchema>;
+export type ModeResult = z.output<typeof modeResultSchema>;
+export type ScenarioResult = z.output<typeof scenarioResultSchema>;
+export type Results = z.output<typeof resultsSchema>;

@@ -1,0 +1,8 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  // knex ships optional drivers (sqlite, mssql…) the bundler cannot resolve; keep it external.
+  serverExternalPackages: ["knex", "pg", "nodemailer", "rate-limiter-flexible"],
+  poweredByHeader: false,
+};
+
+export default nextConfig;
