@@ -1,0 +1,54 @@
+/**
+ * Flow coefficient Kv (IEC 60534-1; VDI/VDE 2173): the flow in m³/h of water
+ * (5–40 °C, ρ0 = 1000 kg/m³) that passes with a pressure loss of 1 bar.
+ * Defining equation: Kv = Q·√((ρ/ρ0)/(Δp/Δp0)), Δp0 = 1 bar = 1e5 Pa.
+ */
+
+const DP0_PA = 1e5;
+const RHO0_KGM3 = 1000;
+/** Kv/Cv = 0.2271247 (m³/h per US gpm) / √0.0689476 (bar per psi) = 0.864978. */
+export const KV_PER_CV = 0.2271247 / Math.sqrt(0.0689476);
+
+function finite(name: string, x: number): void {
+  if (!Number.isFinite(x)) throw new RangeError(`${name} must be finite, got ${x}`);
+}
+function positive(name: string, x: number): void {
+  if (!(x > 0) || !Number.isFinite(x)) throw new RangeError(`${name} must be > 0 and finite, got ${x}`);
+}
+
+/**
+ * Pressure loss Δp (Pa) at flow `flowM3h` (m³/h) through a device of coefficient
+ * `kv` (m³/h at 1 bar) for a fluid of density `densityKgM3`:
+ *   Δp = 1e5·(Q/Kv)²·(ρ/1000), signed like Q. Q 0.5 m³/h, Kv 2.5 → 4.0 kPa.
+ */
+export function kvPressureDropPa(flowM3h: number, kv: number, densityKgM3: number): number {
+  finite("flowM3h", flowM3h);
+  positive("kv", kv);
+  positive("densityKgM3", densityKgM3);
+  const r = flowM3h / kv;
+  return Math.sign(r) * DP0_PA * r * r * (densityKgM3 / RHO0_KGM3);
+}
+
+/**
+ * The Kv (m³/h) that loses `dpPa` (Pa, > 0) at `flowM3h` (m³/h, sign ignored):
+ *   Kv = |Q|·√((ρ/1000)/(Δp/1e5)). 0.6 m³/h at 10 kPa → 1.897.
+ */
+export function kvForPressureDrop(flowM3h: number, dpPa: number, densityKgM3: number): number {
+  finite("flowM3h", flowM3h);
+  positive("dpPa", dpPa);
+  positive("densityKgM3", densityKgM3);
+  return Math.abs(flowM3h) * Math.sqrt(densityKgM3 / RHO0_KGM3 / (dpPa / DP0_PA));
+}
+
+/** d(Δp)/dQ of kvPressureDropPa in Pa per (m³/h): 2e5·|Q|·(ρ/1000)/Kv². */
+export function kvDpDerivativePaPerM3h(flowM3h: number, kv: number, densityKgM3: number): number {
+  finite("flowM3h", flowM3h);
+  positive("kv", kv);
+  positive("densityKgM3", densityKgM3);
+  return (2 * DP0_PA * Math.abs(flowM3h) * (densityKgM3 / RHO0_KGM3)) / (kv * kv);
+}
+
+/** Cv (US gpm at 1 psi, 60 °F water) → Kv: Kv = 0.86498·Cv. */
+export const cvToKv = (cv: number): number => cv * KV_PER_CV;
+/** Kv → Cv: Cv = 1.1561·Kv. */
+export const kvToCv = (kv: number): number => kv / KV_PER_CV;

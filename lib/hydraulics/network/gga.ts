@@ -1,0 +1,157 @@
+/**
+ * The gradient method (Todini & Pilati, "A gradient algorithm for the analysis
+ * of pipe networks", 1988), in the shape EPANET uses (Rossman, EPANET 2.2
+ * manual §12.2): each iteration linearises every link h(q) around its current
+ * flow (p = 1/g, y = h/g), solves the node-head system A·H = F — A is SPD — and
+ * updates flows q ← q − y + p·(Hfrom − Hto). Flows satisfy continuity after
+ * every linear solve, so on a tree (fixed demands) the first step is exact.
+ *
+ * Units are the caller's; the engine uses m³/h and kPa so matrix entries sit
+ * near 1 (better conditioned than m³/s and Pa). No module state.
+ */
+import { factorInPlace, solveInPlace } from "./ldl";
+import { symbolicFactor, type Symbolic } from "./ordering";
+
+/** Writes h (loss from→to) into out[0] and g = dh/dq > 0 into out[1]. */
+export type Evaluate = (q: number, out: Float64Array) => void;
+
+export interface Topology {
+  nodeCount: number;
+  from: Int32Array;
+  to: Int32Array;
+  /** nodes held at a fixed head (one per connected component at least) */
+  fixed: Uint8Array;
+}
+
+export interface Prepared {
+  topo: Topology;
+  unknownOf: Int32Array; // node → unknown index or −1
+  m: number;
+  sym: Symbolic;
+  linkSlot: Int32Array; // link → off-diagonal slot or −1
+}
+
+export function prepare(topo: Topology): Prepared {
+  const unknownOf = new Int32Array(topo.nodeCount).fill(-1);
+  let m = 0;
+  for (let n = 0; n < topo.nodeCount; n++) if (!topo.fixed[n]) unknownOf[n] = m++;
+  const pairs: number[] = [];
+  for (let k = 0; k < topo.from.length; k++) {
+    const a = unknownOf[topo.from[k]!]!;
+    const b = unknownOf[topo.to[k]!]!;
+    if (a >= 0 && b >= 0 && a !== b) pairs.push(a, b);
+  }
+  const sym = symbolicFactor(m, pairs);
+  const linkSlot = new Int32Array(topo.from.length);
+  for (let k = 0; k < topo.from.length; k++) {
+    const a = unknownOf[topo.from[k]!]!;
+    const b = unknownOf[topo.to[k]!]!;
+    linkSlot[k] = a >= 0 && b >= 0 && a !== b ? sym.slotOf(a, b) : -1;
+  }
+  return { topo, unknownOf, m, sym, linkSlot };
+}
+
+export interface SolveOptions {
+  maxIterations?: number;
+  /** converged when Σ|Δq| / Σ|q| falls below this (EPANET "accuracy") */
+  accuracy?: number;
+  /** smallest g allowed, keeps p = 1/g finite at zero flow (EPANET's RQtol idea) */
+  minGradient?: number;
+  fixedHead?: Float64Array;
+}
+
+export interface SolveResult {
+  q: Float64Array;
+  head: Float64Array;
+  iterations: number;
+  converged: boolean;
+  factorOk: boolean;
+}
+
+export function solveNetwork(
+  prep: Prepared,
+  evaluate: readonly Evaluate[],
+  demand: Float64Array,
+  q0: Float64Array,
+  options: SolveOptions = {},
+): SolveResult {
+  const { topo, unknownOf, m, sym, linkSlot } = prep;
+  const maxIter = options.maxIterations ?? 60;
+  const accuracy = options.accuracy ?? 1e-7;
+  const gMin = options.minGradient ?? 1e-6;
+  const L = topo.from.length;
+  const q = Float64Array.from(q0);
+  const head = new Float64Array(topo.nodeCount);
+  if (options.fixedHead) for (let n = 0; n < topo.nodeCount; n++) if (topo.fixed[n]) head[n] = options.fixedHead[n]!;
+  const p = new Float64Array(L);
+  const y = new Float64Array(L);
+  const diag = new Float64Array(m);
+  const vals = new Float64Array(sym.slotCount);
+  const rhs = new Float64Array(m);
+  const out = new Float64Array(2);
+  let converged = false;
+  let factorOk = true;
+  let iterations = 0;
+  let lastRatio = Infinity;
+  let relax = 1;
+  for (let it = 1; it <= maxIter; it++) {
+    iterations = it;
+    diag.fill(0);
+    vals.fill(0);
+    rhs.fill(0);
+    for (let n = 0; n < topo.nodeCount; n++) {
+      const u = unknownOf[n]!;
+      if (u >= 0) rhs[u] = -demand[n]!;
+    }
+    for (let k = 0; k < L; k++) {
+      evaluate[k]!(q[k]!, out);
+      const g = out[1]! > gMin ? out[1]! : gMin;
+      const pk = 1 / g;
+      const yk = out[0]! * pk;
+      p[k] = pk;
+      y[k] = yk;
+      const a = unknownOf[topo.from[k]!]!;
+      const b = unknownOf[topo.to[k]!]!;
+      const r = q[k]! - yk;
+      if (a >= 0) {
+        diag[a] = diag[a]! + pk;
+        rhs[a] = rhs[a]! - r;
+        if (b < 0) rhs[a] = rhs[a]! + pk * head[topo.to[k]!]!;
+      }
+      if (b >= 0) {
+        diag[b] = diag[b]! + pk;
+        rhs[b] = rhs[b]! + r;
+        if (a < 0) rhs[b] = rhs[b]! + pk * head[topo.from[k]!]!;
+      }
+      const s = linkSlot[k]!;
+      if (s >= 0) vals[s] = vals[s]! - pk;
+    }
+    factorOk = factorInPlace(sym, diag, vals) && factorOk;
+    solveInPlace(sym, diag, vals, rhs);
+    for (let n = 0; n < topo.nodeCount; n++) {
+      const u = unknownOf[n]!;
+      if (u >= 0) head[n] = rhs[u]!;
+    }
+    let sumDq = 0;
+    let sumQ = 0;
+    for (let k = 0; k < L; k++) {
+      const qNew = q[k]! - y[k]! + p[k]! * (head[topo.from[k]!]! - head[topo.to[k]!]!);
+      const dq = relax * (qNew - q[k]!);
+      q[k] = q[k]! + dq;
+      sumDq += Math.abs(dq);
+      sumQ += Math.abs(q[k]!);
+    }
+    const ratio = sumQ > 0 ? sumDq / sumQ : sumDq;
+    if (!Number.isFinite(ratio)) break;
+    if (ratio < accuracy || sumDq < 1e-12) {
+      converged = true;
+      break;
+    }
+    // Piecewise links (bypass opening, check valves) can make plain Newton
+    // cycle; halve the step when the error stops shrinking (EPANET's
+    // DAMPLIMIT option does the same kind of thing).
+    if (it > 8 && ratio > 0.5 * lastRatio) relax = Math.max(0.3, relax * 0.7);
+    lastRatio = ratio;
+  }
+  return { q, head, iterations, converged, factorOk };
+}

@@ -1,0 +1,188 @@
+/**
+ * Symbolic phase of the sparse LDLᵀ factorisation used by the gradient method:
+ * a minimum-degree elimination order (the idea behind the multiple-minimum-
+ * degree order EPANET uses, Rossman, EPANET 2.2 manual §12 "Analysis
+ * algorithms"; George & Liu, "Computer Solution of Large Sparse Positive
+ * Definite Systems", 1981) and the filled structure it produces. Heating
+ * networks are near-trees, so minimum degree peels leaves first and creates
+ * almost no fill: factorisation and solve stay O(n).
+ *
+ * Input: m unknown nodes and the node pairs that share a link.
+ * Output: for each node, the later-eliminated neighbours at its elimination
+ * (its column of L) with a slot index for every value, and the list of Schur
+ * updates the numeric phase performs.
+ */
+
+export interface Symbolic {
+  m: number;
+  /** order[k] = node eliminated k-th */
+  order: Int32Array;
+  /** column v's entries: colRows[colStart[v] .. colEnd[v]) (node ids), colSlots (value slots) */
+  colStart: Int32Array;
+  colEnd: Int32Array;
+  colRows: Int32Array;
+  colSlots: Int32Array;
+  /** Schur updates of column v: updStart[v]..; entries a,b index colRows; target slot (≥0) or diagonal (−1−node) */
+  updStart: Int32Array;
+  updA: Int32Array;
+  updB: Int32Array;
+  updTarget: Int32Array;
+  slotCount: number;
+  /** slot of the pair (u, v), either order; −1 when u and v are not adjacent */
+  slotOf(u: number, v: number): number;
+}
+
+/** Binary min-heap on (degree, node) with lazy deletion. */
+class Heap {
+  private keys: number[] = [];
+  private nodes: number[] = [];
+  get size() {
+    return this.keys.length;
+  }
+  push(key: number, node: number) {
+    const k = this.keys;
+    const n = this.nodes;
+    let i = k.length;
+    k.push(key);
+    n.push(node);
+    while (i > 0) {
+      const p = (i - 1) >> 1;
+      if (k[p]! <= key) break;
+      k[i] = k[p]!;
+      n[i] = n[p]!;
+      i = p;
+    }
+    k[i] = key;
+    n[i] = node;
+  }
+  pop(): [number, number] {
+    const k = this.keys;
+    const n = this.nodes;
+    const top: [number, number] = [k[0]!, n[0]!];
+    const lastK = k.pop()!;
+    const lastN = n.pop()!;
+    const len = k.length;
+    if (len > 0) {
+      let i = 0;
+      for (;;) {
+        const l = 2 * i + 1;
+        if (l >= len) break;
+        const r = l + 1;
+        const c = r < len && k[r]! < k[l]! ? r : l;
+        if (k[c]! >= lastK) break;
+        k[i] = k[c]!;
+        n[i] = n[c]!;
+        i = c;
+      }
+      k[i] = lastK;
+      n[i] = lastN;
+    }
+    return top;
+  }
+}
+
+export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
+  const adj: Set<number>[] = Array.from({ length: m }, () => new Set<number>());
+  for (let i = 0; i + 1 < pairs.length; i += 2) {
+    const a = pairs[i]!;
+    const b = pairs[i + 1]!;
+    if (a === b) continue;
+    adj[a]!.add(b);
+    adj[b]!.add(a);
+  }
+  const heap = new Heap();
+  for (let v = 0; v < m; v++) heap.push(adj[v]!.size, v);
+  const done = new Uint8Array(m);
+  const order = new Int32Array(m);
+  const patterns: number[][] = new Array(m);
+  let k = 0;
+  while (heap.size > 0) {
+    const [deg, v] = heap.pop();
+    if (done[v] || deg !== adj[v]!.size) continue;
+    done[v] = 1;
+    order[k++] = v;
+    const nbrs = [...adj[v]!];
+    patterns[v] = nbrs;
+    for (const u of nbrs) adj[u]!.delete(v);
+    for (let i = 0; i < nbrs.length; i++) {
+      const u = nbrs[i]!;
+      for (let j = i + 1; j < nbrs.length; j++) {
+        const w = nbrs[j]!;
+        adj[u]!.add(w);
+        adj[w]!.add(u);
+      }
+    }
+    for (const u of nbrs) heap.push(adj[u]!.size, u);
+    adj[v]!.clear();
+  }
+  const pos = new Int32Array(m);
+  for (let i = 0; i < m; i++) pos[order[i]!] = i;
+
+  // Slots for the filled structure, keyed by (earlier, later) in elimination order.
+  const slotMap = new Map<number, number>();
+  const key = (u: number, v: number) => (pos[u]! < pos[v]! ? u * m + v : v * m + u);
+  const colStart = new Int32Array(m);
+  let total = 0;
+  for (let i = 0; i < m; i++) {
+    const v = order[i]!;
+    const pat = patterns[v]!;
+    pat.sort((a, b) => pos[a]! - pos[b]!);
+    colStart[v] = total;
+    total += pat.length;
+  }
+  const colRows = new Int32Array(total);
+  const colSlots = new Int32Array(total);
+  const colEnd = new Int32Array(m);
+  let slot = 0;
+  for (let v = 0; v < m; v++) {
+    const pat = patterns[v] ?? [];
+    let at = colStart[v]!;
+    for (const u of pat) {
+      colRows[at] = u;
+      colSlots[at] = slot;
+      slotMap.set(key(v, u), slot++);
+      at++;
+    }
+    colEnd[v] = at;
+  }
+  let updCount = 0;
+  for (let v = 0; v < m; v++) {
+    const d = (patterns[v] ?? []).length;
+    updCount += (d * (d + 1)) / 2;
+  }
+  const updStart = new Int32Array(m + 1);
+  const updA = new Int32Array(updCount);
+  const updB = new Int32Array(updCount);
+  const updTarget = new Int32Array(updCount);
+  let w = 0;
+  for (let v = 0; v < m; v++) {
+    updStart[v] = w;
+    const s = colStart[v]!;
+    const e = colEnd[v]!;
+    for (let a = s; a < e; a++) {
+      for (let b = a; b < e; b++) {
+        const ra = colRows[a]!;
+        const rb = colRows[b]!;
+        updA[w] = a;
+        updB[w] = b;
+        updTarget[w] = a === b ? -1 - ra : slotMap.get(key(ra, rb))!;
+        w++;
+      }
+    }
+  }
+  updStart[m] = w;
+  return {
+    m,
+    order,
+    colStart,
+    colEnd,
+    colRows,
+    colSlots,
+    updStart,
+    updA,
+    updB,
+    updTarget,
+    slotCount: slot,
+    slotOf: (u, v) => (u === v ? -1 : (slotMap.get(key(u, v)) ?? -1)),
+  };
+}
