@@ -1,6 +1,9 @@
 import Link from "next/link";
 import { Logo } from "@/components/brand/logo";
 import { buttonClass } from "@/components/ui/button";
+import { DemoRoles } from "@/components/auth/demo-roles";
+import { config } from "@/lib/config";
+import { getCurrentUser } from "@/lib/auth/session";
 
 const steps = [
   { title: "Draw the plant room", body: "Heat pump or boiler, pumps, zone valves, bypass, buffer, cylinder and emitters on one canvas, piped port to port." },
@@ -9,14 +12,18 @@ const steps = [
   { title: "Review, issue, build", body: "Comments pinned to parts, approval, an issued revision for site, and a phone-first site sheet for pressure tests and commissioning." },
 ];
 
-export default function LandingPage() {
+export const dynamic = "force-dynamic";
+
+export default async function LandingPage() {
+  const user = await getCurrentUser();
   return (
     <main className="mx-auto max-w-5xl px-5 py-10 sm:py-16">
       <header className="flex items-center gap-3">
         <Logo className="h-9 w-9" />
         <span className="text-xl font-semibold tracking-tight">Loopwright</span>
         <nav className="ml-auto flex gap-2">
-          <Link href="/projects" className={buttonClass("secondary")}>Projects</Link>
+          {user ? <Link href="/projects" className={buttonClass("secondary")}>Projects</Link>
+            : <Link href="/sign-in" className={buttonClass("secondary")}>Sign in</Link>}
         </nav>
       </header>
 
@@ -30,7 +37,9 @@ export default function LandingPage() {
         </p>
         <div className="mt-8 flex flex-wrap gap-3">
           <Link href="/projects" className={buttonClass("primary", "px-5 py-3 text-base")}>Open your projects</Link>
+          {!user && <Link href="/sign-up" className={buttonClass("secondary", "px-5 py-3 text-base")}>Create an account</Link>}
         </div>
+        {config.demoSignIn && <DemoRoles />}
       </section>
 
       <section className="mt-16 grid gap-4 sm:grid-cols-2">

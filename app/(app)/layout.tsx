@@ -1,9 +1,20 @@
+import { headers } from "next/headers";
+import { redirect } from "next/navigation";
 import { AppHeader } from "@/components/shell/app-header";
+import { UserMenu } from "@/components/shell/user-menu";
+import { getCurrentUser } from "@/lib/auth/session";
 
-export default function AppLayout({ children }: { children: React.ReactNode }) {
+// Everything under (app) needs a signed-in person; project-level roles are checked by
+// each page and action through lib/auth/authorize.ts.
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  const user = await getCurrentUser();
+  if (!user) {
+    const path = (await headers()).get("x-lw-path") ?? "/projects";
+    redirect(`/sign-in?next=${encodeURIComponent(path)}`);
+  }
   return (
     <div className="flex min-h-screen flex-col">
-      <AppHeader />
+      <AppHeader right={<UserMenu name={user.name} email={user.email} />} />
       <div className="flex-1">{children}</div>
     </div>
   );

@@ -16,14 +16,14 @@ const id = z
   .regex(/^[^.\s]+$/, "an id may not contain dots or spaces")
   .describe("identifier, unique among parts and pipes");
 
-function part<T extends PartType, S extends (typeof P)[T]>(type: T, props: S) {
+function part<T extends PartType, S extends z.ZodObject>(type: T, props: S) {
   return z.looseObject({
     id,
     type: z.literal(type),
     x: z.number().default(0).describe("drawing position x"),
     y: z.number().default(0).describe("drawing position y"),
     label: z.string().max(200).optional(),
-    props: props.prefault({}),
+    props: props.prefault({} as z.input<S>),
   });
 }
 

@@ -32,10 +32,17 @@ function dataset(kind: GlycolKind): GlycolDataset {
   return kind === "propylene-glycol" ? propyleneGlycolByVolume : ethyleneGlycolByVolume;
 }
 
-/** Index i with grid[i] ≤ x ≤ grid[i+1] (grid ascending, x inside). */
+/** Index i with grid[i] ≤ x < grid[i+1] (last interval for x = last node; grid ascending, x inside). */
 function bracket(grid: readonly number[], x: number): number {
-  for (let i = 0; i < grid.length - 2; i++) if (x <= grid[i + 1]!) return i;
+  for (let i = 0; i < grid.length - 2; i++) if (x < grid[i + 1]!) return i;
   return grid.length - 2;
+}
+
+/** a + w·(b − a), skipping a side whose weight is 0 (so a node needs only its own cell). */
+function lerp(a: number | null, b: number | null, w: number): number | null {
+  if (w === 0) return a;
+  if (w === 1) return b;
+  return a == null || b == null ? null : a + w * (b - a);
 }
 
 function checkPercent(percentByVolume: number): void {
@@ -65,12 +72,9 @@ function tableRow(table: GlycolTable, rowIndex: number): Row {
   const row = table[rowIndex]!;
   return (tC) => {
     const j = bracket(GLYCOL_TABLE_TEMPS_C, tC);
-    const a = row[j];
-    const b = row[j + 1];
-    if (a == null || b == null) return null;
     const t0 = GLYCOL_TABLE_TEMPS_C[j]!;
     const w = (tC - t0) / (GLYCOL_TABLE_TEMPS_C[j + 1]! - t0);
-    return a + w * (b - a);
+    return lerp(row[j] ?? null, row[j + 1] ?? null, w);
   };
 }
 
@@ -78,12 +82,13 @@ const inWaterRange = (f: (tC: number) => number): Row => (tC) => (tC >= 0 ? f(tC
 
 function interpolate(rows: (pctIndex: number) => Row, percent: number, tC: number, log: boolean): number | null {
   const i = bracket(PERCENT_GRID, percent);
-  const a = rows(i)(tC);
-  const b = rows(i + 1)(tC);
-  if (a == null || b == null) return null;
   const x0 = PERCENT_GRID[i]!;
   const w = (percent - x0) / (PERCENT_GRID[i + 1]! - x0);
-  return log ? Math.exp(Math.log(a) + w * (Math.log(b) - Math.log(a))) : a + w * (b - a);
+  const a = w === 1 ? null : rows(i)(tC);
+  const b = w === 0 ? null : rows(i + 1)(tC);
+  if (!log) return lerp(a, b, w);
+  const r = lerp(a == null ? null : Math.log(a), b == null ? null : Math.log(b), w);
+  return r == null ? null : Math.exp(r);
 }
 
 export interface GlycolProperties {

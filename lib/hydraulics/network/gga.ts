@@ -150,7 +150,7 @@ export function solveNetwork(
     // Piecewise links (bypass opening, check valves) can make plain Newton
     // cycle; halve the step when the error stops shrinking (EPANET's
     // DAMPLIMIT option does the same kind of thing).
-    if (it > 8 && ratio > 0.5 * lastRatio) relax = Math.max(0.3, relax * 0.7);
+    if (it > 8 && ratio >= lastRatio) relax = Math.max(0.3, relax * 0.7);
     lastRatio = ratio;
   }
   return { q, head, iterations, converged, factorOk };

@@ -55,6 +55,7 @@ export function pipePressureDrop(input: PipePressureDropInput): PipePressureDrop
   positive("densityKgM3", densityKgM3, false);
   positive("kinematicViscosityM2s", kinematicViscosityM2s, false);
   positive("sumK", sumK, true);
+  if (!(roughnessM < innerDiameterM)) throw new RangeError(`roughnessM ${roughnessM} must be below innerDiameterM ${innerDiameterM}`);
   const area = (Math.PI * innerDiameterM * innerDiameterM) / 4;
   const velocityMps = flowM3s / area;
   const re = (Math.abs(velocityMps) * innerDiameterM) / kinematicViscosityM2s;

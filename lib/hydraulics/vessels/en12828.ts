@@ -21,6 +21,8 @@ export interface En12828Input {
   densityKgM3?: number;
   /** Margin added to the static pressure for the pre-charge, bar (default 0.2, EN 12828 minimum). */
   prechargeMarginBar?: number;
+  /** Floor on the pre-charge, bar g (default 0 = none; DE practice 0.7–0.8 bar, common practice). */
+  minimumPrechargeBar?: number;
 }
 
 export interface En12828Result {
@@ -30,7 +32,7 @@ export interface En12828Result {
   waterReserveL: number;
   /** Static pressure p_st at the vessel, bar g. */
   staticPressureBar: number;
-  /** p_0 = p_st + p_D + margin (p_D = 0, vapour pressure below 100 °C), bar g. */
+  /** p_0 = max(p_st + p_D + margin, minimumPrechargeBar) (p_D = 0: vapour pressure, nil below 100 °C), bar g. */
   prechargeBar: number;
   /** p_e = p_SV − 0.5 bar (p_SV ≤ 5 bar) or 0.9·p_SV (p_SV > 5 bar), bar g. */
   finalPressureBar: number;
@@ -78,7 +80,9 @@ export function en12828Vessel(input: En12828Input): En12828Result {
   if (input.densityKgM3 !== undefined) check("densityKgM3", input.densityKgM3, 0, true);
   const staticPressureBar =
     input.densityKgM3 === undefined ? staticHeightM / 10 : (input.densityKgM3 * 9.80665 * staticHeightM) / 1e5;
-  const prechargeBar = staticPressureBar + margin;
+  const floor = input.minimumPrechargeBar ?? 0;
+  check("minimumPrechargeBar", floor, 0, false);
+  const prechargeBar = Math.max(staticPressureBar + margin, floor);
   const finalPressureBar = en12828FinalPressureBar(safetyValveBar);
   if (!(finalPressureBar > prechargeBar)) {
     throw new RangeError(

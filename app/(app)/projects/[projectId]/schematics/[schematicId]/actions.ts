@@ -1,0 +1,104 @@
+"use server";
+
+import { z } from "zod";
+import { audit } from "@/lib/audit";
+import { requireProjectRole, requireSchematicAccess, requireUser } from "@/lib/auth/authorize";
+import { requestIp } from "@/lib/auth/request-context";
+import * as q from "@/db/queries/schematics";
+import { saveUserUnits } from "@/db/queries/user-preferences";
+import { parseSchematic } from "@/lib/schematic";
+import { invalidDocument, refusal, Refused, runChecked } from "@/lib/persistence/outcome";
+import { size } from "@/lib/persistence/size";
+import { findTransition, revisionStatuses } from "@/lib/revisions/transitions";
+import { unitPrefsSchema } from "@/lib/units/display";
+
+// Server actions of the drawing board. Each: zod-check the envelope, check the role
+// through lib/auth, validate the document with the engine's own parser (issues name
+// JSON paths), then one call into db/queries. Errors come back as ActionResult.
+
+const uuid = z.uuid("must be a schematic id");
+const lockVersion = z.number().int().min(1);
+
+export async function autosaveDraft(input: { schematicId: string; lockVersion: number; doc: unknown }) {
+  return runChecked(async () => {
+    const i = z.object({ schematicId: uuid, lockVersion, doc: z.unknown() }).parse(input);
+    const { user } = await requireSchematicAccess(i.schematicId, "edit");
+    const parsed = parseSchematic(i.doc);
+    if (!parsed.ok) return invalidDocument(parsed.issues);
+    const r = await q.saveDraft({ schematicId: i.schematicId, lockVersion: i.lockVersion, doc: parsed.doc, userId: user.id });
+    return r.ok ? r : refusal(r);
+  });
+}
+
+export async function saveRevision(input: { schematicId: string; lockVersion: number; doc: unknown; message: string }) {
+  return runChecked(async () => {
+    const i = z.object({ schematicId: uuid, lockVersion, doc: z.unknown(), message: z.string().trim().min(1, "say what changed").max(2000) }).parse(input);
+    const access = await requireSchematicAccess(i.schematicId, "edit");
+    if (access.schematic.kind === "team") await requireProjectRole(access.schematic.projectId, "revision.save");
+    const parsed = parseSchematic(i.doc);
+    if (!parsed.ok) return invalidDocument(parsed.issues);
+    const r = await q.saveRevision({ ...i, doc: parsed.doc, userId: access.user.id });
+    return r.ok ? r : refusal(r);
+  });
+}
+
+export async function setRevisionStatus(input: { revisionId: string; status: string }) {
+  return runChecked(async () => {
+    const i = z.object({ revisionId: z.uuid(), status: z.enum(revisionStatuses) }).parse(input);
+    const revision = await q.getRevision(i.revisionId);
+    if (!revision) return new Refused(404, "Revision not found.");
+    const move = findTransition(revision.status, i.status);
+    if (!move) return new Refused(409, `A revision cannot move from ${revision.status} to ${i.status}.`);
+    const { user } = await requireProjectRole(revision.projectId, move.action);
+    await requireSchematicAccess(revision.schematicId, "read");
+    const r = await q.setRevisionStatus({ revisionId: i.revisionId, from: revision.status, to: i.status });
+    if (!r.ok) return new Refused(409, "Someone changed this revision's status first; reload to see it.");
+    await audit({ actorId: user.id, action: "revision.status", projectId: revision.projectId, target: i.revisionId,
+      detail: { schematicId: revision.schematicId, number: revision.number, from: revision.status, to: i.status }, ip: await requestIp() });
+    return r.revision;
+  });
+}
+
+/** A copy of the given document as a new schematic: a team variant for designers, a private practice one otherwise. */
+export async function saveAsVariant(input: { schematicId: string; doc: unknown; name: string }) {
+  return runChecked(async () => {
+    const i = z.object({ schematicId: uuid, doc: z.unknown(), name: z.string().trim().min(1).max(160) }).parse(input);
+    const { user, role, schematic } = await requireSchematicAccess(i.schematicId, "read");
+    const { role: allowed } = await requireProjectRole(schematic.projectId, role === "trainee" ? "variant.practice" : "schematic.edit");
+    const parsed = parseSchematic(i.doc);
+    if (!parsed.ok) return invalidDocument(parsed.issues);
+    const name = await q.freeSchematicName(schematic.projectId, i.name);
+    const r = await q.createSchematic({ projectId: schematic.projectId, name, doc: parsed.doc, userId: user.id,
+      kind: allowed === "trainee" ? "practice" : "team", variantOf: schematic.id });
+    return r.ok ? { id: r.schematic.id, name: r.schematic.name, projectId: r.schematic.projectId } : refusal(r);
+  });
+}
+
+export async function startNewDraft(input: { schematicId: string }) {
+  return runChecked(async () => {
+    const i = z.object({ schematicId: uuid }).parse(input);
+    const { user } = await requireSchematicAccess(i.schematicId, "edit");
+    const r = await q.startNewDraft({ schematicId: i.schematicId, userId: user.id });
+    return r.ok ? r : refusal(r);
+  });
+}
+
+/** Runs the engine on the board's current document; with a schematicId the caller must be allowed to size it. */
+export async function sizeSchematic(input: { schematicId?: string; doc: unknown }) {
+  return runChecked(async () => {
+    const i = z.object({ schematicId: uuid.optional(), doc: z.unknown() }).parse(input);
+    if (i.schematicId) await requireSchematicAccess(i.schematicId, "size");
+    else await requireUser();
+    const r = size(i.doc);
+    return r.ok ? r.results : invalidDocument(r.issues);
+  });
+}
+
+export async function saveUnitPreference(input: unknown) {
+  return runChecked(async () => {
+    const units = unitPrefsSchema.parse(input);
+    const user = await requireUser();
+    await saveUserUnits(user.id, units);
+    return units;
+  });
+}

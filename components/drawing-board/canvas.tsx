@@ -1,0 +1,132 @@
+"use client";
+/**
+ * The drawing canvas: parts as xyflow nodes, pipes as edges, both derived
+ * from the store's document. Positions live in local state only while a drag
+ * runs; the drop commits one move-parts command (one undo step).
+ */
+import "@xyflow/react/dist/style.css";
+import "./board.css";
+import { useCallback, useEffect, useState, type DragEvent } from "react";
+import {
+  applyNodeChanges, Background, BackgroundVariant, ConnectionMode, Controls, MiniMap, ReactFlow, useReactFlow, useStore,
+  type Connection, type Edge, type IsValidConnection, type OnNodesChange, type OnSelectionChangeFunc,
+} from "@xyflow/react";
+import { partTypes, type PartType } from "@/lib/schematic";
+import { connectionProblem } from "./commands";
+import { PartNodeView, type PartNode } from "./nodes/part-node";
+import { PipeEdgeView } from "./pipes/pipe-edge";
+import { CanvasHint } from "./canvas-hint";
+import { HelpOverlay } from "./help-overlay";
+import { useBoard, useBoardStore } from "./store";
+import { useBoardKeys } from "./use-board-keys";
+import { usePartNodes, usePipeEdges } from "./use-canvas-model";
+
+// module scope: a new object per render would make xyflow remount every node
+const nodeTypes = { part: PartNodeView };
+const edgeTypes = { pipe: PipeEdgeView };
+export const GRID = 20;
+export const PART_MIME = "application/x-loopwright-part";
+
+const refOf = (node: string, handle: string | null | undefined) => `${node}.${handle ?? ""}`;
+
+export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOpen: (open: boolean) => void }) {
+  const store = useBoardStore();
+  const readOnly = useBoard((s) => s.readOnly);
+  const derived = usePartNodes();
+  const edges = usePipeEdges();
+  const [nodes, setNodes] = useState<PartNode[]>(derived);
+  useEffect(() => setNodes(derived), [derived]);
+  const flow = useReactFlow();
+  // port names are small print: hide them when zoomed far out
+  const far = useStore((s) => s.transform[2] < 0.7);
+
+  const onNodesChange: OnNodesChange<PartNode> = useCallback((changes) => setNodes((ns) => applyNodeChanges(changes, ns)), []);
+  const onNodeDragStop = useCallback(
+    (_: unknown, _node: PartNode, dragged: PartNode[]) =>
+      store.getState().dispatch("move-parts", { moves: dragged.map((n) => ({ id: n.id, x: n.position.x, y: n.position.y })) }),
+    [store],
+  );
+  const onSelectionChange: OnSelectionChangeFunc = useCallback(
+    ({ nodes: ns, edges: es }) => store.getState().setSelection(ns.map((n) => n.id), es.map((e) => e.id)),
+    [store],
+  );
+  const isValidConnection: IsValidConnection = useCallback(
+    (c: Connection | Edge) => {
+      const problem = connectionProblem(store.getState().doc, refOf(c.source, c.sourceHandle), refOf(c.target, c.targetHandle));
+      if (problem) store.getState().setHint(problem);
+      return problem === null;
+    },
+    [store],
+  );
+  const onConnect = useCallback(
+    (c: Connection) => store.getState().dispatch("connect-pipe", { from: refOf(c.source, c.sourceHandle), to: refOf(c.target, c.targetHandle) }),
+    [store],
+  );
+  const onDragOver = useCallback((e: DragEvent) => {
+    if (e.dataTransfer.types.includes(PART_MIME)) {
+      e.preventDefault();
+      e.dataTransfer.dropEffect = "copy";
+    }
+  }, []);
+  const onDrop = useCallback(
+    (e: DragEvent) => {
+      const type = e.dataTransfer.getData(PART_MIME) as PartType;
+      if (!partTypes.includes(type)) return;
+      e.preventDefault();
+      const p = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+      store.getState().dispatch("add-part", { type, x: Math.round(p.x / GRID) * GRID, y: Math.round(p.y / GRID) * GRID });
+    },
+    [flow, store],
+  );
+  const onView = useCallback(
+    (a: "help" | "clear-selection" | "fit-view") => {
+      if (a === "help") setHelpOpen(!helpOpen);
+      if (a === "clear-selection") {
+        setHelpOpen(false);
+        store.getState().setSelection([], []);
+      }
+    },
+    [helpOpen, setHelpOpen, store],
+  );
+  useBoardKeys(onView);
+
+  return (
+    <div className={`lw-canvas relative h-full w-full ${far ? "lw-far" : ""}`} data-testid="board-canvas">
+      <ReactFlow<PartNode>
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={nodeTypes}
+        edgeTypes={edgeTypes}
+        onNodesChange={onNodesChange}
+        onNodeDragStop={onNodeDragStop}
+        onSelectionChange={onSelectionChange}
+        onConnect={onConnect}
+        isValidConnection={isValidConnection}
+        onConnectEnd={() => setTimeout(() => store.getState().setHint(store.getState().hint), 0)}
+        onDragOver={onDragOver}
+        onDrop={onDrop}
+        connectionMode={ConnectionMode.Loose}
+        nodeOrigin={[0.5, 0.5]}
+        snapToGrid
+        snapGrid={[GRID, GRID]}
+        onlyRenderVisibleElements
+        fitView
+        fitViewOptions={{ padding: 0.1 }}
+        minZoom={0.05}
+        maxZoom={3}
+        deleteKeyCode={null}
+        multiSelectionKeyCode={["Shift", "Meta", "Control"]}
+        nodesDraggable={!readOnly}
+        nodesConnectable={!readOnly}
+        elevateEdgesOnSelect
+        connectionLineStyle={{ stroke: "#b4632b", strokeWidth: 2 }}
+      >
+        <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#d9d1c4" />
+        <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />
+        <Controls showInteractive={false} />
+      </ReactFlow>
+      <CanvasHint />
+      {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
+    </div>
+  );
+}

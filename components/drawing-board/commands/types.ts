@@ -1,0 +1,52 @@
+import type { Part, Pipe, Results, Schematic, Severity } from "@/lib/schematic";
+import type { Orientation } from "../parts/orientation";
+
+export interface Selection {
+  parts: string[];
+  pipes: string[];
+}
+
+/** A copied selection: parts plus the pipes running between them. */
+export interface Clipboard {
+  kind: "loopwright/clipboard";
+  parts: Part[];
+  pipes: Pipe[];
+}
+
+export interface BoardState {
+  doc: Schematic;
+  selection: Selection;
+  past: Schematic[];
+  future: Schematic[];
+  /** +1 on every document change (commands, undo, redo); autosave watches it. */
+  revision: number;
+  clipboard: Clipboard | null;
+  results: Results | null;
+  /** Worst finding severity per part/pipe id, derived from results. */
+  findings: Map<string, Severity>;
+  /** The document changed since results were computed. */
+  resultsStale: boolean;
+  readOnly: boolean;
+  /** Short message shown on the canvas (e.g. why a connection was refused). */
+  hint: string | null;
+  /** Orientation of parts that carry none, recomputed when pipes change (parts/orientation.ts). */
+  autoOrient: Map<string, Orientation>;
+  /** Successive pastes step further away from the original. */
+  pasteCount: number;
+}
+
+export type CommandOutcome = Partial<BoardState> | { refused: string } | null;
+
+export interface Command<A = void> {
+  id: string;
+  label: string;
+  /** Shortcut shown in the help overlay and bound by the canvas, e.g. "Mod+Z". */
+  keys?: string[];
+  /** Whether a document change from this command becomes an undo step. */
+  recordsHistory: boolean;
+  /** Refused on read-only boards. */
+  changesDoc: boolean;
+  perform(state: BoardState, args: A): CommandOutcome;
+}
+
+export type DispatchResult = { ok: true } | { ok: false; reason: string };

@@ -1,0 +1,41 @@
+"use client";
+
+import { useState } from "react";
+import { sizeSchematic } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { Button } from "@/components/ui/button";
+import { useBoardSession } from "../persistence/session-context";
+import { useBoardStore, useBoard } from "../store";
+
+/** "Size it": runs the sizing server action on the document as drawn now and puts the answer in the store. */
+export function SizeItButton() {
+  const store = useBoardStore();
+  const { schematicId, canSize } = useBoardSession();
+  const stale = useBoard((s) => s.resultsStale);
+  const sized = useBoard((s) => s.results !== null);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  if (!canSize) return null;
+
+  const run = async () => {
+    setBusy(true);
+    setError(null);
+    try {
+      const r = await sizeSchematic({ schematicId, doc: store.getState().doc });
+      if (r.ok) store.getState().setResults(r.data);
+      else setError(r.error);
+    } catch {
+      setError("Could not reach the server to size the schematic.");
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <span className="inline-flex items-center gap-2">
+      <Button onClick={run} disabled={busy} className="px-3 py-1.5" data-testid="size-it">
+        {busy ? "Sizing…" : sized && stale ? "Size it again" : "Size it"}
+      </Button>
+      {error && <span role="alert" className="max-w-xs truncate text-xs text-fault" title={error}>{error}</span>}
+    </span>
+  );
+}

@@ -1,0 +1,121 @@
+/**
+ * The drawing board's state: one zustand vanilla store per board (created by
+ * `createBoardStore`, provided once with useRef in BoardStoreProvider). Every
+ * document change goes through a registered command (commands/index.ts), so
+ * undo history, the revision counter and "results are stale" stay in one place.
+ */
+import { createContext, createElement, useContext, useRef, type ReactNode } from "react";
+import { createStore, useStore, type StoreApi } from "zustand";
+import type { Results, Schematic, Severity } from "@/lib/schematic";
+import { commands, type CommandArgs, type CommandId } from "./commands";
+import type { BoardState, DispatchResult } from "./commands/types";
+import { autoOrient } from "./parts/orientation";
+
+export type { BoardState, Selection, Clipboard } from "./commands/types";
+
+/** Undo keeps this many document snapshots (they share unchanged parts, so they are cheap). */
+export const HISTORY_LIMIT = 100;
+
+export interface BoardActions {
+  dispatch<K extends CommandId>(id: K, ...args: CommandArgs<K> extends void ? [] : [CommandArgs<K>]): DispatchResult;
+  setSelection(parts: string[], pipes: string[]): void;
+  setResults(results: Results | null): void;
+  setHint(hint: string | null): void;
+  /** E.g. after "start a new draft" on an issued revision. */
+  setReadOnly(readOnly: boolean): void;
+}
+export type BoardStore = StoreApi<BoardState & BoardActions>;
+
+const rank: Record<Severity, number> = { info: 0, warning: 1, error: 2 };
+
+/** Worst finding per referenced id, so each node looks its marker up in O(1). */
+export function findingsIndex(results: Results | null): Map<string, Severity> {
+  const map = new Map<string, Severity>();
+  for (const f of results?.findings ?? []) {
+    for (const ref of f.refs) {
+      const prev = map.get(ref);
+      if (!prev || rank[f.severity] > rank[prev]) map.set(ref, f.severity);
+    }
+  }
+  return map;
+}
+
+// order-insensitive: the canvas reports selections in document order, commands in their own
+const sameIds = (a: string[], b: string[]) => a.length === b.length && (a.every((x, i) => x === b[i]) || (new Set(a).size === a.length && b.every((x) => a.includes(x))));
+
+export function createBoardStore(initialDoc: Schematic, opts: { readOnly: boolean } = { readOnly: false }): BoardStore {
+  return createStore<BoardState & BoardActions>()((set, get) => ({
+    doc: initialDoc,
+    selection: { parts: [], pipes: [] },
+    past: [],
+    future: [],
+    revision: 0,
+    clipboard: null,
+    results: null,
+    findings: new Map(),
+    resultsStale: false,
+    readOnly: opts.readOnly,
+    hint: null,
+    pasteCount: 0,
+    autoOrient: autoOrient(initialDoc),
+    dispatch(id, ...rest) {
+      const cmd = commands[id];
+      const state = get();
+      if (state.readOnly && cmd.changesDoc) return { ok: false, reason: "This schematic is read-only." };
+      const out = cmd.perform(state, rest[0] as never);
+      if (out === null) return { ok: true };
+      if ("refused" in out) {
+        set({ hint: out.refused });
+        return { ok: false, reason: out.refused };
+      }
+      const patch: Partial<BoardState> = { ...out };
+      if (out.doc && out.doc !== state.doc) {
+        if (cmd.recordsHistory) {
+          patch.past = [...state.past, state.doc].slice(-HISTORY_LIMIT);
+          patch.future = [];
+        }
+        patch.revision = state.revision + 1;
+        if (state.results) patch.resultsStale = true;
+        if (out.doc.pipes !== state.doc.pipes) patch.autoOrient = autoOrient(out.doc);
+      }
+      set(patch);
+      return { ok: true };
+    },
+    setSelection(parts, pipes) {
+      const s = get().selection;
+      if (sameIds(s.parts, parts) && sameIds(s.pipes, pipes)) return;
+      set({ selection: { parts, pipes } });
+    },
+    setResults(results) {
+      set({ results, findings: findingsIndex(results), resultsStale: false });
+    },
+    setHint(hint) {
+      if (get().hint !== hint) set({ hint });
+    },
+    setReadOnly(readOnly) {
+      set({ readOnly });
+    },
+  }));
+}
+
+export const BoardContext = createContext<BoardStore | null>(null);
+
+/** Creates the store once for the board's lifetime; a new initialDoc needs a new key. */
+export function BoardStoreProvider(props: { initialDoc: Schematic; readOnly: boolean; store?: BoardStore; children: ReactNode }) {
+  const ref = useRef<BoardStore | null>(null);
+  ref.current ??= props.store ?? createBoardStore(props.initialDoc, { readOnly: props.readOnly });
+  return createElement(BoardContext.Provider, { value: ref.current }, props.children);
+}
+
+export function useBoardStore(): BoardStore {
+  const store = useContext(BoardContext);
+  if (!store) throw new Error("useBoard must be used inside <BoardStoreProvider>");
+  return store;
+}
+
+/** Read a slice of board state; re-renders only when the selected value changes (Object.is). */
+export function useBoard<T>(selector: (s: BoardState & BoardActions) => T): T {
+  return useStore(useBoardStore(), selector);
+}
+
+export const useDispatch = () => useBoard((s) => s.dispatch);

@@ -1,0 +1,55 @@
+// The role → action policy table from product.md ("Who uses it"). Pure data and one
+// function, safe to import from client components to hide what a role cannot do.
+// Server-side enforcement goes through lib/auth/authorize.ts, which uses this table.
+
+export const projectRoles = ["owner", "designer", "reviewer", "installer", "trainee"] as const;
+export type ProjectRole = (typeof projectRoles)[number];
+
+export const actions = [
+  "project.read", "project.update", "project.delete", "members.manage",
+  "schematic.read", "schematic.edit", "schematic.size", "variant.practice", "variant.compare",
+  "revision.save", "revision.submit", "revision.review", "revision.issue",
+  "comment.write", "site.read", "site.record",
+] as const;
+export type Action = (typeof actions)[number];
+
+const R = true;
+// owner: everything. designer: schematics, variants, sizing, submit and issue.
+// reviewer: read everything, comment, approve/send back. installer: issued revision and
+// site sheet. trainee: read, private practice variants, size them, compare any two.
+const table: Record<ProjectRole, Partial<Record<Action, true>>> = {
+  owner: Object.fromEntries(actions.map((a) => [a, R])),
+  designer: {
+    "project.read": R, "project.update": R, "schematic.read": R, "schematic.edit": R, "schematic.size": R,
+    "variant.practice": R, "variant.compare": R, "revision.save": R, "revision.submit": R, "revision.issue": R,
+    "comment.write": R, "site.read": R,
+  },
+  reviewer: {
+    "project.read": R, "schematic.read": R, "variant.compare": R, "revision.review": R, "comment.write": R, "site.read": R,
+  },
+  installer: { "project.read": R, "schematic.read": R, "site.read": R, "site.record": R },
+  trainee: { "project.read": R, "schematic.read": R, "schematic.size": R, "variant.practice": R, "variant.compare": R, "site.read": R },
+};
+
+export function can(role: ProjectRole, action: Action): boolean {
+  return table[role]?.[action] === true;
+}
+
+export function isProjectRole(value: unknown): value is ProjectRole {
+  return typeof value === "string" && (projectRoles as readonly string[]).includes(value);
+}
+
+/** Words for messages: "project.delete" → "delete the project". */
+export const actionWords: Record<Action, string> = {
+  "project.read": "open this project", "project.update": "change the project's details", "project.delete": "delete the project",
+  "members.manage": "manage members and invitations", "schematic.read": "read this schematic", "schematic.edit": "edit the team's schematics",
+  "schematic.size": "run sizing", "variant.practice": "make practice variants", "variant.compare": "compare variants",
+  "revision.save": "save revisions", "revision.submit": "submit a revision for review", "revision.review": "approve or send back a revision",
+  "revision.issue": "issue an approved revision", "comment.write": "write comments", "site.read": "read the site sheet",
+  "site.record": "record site work",
+};
+
+/** Roles that may do an action, for "needs owner or designer" messages. */
+export function rolesThatCan(action: Action): ProjectRole[] {
+  return projectRoles.filter((r) => can(r, action));
+}

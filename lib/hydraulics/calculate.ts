@@ -1,0 +1,107 @@
+/**
+ * The engine's entry point: schematic JSON in, Results out (contract v1).
+ * parse → model → topology and plant findings → design modes (heating,
+ * hot-water) → bypass → scenarios → vessel, volume, emitters, hot water.
+ * Plain data in and out; no module state; never a NaN or Infinity in the
+ * answer (a number that cannot be computed is null with a finding).
+ */
+import { parseSchematic, type Issue } from "@/lib/schematic/parse";
+import type { Results } from "@/lib/schematic/results";
+import type { Schematic } from "@/lib/schematic/schema";
+import { Findings } from "./findings/finding";
+import { plantFindings } from "./findings/plant";
+import { topologyFindings } from "./findings/topology";
+import { runScenarios } from "./scenarios/run";
+import { scenarioList } from "./scenarios/list";
+import { simulate } from "./scenarios/simulate";
+import { scenarioState } from "./scenarios/run";
+import { sizeBypasses } from "./sizing/bypass";
+import { createContext, type EngineContext } from "./sizing/context";
+import { emitterResults, hotWaterResult } from "./sizing/emitters";
+import { runMode, type ModeRun } from "./sizing/mode";
+import { systemVolumeL, vesselResult, volumeResult } from "./sizing/vessel";
+
+export const ENGINE_VERSION = "1.0.0";
+
+export type CalculateResult = { ok: true; results: Results } | { ok: false; issues: Issue[] };
+
+export function calculate(input: unknown): CalculateResult {
+  const parsed = parseSchematic(input);
+  if (!parsed.ok) return parsed;
+  return { ok: true, results: calculateSchematic(parsed.doc) };
+}
+
+function minFlowCheck(ctx: EngineContext, flowM3h: number | null, when: string): boolean | null {
+  const sources = ctx.doc.parts.filter((p) => p.type === "heat-pump" || p.type === "boiler");
+  const min = Math.max(0, ...sources.map((p) => (p.props as { minFlowM3h: number }).minFlowM3h));
+  if (flowM3h === null || sources.length === 0) return null;
+  const ok = flowM3h >= min;
+  if (!ok) {
+    ctx.findings.warning(
+      "heat-source.min-flow",
+      `heat source gets ${flowM3h.toFixed(3)} m³/h ${when}, below its minimum ${min} m³/h`,
+      sources.map((s) => s.id),
+    );
+  }
+  return ok;
+}
+
+function bypassSection(ctx: EngineContext, heating: ModeRun | null, warm: Float64Array | null, openings: Map<string, number | null>, sizings: ReturnType<typeof sizeBypasses>): Results["bypass"] {
+  const first = sizings[0];
+  if (!first) return null;
+  const zones = ctx.doc.parts.filter((p) => p.type === "zone-valve");
+  let flow: number | null = null;
+  if (heating && zones.length > 0) {
+    const spec = { name: "all zones shut", mode: "heating" as const, valves: Object.fromEntries(zones.map((z) => [z.id, false])) };
+    const sim = simulate(ctx, scenarioState(ctx, spec, openings), warm);
+    flow = 0;
+    ctx.model.links.forEach((l, k) => {
+      if (l.role === "heat-source") flow! += Math.abs(sim.q[k]!);
+    });
+    if (!Number.isFinite(flow)) flow = null;
+  }
+  const minFlowMet = minFlowCheck(ctx, flow, "with every zone valve shut");
+  return {
+    id: first.id,
+    recommendedOpeningKpa: first.recommendedOpeningKpa,
+    heatSourceFlowAllZonesClosedM3h: flow,
+    minFlowMet,
+  };
+}
+
+export function calculateSchematic(doc: Schematic): Results {
+  const findings = new Findings();
+  const ctx = createContext(doc, findings);
+  topologyFindings(doc, ctx.model, findings);
+  plantFindings(doc, ctx.model, findings);
+  const hydraulic = ctx.fluid !== null && ctx.deltaTK !== null;
+  const heating = hydraulic ? runMode(ctx, "heating") : null;
+  const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
+  const hotWater = hydraulic && hasCylinder ? runMode(ctx, "hot-water") : null;
+  if (heating) minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode");
+  const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];
+  const openings = new Map(sizings.map((s) => [s.id, s.openingKpa]));
+  const warm = heating ? heating.solution.q : null;
+  const scenarios = hydraulic ? runScenarios(ctx, scenarioList(ctx), openings, warm).results : [];
+  const bypass = hydraulic ? bypassSection(ctx, heating, warm, openings, sizings) : null;
+  const volumeL = systemVolumeL(ctx);
+  const fluid = ctx.fluid;
+  return {
+    engine: ENGINE_VERSION,
+    ok: true,
+    findings: findings.list,
+    fluid: {
+      temperatureC: (ctx.flowC + ctx.returnC) / 2,
+      densityKgM3: fluid?.densityKgM3 ?? null,
+      kinematicViscosityM2s: fluid?.kinematicViscosityM2s ?? null,
+      specificHeatJkgK: fluid?.specificHeatJkgK ?? null,
+    },
+    modes: [heating, hotWater].filter((m): m is ModeRun => m !== null).map((m) => m.result),
+    bypass,
+    expansionVessel: vesselResult(ctx, volumeL),
+    volume: volumeResult(ctx, volumeL),
+    emitters: emitterResults(ctx),
+    hotWater: hotWaterResult(ctx),
+    scenarios,
+  };
+}

@@ -1,0 +1,45 @@
+import { describe, expect, it } from "vitest";
+import { emitterAtFlow, en442ReturnTemperature } from "./emitter-at-flow";
+import { en442Output } from "./en442";
+
+const rad = { outputAtDt50W: 2000, exponentN: 1.3, roomC: 20, specificHeatJkgK: 4180 };
+
+describe("emitterAtFlow (heat balance Φ_EN442(t1, t2) = ṁ·cp·(t1 − t2))", () => {
+  it("at the design flow for 45/40/20 it returns 40 °C and the EN 442 output (0.3538 × Φ50, references.md §7)", () => {
+    const design = en442Output({ ...rad, flowC: 45, returnC: 40 });
+    expect(Math.abs(design / 2000 - 0.3538)).toBeLessThan(1e-4);
+    const m = design / (4180 * 5);
+    const out = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: m });
+    expect(out.returnC).toBeCloseTo(40, 6);
+    expect(out.outputW).toBeCloseTo(design, 3);
+  });
+  it("more flow → warmer return and more output; less flow → colder return and less output", () => {
+    const m = 0.0339;
+    const a = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: m / 2 });
+    const b = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: m });
+    const c = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: m * 2 });
+    expect(a.returnC).toBeLessThan(b.returnC);
+    expect(b.returnC).toBeLessThan(c.returnC);
+    expect(a.outputW).toBeLessThan(b.outputW);
+    expect(b.outputW).toBeLessThan(c.outputW);
+    // huge flow: return → flow, output → Φ at a mean of t1
+    const big = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 1e3 });
+    expect(big.returnC).toBeGreaterThan(44.99);
+    expect(Math.abs(big.outputW - en442Output({ ...rad, flowC: 45, returnC: 45 }))).toBeLessThan(1);
+  });
+  it("both sides of the balance agree at the solution", () => {
+    const out = emitterAtFlow({ ...rad, flowC: 55, massFlowKgs: 0.02 });
+    const phi = en442Output({ ...rad, flowC: 55, returnC: out.returnC });
+    expect(Math.abs(phi - out.outputW)).toBeLessThan(1e-3);
+    expect(en442ReturnTemperature({ ...rad, flowC: 55, massFlowKgs: 0.02 })).toBe(out.returnC);
+  });
+  it("no flow → no output, return at room; flow not above room → no output", () => {
+    expect(emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 0 })).toEqual({ outputW: 0, returnC: 20 });
+    expect(emitterAtFlow({ ...rad, flowC: 19, massFlowKgs: 0.02 })).toEqual({ outputW: 0, returnC: 19 });
+  });
+  it("throws RangeError naming the field", () => {
+    expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: -1 })).toThrow(/massFlowKgs/);
+    expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 0.02, specificHeatJkgK: 0 })).toThrow(/specificHeatJkgK/);
+    expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 0.02, exponentN: 3 })).toThrow(/exponentN/);
+  });
+});

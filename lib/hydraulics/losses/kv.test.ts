@@ -1,0 +1,41 @@
+import { describe, expect, it } from "vitest";
+import { cvToKv, kvDpDerivativePaPerM3h, kvForPressureDrop, kvPressureDropPa, kvToCv } from "./kv";
+
+// IEC 60534-1 definition of Kv (references.md §6, confirmed-in-search: Smith & Zappe, Valve
+// Selection Handbook p. 33). Worked examples are exact arithmetic of the definition → 1e-9.
+describe("Kv", () => {
+  it("0.5 m³/h through Kv 2.5 → 4.0 kPa (check #30)", () => {
+    expect(kvPressureDropPa(0.5, 2.5, 1000)).toBeCloseTo(4000, 6);
+  });
+  it("0.2 m³/h through Kv 0.63 → 10.08 kPa (printed to 4 digits)", () => {
+    expect(kvPressureDropPa(0.2, 0.63, 1000) / 1000).toBeCloseTo(10.08, 2);
+  });
+  it("required Kv for 0.6 m³/h at 10 kPa → 1.897 (printed to 4 digits)", () => {
+    expect(kvForPressureDrop(0.6, 10_000, 1000)).toBeCloseTo(1.897, 3);
+  });
+  it("published example: 20 m³/h at 4 bar, SG 1 → Kv 10 (confirmed-in-search)", () => {
+    expect(kvForPressureDrop(20, 4e5, 1000)).toBeCloseTo(10, 9);
+  });
+  it("density scales Δp linearly (definition ρ/ρ0) and Δp has the sign of the flow", () => {
+    expect(kvPressureDropPa(0.5, 2.5, 980)).toBeCloseTo(4000 * 0.98, 6);
+    expect(kvPressureDropPa(-0.5, 2.5, 1000)).toBeCloseTo(-4000, 6);
+    expect(kvPressureDropPa(0, 2.5, 1000)).toBe(0);
+  });
+  it("derivative 2·Δp/Q", () => {
+    expect(kvDpDerivativePaPerM3h(0.5, 2.5, 1000)).toBeCloseTo((2 * 4000) / 0.5, 6);
+  });
+  it("throws RangeError naming the argument", () => {
+    expect(() => kvPressureDropPa(0.5, 0, 1000)).toThrow(/kv/);
+    expect(() => kvForPressureDrop(0.5, 0, 1000)).toThrow(/dpPa/);
+    expect(() => kvPressureDropPa(Number.NaN, 1, 1000)).toThrow(/flowM3h/);
+  });
+});
+
+describe("Cv ↔ Kv (unit definitions: US gpm, psi)", () => {
+  it("Cv = 1.1561·Kv (check #31, 1e-4); Kv 10 → Cv 11.56 (published example)", () => {
+    expect(kvToCv(1)).toBeCloseTo(1.1561, 4);
+    expect(kvToCv(10)).toBeCloseTo(11.56, 2);
+    expect(cvToKv(kvToCv(3.7))).toBeCloseTo(3.7, 12);
+    expect(cvToKv(1)).toBeCloseTo(0.865, 3);
+  });
+});

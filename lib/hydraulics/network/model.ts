@@ -1,0 +1,172 @@
+/**
+ * Network model from a schematic: nodes are ports (all ports of a junction —
+ * tee, manifold — share one node), links are pipes and through-parts.
+ * A buffer vessel / low-loss header (p1 primary flow in, p2 primary return
+ * out, p3 secondary flow out, p4 secondary return in) gets four links:
+ * `header-primary` p1→p2 (the common leg), `header-top` p1→p3,
+ * `header-bottom` p4→p2 and `header-secondary` p4→p3. Simulating, top, bottom
+ * and common leg are near-zero-loss and the secondary pass is shut: the header
+ * is one pressure point, primary and secondary are separate loops, and the
+ * flows take the physical paths (hot water p1→p3, surplus down the common
+ * leg, returns p4→p2), which the temperature mixing needs. In design the
+ * primary pass p1→p2 carries the heat-source flow as a fixed demand, the
+ * secondary closes through p4→p3, and top and bottom are shut. The
+ * topology never changes between modes and scenarios — closed valves become
+ * near-zero-conductance links, as EPANET does — so the symbolic factorisation
+ * is computed once.
+ */
+import { partRegistry, portsOf, splitPortRef } from "@/lib/schematic/parts";
+import type { Part, Schematic } from "@/lib/schematic/schema";
+
+export type LinkRole =
+  | "pipe"
+  | "heat-source"
+  | "pump"
+  | "link"
+  | "bypass"
+  | "diverter-a"
+  | "diverter-b"
+  | "load"
+  | "header-primary"
+  | "header-secondary"
+  | "header-top"
+  | "header-bottom";
+
+export interface ModelLink {
+  /** pipe id or part id (schematic ids only) */
+  id: string;
+  role: LinkRole;
+  from: number;
+  to: number;
+  /** index into doc.pipes or doc.parts */
+  index: number;
+}
+
+export interface NetworkModel {
+  nodeCount: number;
+  nodeLabel: string[];
+  portNode: Map<string, number>;
+  links: ModelLink[];
+  linksOfPart: Map<string, number[]>;
+  linkOfPipe: Map<string, number>;
+  partById: Map<string, Part>;
+  /** pipes attached to each port, "part.port" → pipe ids */
+  pipesAtPort: Map<string, string[]>;
+  /** one fixed-head node per connected component (an expansion vessel where there is one) */
+  fixed: Uint8Array;
+  component: Int32Array;
+}
+
+function partLinks(part: Part, node: (port: string) => number): [LinkRole, number, number][] {
+  const info = partRegistry[part.type];
+  switch (info.role) {
+    case "heat-source":
+      return [["heat-source", node("return"), node("flow")]];
+    case "pump":
+      return [["pump", node("in"), node("out")]];
+    case "link":
+      return [["link", node("a"), node("b")]];
+    case "bypass":
+      return [["bypass", node("a"), node("b")]];
+    case "load": {
+      const [i, o] = info.through!;
+      return [["load", node(i), node(o)]];
+    }
+    case "diverter":
+      return [
+        ["diverter-a", node("ab"), node("a")],
+        ["diverter-b", node("ab"), node("b")],
+      ];
+    case "header":
+      return [
+        ["header-primary", node("p1"), node("p2")],
+        ["header-secondary", node("p4"), node("p3")],
+        ["header-top", node("p1"), node("p3")],
+        ["header-bottom", node("p4"), node("p2")],
+      ];
+    default:
+      return [];
+  }
+}
+
+export function buildModel(doc: Schematic): NetworkModel {
+  const portNode = new Map<string, number>();
+  const nodeLabel: string[] = [];
+  const partById = new Map<string, Part>();
+  const vesselNodes: number[] = [];
+  for (const part of doc.parts) {
+    partById.set(part.id, part);
+    const role = partRegistry[part.type].role;
+    const ports = portsOf(part);
+    if (role === "junction") {
+      const n = nodeLabel.push(part.id) - 1;
+      for (const port of ports) portNode.set(`${part.id}.${port}`, n);
+    } else {
+      for (const port of ports) portNode.set(`${part.id}.${port}`, nodeLabel.push(`${part.id}.${port}`) - 1);
+    }
+    if (role === "vessel") vesselNodes.push(portNode.get(`${part.id}.connection`)!);
+  }
+  const links: ModelLink[] = [];
+  const linksOfPart = new Map<string, number[]>();
+  doc.parts.forEach((part, index) => {
+    const node = (port: string) => portNode.get(`${part.id}.${port}`)!;
+    const ids: number[] = [];
+    for (const [role, from, to] of partLinks(part, node)) ids.push(links.push({ id: part.id, role, from, to, index }) - 1);
+    if (ids.length) linksOfPart.set(part.id, ids);
+  });
+  const linkOfPipe = new Map<string, number>();
+  const pipesAtPort = new Map<string, string[]>();
+  doc.pipes.forEach((pipe, index) => {
+    const from = portNode.get(pipe.from);
+    const to = portNode.get(pipe.to);
+    for (const end of [pipe.from, pipe.to]) {
+      const list = pipesAtPort.get(end) ?? [];
+      list.push(pipe.id);
+      pipesAtPort.set(end, list);
+    }
+    if (from === undefined || to === undefined) return; // parse has rejected this already
+    linkOfPipe.set(pipe.id, links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1);
+  });
+  const nodeCount = nodeLabel.length;
+  const component = components(nodeCount, links);
+  const fixed = new Uint8Array(nodeCount);
+  const hasFixed = new Set<number>();
+  for (const n of vesselNodes) {
+    const c = component[n]!;
+    if (!hasFixed.has(c)) {
+      fixed[n] = 1;
+      hasFixed.add(c);
+    }
+  }
+  for (let n = 0; n < nodeCount; n++) {
+    const c = component[n]!;
+    if (!hasFixed.has(c)) {
+      fixed[n] = 1;
+      hasFixed.add(c);
+    }
+  }
+  return { nodeCount, nodeLabel, portNode, links, linksOfPart, linkOfPipe, partById, pipesAtPort, fixed, component };
+}
+
+/** Connected components by union–find with path halving (Tarjan 1975). */
+export function components(nodeCount: number, links: readonly { from: number; to: number }[]): Int32Array {
+  const parent = new Int32Array(nodeCount);
+  for (let i = 0; i < nodeCount; i++) parent[i] = i;
+  const find = (x: number) => {
+    while (parent[x] !== x) {
+      parent[x] = parent[parent[x]!]!;
+      x = parent[x]!;
+    }
+    return x;
+  };
+  for (const l of links) {
+    const a = find(l.from);
+    const b = find(l.to);
+    if (a !== b) parent[a] = b;
+  }
+  const out = new Int32Array(nodeCount);
+  for (let i = 0; i < nodeCount; i++) out[i] = find(i);
+  return out;
+}
+
+export { splitPortRef };

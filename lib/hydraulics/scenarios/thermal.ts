@@ -1,0 +1,130 @@
+/**
+ * Temperatures in a simulated state, by steady mixing along the solved flows:
+ * every heat source delivers the design flow temperature; an emitter's outlet
+ * follows from its EN 442 characteristic at its flow (emitters/emitterAtFlow);
+ * a cylinder coil gives up at most its rated output; other loads their design
+ * heat; a junction mixes its inflows by flow (Σq·T/Σq, constant ρ·cp — the
+ * first-law balance). Links are visited in topological order of the flow
+ * direction (Kahn 1962); loops that bypass the heat source (a buffer's
+ * secondary) are closed by repeating that order until temperatures settle.
+ */
+import { emitterAtFlow } from "@/lib/hydraulics/emitters";
+import { NO_FLOW_M3H } from "@/lib/hydraulics/network/behaviour";
+import type { EngineContext } from "@/lib/hydraulics/sizing/context";
+
+export interface Thermal {
+  nodeC: Float64Array;
+  /** per load link: output W and outlet °C */
+  loadOutputW: Map<number, number>;
+  loadOutletC: Map<number, number>;
+  heatSourceReturnC: number | null;
+}
+
+export function thermal(ctx: EngineContext, q: Float64Array): Thermal {
+  const { model, doc } = ctx;
+  const fluid = ctx.fluid!;
+  const n = model.nodeCount;
+  const flowC = ctx.flowC;
+  const edges: number[] = [];
+  const inEdges: number[][] = Array.from({ length: n }, () => []);
+  const outEdges: number[][] = Array.from({ length: n }, () => []);
+  model.links.forEach((l, k) => {
+    if (Math.abs(q[k]!) < NO_FLOW_M3H) return;
+    const [u, d] = q[k]! > 0 ? [l.from, l.to] : [l.to, l.from];
+    edges.push(k);
+    inEdges[d]!.push(k);
+    outEdges[u]!.push(k);
+  });
+  const up = (k: number) => (q[k]! > 0 ? model.links[k]!.from : model.links[k]!.to);
+  const down = (k: number) => (q[k]! > 0 ? model.links[k]!.to : model.links[k]!.from);
+  // Kahn order; heat-source links do not create a dependency (fixed outlet).
+  const indeg = new Int32Array(n);
+  for (const k of edges) if (model.links[k]!.role !== "heat-source") indeg[down(k)]!++;
+  const order: number[] = [];
+  const done = new Uint8Array(n);
+  const queue: number[] = [];
+  for (let i = 0; i < n; i++) if (indeg[i] === 0) queue.push(i);
+  let scan = 0;
+  let qi = 0;
+  while (order.length < n) {
+    if (qi >= queue.length) {
+      while (done[scan]) scan++;
+      queue.push(scan); // a loop without the heat source: break it here
+    }
+    const v = queue[qi++]!;
+    if (done[v]) continue;
+    done[v] = 1;
+    order.push(v);
+    for (const k of outEdges[v]!) {
+      if (model.links[k]!.role === "heat-source") continue;
+      const d = down(k);
+      if (--indeg[d]! === 0 && !done[d]) queue.push(d);
+    }
+  }
+  const nodeC = new Float64Array(n).fill(flowC);
+  const outletC = new Float64Array(model.links.length).fill(flowC);
+  const lastIn = new Float64Array(model.links.length).fill(NaN);
+  const loadOutputW = new Map<number, number>();
+  const loadOutletC = new Map<number, number>();
+  const outlet = (k: number, tin: number): number => {
+    const l = model.links[k]!;
+    if (l.role === "heat-source") return flowC;
+    if (l.role !== "load") return tin;
+    if (lastIn[k] === tin) return outletC[k]!;
+    lastIn[k] = tin;
+    const part = doc.parts[l.index]!;
+    const mdot = (Math.abs(q[k]!) / 3600) * fluid.densityKgM3;
+    const cap = mdot * fluid.specificHeatJkgK;
+    let w: number;
+    let tout: number;
+    if (part.type === "radiator") {
+      const r = emitterAtFlow({
+        outputAtDt50W: part.props.outputAtDt50W,
+        exponentN: part.props.exponentN,
+        flowC: tin,
+        roomC: part.props.roomTemperatureC,
+        massFlowKgs: mdot,
+        specificHeatJkgK: fluid.specificHeatJkgK,
+      });
+      w = r.outputW;
+      tout = r.returnC;
+    } else {
+      const floorC = part.type === "cylinder" ? part.props.coldWaterC : Math.min(tin, 20);
+      const rated = part.type === "cylinder" ? part.props.coilOutputKw * 1000 : (part.props as { heatLoadW: number }).heatLoadW;
+      w = Math.max(0, Math.min(rated, cap * (tin - floorC)));
+      tout = tin - w / cap;
+    }
+    loadOutputW.set(k, w);
+    loadOutletC.set(k, tout);
+    outletC[k] = tout;
+    return tout;
+  };
+  for (let pass = 0; pass < 60; pass++) {
+    let change = 0;
+    for (const v of order) {
+      const ins = inEdges[v]!;
+      if (ins.length === 0) continue;
+      let sw = 0;
+      let st = 0;
+      for (const k of ins) {
+        const w = Math.abs(q[k]!);
+        sw += w;
+        st += w * outlet(k, nodeC[up(k)]!);
+      }
+      const t = st / sw;
+      change = Math.max(change, Math.abs(t - nodeC[v]!));
+      nodeC[v] = t;
+    }
+    if (change < 1e-6) break;
+  }
+  let ret: number | null = null;
+  let sw = 0;
+  let st = 0;
+  model.links.forEach((l, k) => {
+    if (l.role !== "heat-source" || Math.abs(q[k]!) < NO_FLOW_M3H) return;
+    sw += Math.abs(q[k]!);
+    st += Math.abs(q[k]!) * nodeC[up(k)]!;
+  });
+  if (sw > 0) ret = st / sw;
+  return { nodeC, loadOutputW, loadOutletC, heatSourceReturnC: ret };
+}

@@ -1,0 +1,163 @@
+/**
+ * Circuits of a design solution: for every served load, the path pump →
+ * load → back to the same pump, its pressure drop, the index circuit (largest
+ * drop) of each pump, the pump's required vs available head, and for the other
+ * circuits the excess pressure and the balancing-valve Kv that burns it
+ * (Kv = q·√(ρ/1000 / (Δp/1 bar)), IEC 60534-1 definition, via losses/kv.ts).
+ *
+ * A side is a connected part of the network with the loads, the dp-bypass and
+ * a header's primary pass and hot-end link removed: primary and secondary of a
+ * buffer are separate sides, each with its own pump; a secondary circuit closes
+ * through the header's secondary pass. Paths come from two breadth-first trees
+ * grown from the pump's outlet and inlet; pressure drops come from the solved
+ * heads, Δp = (H_out,pump − H_in,load) + Δp_load + (H_out,load − H_in,pump),
+ * which is path-independent once the heads balance.
+ */
+import { kvForPressureDrop } from "@/lib/hydraulics/losses";
+import { components, type ModelLink } from "@/lib/hydraulics/network/model";
+import type { Circuit } from "@/lib/schematic/results";
+import type { EngineContext } from "./context";
+import type { DesignSolution } from "./design";
+import { isCut, loadLaw } from "./laws";
+import type { DesignLoad } from "./loads";
+
+export interface TracedCircuit extends Circuit {
+  side: number;
+  rootLink: number | null;
+  flowM3h: number;
+  /** watched nodes (dp-bypass ends) on the flow and return legs */
+  passedFlow: number[];
+  passedReturn: number[];
+}
+
+export interface CircuitAnalysis {
+  circuits: TracedCircuit[];
+  /** side → root pump link */
+  rootOfSide: Map<number, number>;
+  /** side → pump/heat-source-with-curve links */
+  pumpsOfSide: Map<number, number[]>;
+  sideOf: Int32Array;
+}
+
+const SIDE_EXCLUDED = new Set(["load", "header-primary", "header-top", "header-bottom", "bypass"]);
+
+function isPumpLink(ctx: EngineContext, l: ModelLink): boolean {
+  if (l.role === "pump") return true;
+  if (l.role !== "heat-source") return false;
+  return (ctx.doc.parts[l.index]!.props as { pumpCurve: unknown }).pumpCurve != null;
+}
+
+/** BFS tree from `start` not using `skip`; parent link per node (−1 root, −2 unvisited). */
+function tree(start: number, skip: number, adj: number[][], links: readonly ModelLink[], parent: Int32Array) {
+  parent[start] = -1;
+  const queue = [start];
+  for (let i = 0; i < queue.length; i++) {
+    const n = queue[i]!;
+    for (const k of adj[n]!) {
+      if (k === skip) continue;
+      const l = links[k]!;
+      const m = l.from === n ? l.to : l.from;
+      if (parent[m] === -2) {
+        parent[m] = k;
+        queue.push(m);
+      }
+    }
+  }
+}
+
+export function traceCircuits(ctx: EngineContext, sol: DesignSolution, watch: ReadonlySet<number>): CircuitAnalysis {
+  const { model } = ctx;
+  const links = model.links;
+  const sideLinks = links.filter((l) => !SIDE_EXCLUDED.has(l.role) && !isCut(ctx, l, sol.state));
+  const sideOf = components(model.nodeCount, sideLinks);
+  const adj: number[][] = Array.from({ length: model.nodeCount }, () => []);
+  links.forEach((l, k) => {
+    if (SIDE_EXCLUDED.has(l.role) || isCut(ctx, l, sol.state)) return;
+    adj[l.from]!.push(k);
+    adj[l.to]!.push(k);
+  });
+  const pumpsOfSide = new Map<number, number[]>();
+  links.forEach((l, k) => {
+    if (!isPumpLink(ctx, l)) return;
+    const s = sideOf[l.from]!;
+    pumpsOfSide.set(s, [...(pumpsOfSide.get(s) ?? []), k]);
+  });
+  const rootOfSide = new Map<number, number>();
+  for (const [s, ks] of pumpsOfSide) rootOfSide.set(s, ks.find((k) => links[k]!.role === "pump") ?? ks[0]!);
+  const pf = new Int32Array(model.nodeCount).fill(-2);
+  const pr = new Int32Array(model.nodeCount).fill(-2);
+  for (const root of rootOfSide.values()) {
+    tree(links[root]!.to, root, adj, links, pf);
+    tree(links[root]!.from, root, adj, links, pr);
+  }
+  const walk = (node: number, parent: Int32Array, passed: number[]): string[] | null => {
+    const ids: string[] = [];
+    let n = node;
+    for (let guard = 0; parent[n] !== -1; guard++) {
+      if (parent[n] === -2 || guard > model.nodeCount) return null;
+      if (watch.has(n)) passed.push(n);
+      const l = links[parent[n]!]!;
+      ids.push(l.id);
+      n = l.from === n ? l.to : l.from;
+    }
+    if (watch.has(n)) passed.push(n);
+    return ids;
+  };
+  const circuits = sol.served.map((load) => circuitOf(ctx, sol, load, sideOf, rootOfSide, pf, pr, walk));
+  markIndex(ctx, circuits);
+  return { circuits, rootOfSide, pumpsOfSide, sideOf };
+}
+
+function circuitOf(
+  ctx: EngineContext,
+  sol: DesignSolution,
+  load: DesignLoad,
+  sideOf: Int32Array,
+  rootOfSide: Map<number, number>,
+  pf: Int32Array,
+  pr: Int32Array,
+  walk: (n: number, p: Int32Array, passed: number[]) => string[] | null,
+): TracedCircuit {
+  const links = ctx.model.links;
+  const side = sideOf[load.inNode]!;
+  const root = rootOfSide.get(side) ?? null;
+  const passedFlow: number[] = [];
+  const passedReturn: number[] = [];
+  const base = { load: load.id, side, rootLink: root, flowM3h: load.flowM3h, passedFlow, passedReturn, index: false, excessKpa: null, balancingKv: null };
+  if (root === null) return { ...base, pump: null, path: [], pressureDropKpa: null };
+  const flowLeg = walk(load.inNode, pf, passedFlow);
+  const returnLeg = walk(load.outNode, pr, passedReturn);
+  const out = new Float64Array(2);
+  let dpLoad = 0;
+  if (!load.header) {
+    loadLaw(ctx, ctx.model.partById.get(load.id)!)(load.flowM3h, out);
+    dpLoad = out[0]!;
+  }
+  const h = sol.head;
+  const r = links[root]!;
+  const dp = h[r.to]! - h[load.inNode]! + dpLoad + (h[load.outNode]! - h[r.from]!);
+  const path = flowLeg && returnLeg ? [...flowLeg.reverse(), load.id, ...returnLeg] : [];
+  return { ...base, pump: r.id, path, pressureDropKpa: Number.isFinite(dp) ? dp : null };
+}
+
+function markIndex(ctx: EngineContext, circuits: TracedCircuit[]): void {
+  const rho = ctx.fluid!.densityKgM3;
+  const best = new Map<number, TracedCircuit>();
+  for (const c of circuits) {
+    if (c.rootLink === null || c.pressureDropKpa === null) continue;
+    const b = best.get(c.rootLink);
+    if (!b || c.pressureDropKpa > b.pressureDropKpa!) best.set(c.rootLink, c);
+  }
+  for (const c of circuits) {
+    if (c.rootLink === null || c.pressureDropKpa === null) continue;
+    const idx = best.get(c.rootLink)!;
+    if (idx === c) {
+      c.index = true;
+      c.excessKpa = 0;
+      continue;
+    }
+    c.excessKpa = idx.pressureDropKpa! - c.pressureDropKpa;
+    // Below 0.1 kPa there is nothing to burn: a Kv would be meaninglessly large.
+    c.balancingKv = c.excessKpa > 0.1 && c.flowM3h > 0 ? kvForPressureDrop(c.flowM3h, c.excessKpa * 1000, rho) : null;
+  }
+}

@@ -1,0 +1,104 @@
+/**
+ * Everything a calculation shares: the parsed document, the network model and
+ * its symbolic factorisation, fluid properties at the mean design temperature,
+ * each pipe's geometry, and the findings collector. Built once per calculate().
+ */
+import { fluidProperties, type FluidSpec } from "@/lib/hydraulics/fluids";
+import { sumFittingsK } from "@/lib/hydraulics/losses";
+import { prepare, type Prepared } from "@/lib/hydraulics/network/gga";
+import { buildModel, type NetworkModel } from "@/lib/hydraulics/network/model";
+import type { PipeGeometry } from "@/lib/hydraulics/network/behaviour";
+import { findPipeSize } from "@/lib/hydraulics/pipes";
+import type { Findings } from "@/lib/hydraulics/findings/finding";
+import type { Schematic } from "@/lib/schematic/schema";
+
+export interface FluidState {
+  temperatureC: number;
+  densityKgM3: number;
+  kinematicViscosityM2s: number;
+  specificHeatJkgK: number;
+}
+
+export interface EngineContext {
+  doc: Schematic;
+  model: NetworkModel;
+  prep: Prepared;
+  fluid: FluidState | null;
+  flowC: number;
+  returnC: number;
+  /** design ΔT = flow − return, K; null when not positive (input.delta-t) */
+  deltaTK: number | null;
+  /** by doc.pipes index; null when the pipe's geometry is unusable (input.* finding) */
+  pipeGeom: (PipeGeometry | null)[];
+  findings: Findings;
+}
+
+function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)[] {
+  return doc.pipes.map((pipe) => {
+    const row = findPipeSize(pipe.material, pipe.size);
+    const dMm = pipe.innerDiameterMm ?? row?.innerDiameterMm;
+    const epsMm = pipe.roughnessMm ?? row?.roughnessMm;
+    if (dMm === undefined || epsMm === undefined) {
+      findings.error(
+        "input.pipe-size",
+        `pipe ${pipe.id}: no ${pipe.material} size "${pipe.size}" in the catalogue and no innerDiameterMm/roughnessMm given`,
+        [pipe.id],
+      );
+      return null;
+    }
+    let ok = true;
+    if (!(dMm > 0)) {
+      findings.error("input.pipe-diameter", `pipe ${pipe.id}: inner diameter ${dMm} mm is not positive`, [pipe.id]);
+      ok = false;
+    }
+    if (!(pipe.lengthM >= 0)) {
+      findings.error("input.pipe-length", `pipe ${pipe.id}: length ${pipe.lengthM} m is negative`, [pipe.id]);
+      ok = false;
+    }
+    if (!ok) return null;
+    let sumK = 0;
+    try {
+      sumK = sumFittingsK(pipe.fittings, dMm);
+    } catch (e) {
+      findings.error("input.pipe-fittings", `pipe ${pipe.id}: fittings not usable (${(e as Error).message})`, [pipe.id]);
+      return null;
+    }
+    return { innerDiameterM: dMm / 1000, roughnessM: epsMm / 1000, lengthM: pipe.lengthM, sumK };
+  });
+}
+
+export function createContext(doc: Schematic, findings: Findings): EngineContext {
+  const model = buildModel(doc);
+  const prep = prepare({
+    nodeCount: model.nodeCount,
+    from: Int32Array.from(model.links, (l) => l.from),
+    to: Int32Array.from(model.links, (l) => l.to),
+    fixed: model.fixed,
+  });
+  const flowC = doc.design.flowTemperatureC;
+  const returnC = doc.design.returnTemperatureC;
+  const deltaTK = flowC - returnC > 0 ? flowC - returnC : null;
+  if (deltaTK === null) {
+    findings.error(
+      "input.delta-t",
+      `design: flow ${flowC} °C is not above return ${returnC} °C, so no design flow can be computed (ΔT must be > 0)`,
+    );
+  }
+  const meanC = (flowC + returnC) / 2;
+  let fluid: FluidState | null = null;
+  try {
+    const p = fluidProperties(doc.fluid as FluidSpec, meanC);
+    fluid = {
+      temperatureC: meanC,
+      densityKgM3: p.densityKgM3,
+      kinematicViscosityM2s: p.kinematicViscosityM2s,
+      specificHeatJkgK: p.specificHeatJkgK,
+    };
+  } catch (e) {
+    findings.error(
+      "fluid.out-of-range",
+      `fluid: no properties for ${doc.fluid.kind} at ${meanC} °C (${(e as Error).message}); hydraulic results are not computed`,
+    );
+  }
+  return { doc, model, prep, fluid, flowC, returnC, deltaTK, pipeGeom: pipeGeometry(doc, findings), findings };
+}

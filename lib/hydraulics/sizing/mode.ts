@@ -1,0 +1,62 @@
+/**
+ * One design mode (heating or hot-water) end to end: design flows, pipe and
+ * part results, circuits with index and balancing, pump duties.
+ */
+import { flowAdjacency, walkChain } from "@/lib/hydraulics/network/chains";
+import type { Circuit, ModeResult } from "@/lib/schematic/results";
+import { traceCircuits, type CircuitAnalysis } from "./circuits";
+import type { EngineContext } from "./context";
+import { solveDesign, type DesignSolution } from "./design";
+import type { NetworkState } from "./laws";
+import { partResults } from "./part-results";
+import { pipeResults } from "./pipe-results";
+import { pumpDuties } from "./pumps";
+
+export interface ModeRun {
+  result: ModeResult;
+  solution: DesignSolution;
+  circuits: CircuitAnalysis;
+}
+
+/** Where each dp-bypass branch leaves the main circuit: its ends walked back to the first branch. */
+export function bypassBranchPoints(ctx: EngineContext): Map<number, [number, number]> {
+  const adj = flowAdjacency(ctx.doc, ctx.model);
+  const out = new Map<number, [number, number]>();
+  ctx.model.links.forEach((l, k) => {
+    if (l.role === "bypass") out.set(k, [walkChain(ctx.model, adj, l.from, k).end, walkChain(ctx.model, adj, l.to, k).end]);
+  });
+  return out;
+}
+
+export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun {
+  const sol = solveDesign(ctx, mode);
+  const ca = traceCircuits(ctx, sol, new Set([...bypassBranchPoints(ctx).values()].flat()));
+  const pumps = pumpDuties(ctx, sol, ca);
+  let sourceFlow: number | null = null;
+  ctx.model.links.forEach((l, k) => {
+    if (l.role === "heat-source") sourceFlow = (sourceFlow ?? 0) + Math.abs(sol.q[k]!);
+  });
+  const circuits: Circuit[] = ca.circuits.map((c) => ({
+    load: c.load,
+    pump: c.pump,
+    path: c.path,
+    pressureDropKpa: c.pressureDropKpa,
+    index: c.index,
+    excessKpa: c.excessKpa,
+    balancingKv: c.balancingKv,
+  }));
+  const pump = pumps.reduce<(typeof pumps)[number] | null>(
+    (best, p) => (best === null || (p.requiredHeadKpa ?? -1) > (best.requiredHeadKpa ?? -1) ? p : best),
+    null,
+  );
+  const result: ModeResult = {
+    mode,
+    heatSourceFlowM3h: sourceFlow,
+    pipes: pipeResults(ctx, sol.q, mode),
+    parts: partResults(ctx, sol.state, sol.laws, sol.q, sol.head),
+    circuits,
+    pump,
+    pumps,
+  };
+  return { result, solution: sol, circuits: ca };
+}

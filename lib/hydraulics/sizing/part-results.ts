@@ -1,0 +1,62 @@
+/**
+ * Per-part flow and pressure drop. In design, a part's drop is its own law at
+ * the design flow (Kv devices Δp = (q/Kv)² bar, loads their valve or loop, a
+ * pump its head as a negative drop); a valve shut in that mode has no flow and
+ * no stated drop. In a simulation the drop is simply the solved head
+ * difference across the part, so a shut bypass shows the Δp it holds.
+ */
+import { NO_FLOW_M3H } from "@/lib/hydraulics/network/behaviour";
+import type { Evaluate } from "@/lib/hydraulics/network/gga";
+import { pumpHeadKpa } from "@/lib/hydraulics/pumps/curve";
+import type { PartResult } from "@/lib/schematic/results";
+import type { EngineContext } from "./context";
+import { isCut, loadLaw, usableCurve, type NetworkState } from "./laws";
+
+const fin = (x: number): number | null => (Number.isFinite(x) ? x : null);
+const clean = (q: number) => (Math.abs(q) < NO_FLOW_M3H ? 0 : q);
+
+/** The link that carries the part's flow for reporting (selected diverter side, header primary pass). */
+function mainLink(ctx: EngineContext, ks: number[], state: NetworkState): number {
+  if (ks.length === 1) return ks[0]!;
+  const open = ks.find((k) => !isCut(ctx, ctx.model.links[k]!, { ...state, purpose: "simulate" }));
+  return open ?? ks[0]!;
+}
+
+export function pumpHeadAt(curve: Parameters<typeof pumpHeadKpa>[0] | null, q: number): number | null {
+  const c = usableCurve(curve);
+  if (!c || !(q >= 0)) return null;
+  return pumpHeadKpa(c, q);
+}
+
+export function partResults(
+  ctx: EngineContext,
+  state: NetworkState,
+  laws: readonly Evaluate[],
+  q: Float64Array,
+  head: Float64Array,
+): PartResult[] {
+  const out: PartResult[] = [];
+  const tmp = new Float64Array(2);
+  for (const part of ctx.doc.parts) {
+    const ks = ctx.model.linksOfPart.get(part.id);
+    if (!ks) continue;
+    const k = mainLink(ctx, ks, state);
+    const link = ctx.model.links[k]!;
+    const flow = clean(q[k]!);
+    let dp: number | null;
+    if (state.purpose === "simulate") dp = head[link.from]! - head[link.to]!;
+    else if (link.role === "pump") {
+      const h = pumpHeadAt((part.props as { curve: [number, number][] }).curve, flow);
+      dp = h === null ? null : -h;
+    } else if (link.role === "load") {
+      loadLaw(ctx, part)(flow, tmp);
+      dp = tmp[0]!;
+    } else if (isCut(ctx, link, state) || link.role.startsWith("header")) dp = link.role.startsWith("header") ? 0 : null;
+    else {
+      laws[k]!(flow, tmp);
+      dp = tmp[0]!;
+    }
+    out.push({ id: part.id, flowM3h: fin(flow), pressureDropKpa: dp === null ? null : fin(dp) });
+  }
+  return out;
+}

@@ -1,0 +1,60 @@
+/**
+ * Pump duty per side: design flow through the side's pump, the head required
+ * (its index circuit's pressure drop) and the head available — the sum of the
+ * heads of the pumps in series on that side at their design flows (a heat
+ * source's own pump curve counts), read off the curves (pumps/curve.ts).
+ */
+import type { PumpDuty } from "@/lib/schematic/results";
+import type { EngineContext } from "./context";
+import type { CircuitAnalysis } from "./circuits";
+import type { DesignSolution } from "./design";
+import { pumpHeadAt } from "./part-results";
+
+const fin = (x: number | null): number | null => (x !== null && Number.isFinite(x) ? x : null);
+
+function curveOf(ctx: EngineContext, linkIndex: number): [number, number][] | null {
+  const part = ctx.doc.parts[ctx.model.links[linkIndex]!.index]!;
+  if (part.type === "pump") return part.props.curve;
+  if (part.type === "heat-pump" || part.type === "boiler") return part.props.pumpCurve;
+  return null;
+}
+
+export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitAnalysis): PumpDuty[] {
+  const duties: PumpDuty[] = [];
+  for (const [side, root] of ca.rootOfSide) {
+    const circuits = ca.circuits.filter((c) => c.side === side && c.pressureDropKpa !== null);
+    if (circuits.length === 0) continue;
+    const required = Math.max(...circuits.map((c) => c.pressureDropKpa!));
+    const rootId = ctx.model.links[root]!.id;
+    let available: number | null = 0;
+    for (const k of ca.pumpsOfSide.get(side) ?? []) {
+      const id = ctx.model.links[k]!.id;
+      const q = Math.abs(sol.q[k]!);
+      const h = pumpHeadAt(curveOf(ctx, k), q);
+      if (h === null) {
+        ctx.findings.warning(
+          "pump.curve-short",
+          `${id}: design flow ${q.toFixed(3)} m³/h in ${sol.mode} mode is beyond the end of its curve (or the curve is unusable), so its head there is unknown`,
+          [id],
+        );
+        available = null;
+      } else if (available !== null) available += h;
+    }
+    const ok = available === null ? null : available >= required;
+    if (ok === false) {
+      ctx.findings.error(
+        "pump.head-low",
+        `${rootId}: needs ${required.toFixed(1)} kPa at ${Math.abs(sol.q[root]!).toFixed(3)} m³/h in ${sol.mode} mode but the curve gives ${available!.toFixed(1)} kPa`,
+        [rootId, ...circuits.filter((c) => c.index).map((c) => c.load)],
+      );
+    }
+    duties.push({
+      id: rootId,
+      designFlowM3h: fin(Math.abs(sol.q[root]!)),
+      requiredHeadKpa: fin(required),
+      availableHeadKpa: fin(available),
+      ok,
+    });
+  }
+  return duties;
+}

@@ -1,0 +1,146 @@
+/**
+ * npm run bench — (a) the sizing engine on generated buildings of ~500 … 20,000
+ * pipes: median wall time of several runs after a warm-up, retained heap, and
+ * the log-log growth exponent beside that of n·log n; (b) the HTTP API, when a
+ * server answers at BENCH_URL: autocannon, 10 connections for 10 s, POSTing the
+ * Millbrook Hall demo schematic to /api/v1/calculate.
+ *
+ * Targets: 2,000 pipes < 100 ms, 20,000 pipes < 1 s; API ≥ 200 req/s, p99 < 50 ms.
+ * Env: BENCH_URL (default http://localhost:3000), BENCH_COOKIE (sent as Cookie),
+ * BENCH_SIZES (e.g. "500,2000"), BENCH_SECONDS (API duration, default 10).
+ */
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import path from "node:path";
+import { setFlagsFromString } from "node:v8";
+import { runInNewContext } from "node:vm";
+import { calculate } from "@/lib/hydraulics/calculate";
+import { generateBuildingWithPipes } from "@/lib/schematic/generate-building";
+
+// A real gc() makes the heap figures comparable between sizes (no --expose-gc flag needed).
+setFlagsFromString("--expose-gc");
+const gc = runInNewContext("gc") as () => void;
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
+};
+/** Least-squares slope of log y against log x. */
+function logLogSlope(xs: number[], ys: number[]): number {
+  const lx = xs.map(Math.log), ly = ys.map(Math.log);
+  const mx = lx.reduce((a, b) => a + b, 0) / lx.length, my = ly.reduce((a, b) => a + b, 0) / ly.length;
+  let num = 0, den = 0;
+  lx.forEach((x, i) => {
+    num += (x - mx) * (ly[i]! - my);
+    den += (x - mx) ** 2;
+  });
+  return num / den;
+}
+const pad = (s: string | number, n: number) => String(s).padStart(n);
+const passFail = (ok: boolean) => (ok ? "PASS" : "FAIL");
+
+function benchEngine() {
+  const sizes = (process.env.BENCH_SIZES ?? "500,2000,5000,20000").split(",").map(Number).filter((n) => n > 0);
+  const targetsMs: Record<number, number> = { 2000: 100, 20000: 1000 };
+  console.log("Engine: calculate() on generated buildings (median of runs after one warm-up)\n");
+  console.log(`${pad("pipes", 7)} ${pad("parts", 7)} ${pad("runs", 5)} ${pad("median ms", 10)} ${pad("min ms", 8)} ${pad("heap Δ MB", 10)}  ok  target`);
+  const ns: number[] = [], ms: number[] = [];
+  let allPass = true;
+  for (const n of sizes) {
+    const doc = generateBuildingWithPipes(n);
+    const runs = n <= 2_000 ? 9 : n <= 5_000 ? 5 : 3;
+    const first = calculate(doc); // warm-up (JIT), also the correctness probe
+    const times: number[] = [];
+    let heapDelta = 0;
+    for (let r = 0; r < runs; r++) {
+      gc();
+      const before = process.memoryUsage().heapUsed;
+      const t0 = performance.now();
+      const out = calculate(doc);
+      times.push(performance.now() - t0);
+      gc();
+      // heap still held while the result is alive: what one answer of this size costs to keep
+      heapDelta = Math.max(heapDelta, process.memoryUsage().heapUsed - before);
+      if (!out.ok) break;
+    }
+    const med = median(times);
+    ns.push(doc.pipes.length);
+    ms.push(med);
+    const target = targetsMs[n];
+    const verdict = target === undefined ? "" : `${passFail(med < target)}  < ${target} ms`;
+    if (target !== undefined && !(med < target)) allPass = false;
+    console.log(
+      `${pad(doc.pipes.length, 7)} ${pad(doc.parts.length, 7)} ${pad(times.length, 5)} ${pad(med.toFixed(1), 10)} ${pad(Math.min(...times).toFixed(1), 8)} ${pad((heapDelta / 2 ** 20).toFixed(1), 10)}  ${first.ok ? "yes" : "NO "} ${verdict}`,
+    );
+    if (!first.ok) console.log(`        engine refused the document: ${JSON.stringify(first.issues).slice(0, 300)}`);
+  }
+  if (ns.length >= 2) {
+    const k = logLogSlope(ns, ms);
+    const kRef = logLogSlope(ns, ns.map((n) => n * Math.log(n)));
+    console.log(`\nGrowth exponent (log-log slope of median time): ${k.toFixed(2)}  — n·log n over the same sizes: ${kRef.toFixed(2)}, n²: 2.00`);
+  }
+  return allPass;
+}
+
+async function serverAnswers(base: string): Promise<boolean> {
+  try {
+    const res = await fetch(base, { signal: AbortSignal.timeout(2_000), redirect: "manual" });
+    await res.arrayBuffer();
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+interface CannonResult {
+  requests: { average: number };
+  latency: { p99: number; average: number };
+  non2xx: number;
+  errors: number;
+  timeouts: number;
+}
+type Autocannon = (opts: Record<string, unknown>) => Promise<CannonResult>;
+
+async function benchApi() {
+  const base = (process.env.BENCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
+  const url = `${base}/api/v1/calculate`;
+  console.log(`\nAPI: POST ${url}`);
+  if (!(await serverAnswers(base))) {
+    console.log(`  skipped: nothing answers at ${base}.`);
+    console.log("  Run it with a server up: `npm run start` (or `npm run build && npm run serve`) in one shell,");
+    console.log("  then `BENCH_URL=http://localhost:3000 npm run bench`; add BENCH_COOKIE='<session cookie>' if the route needs a sign-in.");
+    return true;
+  }
+  const body = readFileSync(path.resolve("db/seeds/data/millbrook-hall.json"), "utf8");
+  const headers: Record<string, string> = { "content-type": "application/json" };
+  if (process.env.BENCH_COOKIE) headers.cookie = process.env.BENCH_COOKIE;
+  const probe = await fetch(url, { method: "POST", headers, body, signal: AbortSignal.timeout(10_000) });
+  await probe.arrayBuffer();
+  if (!probe.ok) {
+    console.log(`  probe answered HTTP ${probe.status}; ${probe.status === 401 || probe.status === 403 ? "set BENCH_COOKIE to a signed-in session cookie" : "check the route"} — skipped.`);
+    return false;
+  }
+  const requireCjs = createRequire(path.resolve("package.json"));
+  const autocannon = requireCjs("autocannon") as Autocannon;
+  const duration = Number(process.env.BENCH_SECONDS ?? 10);
+  const r = await autocannon({ url, method: "POST", headers, body, connections: 10, duration });
+  const rps = r.requests.average, p99 = r.latency.p99;
+  console.log(`  10 connections, ${duration} s: ${r.non2xx} non-2xx, ${r.errors} errors, ${r.timeouts} timeouts\n`);
+  console.log(`  ${"metric".padEnd(14)} ${pad("value", 8)}  target     ok`);
+  console.log(`  ${"requests/s".padEnd(14)} ${pad(rps.toFixed(0), 8)}  ≥ 200      ${passFail(rps >= 200)}`);
+  console.log(`  ${"p99 latency".padEnd(14)} ${pad(`${p99} ms`, 8)}  < 50 ms    ${passFail(p99 < 50)}`);
+  console.log(`  ${"mean latency".padEnd(14)} ${pad(`${r.latency.average.toFixed(1)} ms`, 8)}`);
+  return rps >= 200 && p99 < 50 && r.non2xx === 0;
+}
+
+async function main() {
+  const engineOk = benchEngine();
+  const apiOk = await benchApi();
+  console.log(`\n${engineOk && apiOk ? "All measured targets met." : "Some targets missed (see FAIL above)."}`);
+}
+
+main().catch((e: unknown) => {
+  console.error(e);
+  process.exit(1);
+});

@@ -1,0 +1,21 @@
+// Reads messages the SMTP catcher (maildev) caught, through its HTTP API.
+const base = () => process.env.MAIL_WEB_URL ?? "http://127.0.0.1:1081";
+
+export type Caught = { id: string; subject: string; text: string; html: string; to: { address: string }[] };
+
+export async function mailTo(address: string, timeoutMs = 5000): Promise<Caught> {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const all = (await (await fetch(`${base()}/api/email`)).json()) as Caught[];
+    const mine = all.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+    if (mine.length) return mine[mine.length - 1]!;
+    if (Date.now() > until) throw new Error(`no e-mail to ${address} caught at ${base()}`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}
+
+export function linkIn(text: string, path: string): string {
+  const m = text.match(new RegExp(`https?://\\S+${path}/([A-Za-z0-9_-]+)`));
+  if (!m) throw new Error(`no ${path} link in: ${text}`);
+  return m[1]!;
+}

@@ -1,0 +1,150 @@
+import { randomUUID } from "node:crypto";
+import { callAction, callRoute, cookieFor, form, type Outcome, type Who } from "./helpers/call";
+import { FIXTURE_PREFIX, type Fixture } from "./helpers/fixture";
+
+// The registry of every API route and server action, for the role matrix
+// (role-matrix.test.ts). One row per route/action: how to call it against a fresh fixture
+// project, and the status each caller must get. Board engineers: add your routes here,
+// one row each (see the TODO rows at the bottom).
+//
+//   expect: allow(["owner", "designer"])        → those 2xx, other members 403, signed out 401
+//   expect: allow(["owner"], 204)               → a specific success status
+//   expect: { ...allow([...]), installer: 404 } → override single cells
+//
+// A denial (401/403/404) must carry {error: "<message>"} and leave the fixture untouched.
+// Modules are imported inside `call`, so a broken route fails its own row only.
+
+export type Expect = Record<Who, number>;
+export type Row = {
+  name: string;
+  kind: "route" | "action";
+  /** Fixture options, e.g. an issued revision for installer rows. */
+  fixture?: { revisionStatus?: "draft" | "in-review" | "approved" | "issued" };
+  call?: (f: Fixture, cookie: string | null, who: Who) => Promise<Outcome>;
+  expect?: Expect;
+  /** A route that does not exist yet: shown as a todo in the test report. */
+  todo?: string;
+};
+
+const members: Who[] = ["owner", "designer", "reviewer", "installer", "trainee"];
+
+export function allow(who: Who[], ok = 200): Expect {
+  const e = {} as Expect;
+  for (const w of [...members, "anon" as Who]) e[w] = who.includes(w) ? ok : w === "anon" ? 401 : 403;
+  return e;
+}
+
+const sessionRoute = () => import("@/app/api/v1/session/route");
+const projectRoute = () => import("@/app/api/v1/projects/route");
+const projectItemRoute = () => import("@/app/api/v1/projects/[projectId]/route");
+const schematicRoute = () => import("@/app/api/v1/schematics/[schematicId]/route");
+const calculateRoute = () => import("@/app/api/v1/calculate/route");
+const teamActions = () => import("@/app/(app)/projects/[projectId]/team/actions");
+const authActions = () => import("@/app/(auth)/actions");
+
+export const rows: Row[] = [
+  // ——— session ———
+  {
+    name: "GET /api/v1/session", kind: "route", expect: allow(members),
+    call: async (_f, cookie) => callRoute((await sessionRoute()).GET as never, { path: "/api/v1/session", cookie }),
+  },
+  {
+    // signing out is open to anyone (a no-op when signed out); the matrix checks it never fails
+    name: "DELETE /api/v1/session", kind: "route", expect: { owner: 204, designer: 204, reviewer: 204, installer: 204, trainee: 204, anon: 204 },
+    // a session of its own, so the shared per-role cookie survives for the other rows
+    call: async (_f, _cookie, who) => callRoute((await sessionRoute()).DELETE as never, { method: "DELETE", path: "/api/v1/session", cookie: await cookieFor(who) }),
+  },
+
+  // ——— projects ———
+  {
+    name: "GET /api/v1/projects", kind: "route", expect: allow(members),
+    call: async (_f, cookie) => callRoute((await projectRoute()).GET as never, { path: "/api/v1/projects", cookie }),
+  },
+  {
+    name: "POST /api/v1/projects", kind: "route", expect: allow(members, 201),
+    call: async (_f, cookie) => callRoute((await projectRoute()).POST as never, {
+      method: "POST", path: "/api/v1/projects", cookie, body: { name: `${FIXTURE_PREFIX} new ${randomUUID().slice(0, 8)}`, client: "Test" },
+    }),
+  },
+  {
+    name: "GET /api/v1/projects/[projectId]", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await projectItemRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    name: "DELETE /api/v1/projects/[projectId]", kind: "route", expect: allow(["owner"], 204),
+    call: async (f, cookie) => callRoute((await projectItemRoute()).DELETE as never, { method: "DELETE", path: `/api/v1/projects/${f.projectId}`, cookie, params: { projectId: f.projectId } }),
+  },
+
+  // ——— team (server actions) ———
+  {
+    name: "action inviteAction", kind: "action", expect: allow(["owner"]),
+    call: async (f, cookie) => callAction(async () => (await teamActions()).inviteAction(null, form({ projectId: f.projectId, email: `new-${randomUUID().slice(0, 8)}@example.test`, role: "reviewer" })), cookie),
+  },
+  {
+    name: "action revokeInvitationAction", kind: "action", expect: allow(["owner"]),
+    call: async (f, cookie) => callAction(async () => (await teamActions()).revokeInvitationAction(null, form({ projectId: f.projectId, invitationId: f.invitationId })), cookie),
+  },
+  {
+    name: "action changeRoleAction", kind: "action", expect: allow(["owner"]),
+    call: async (f, cookie) => callAction(async () => (await teamActions()).changeRoleAction(null, form({ projectId: f.projectId, userId: "demo-installer", role: "reviewer" })), cookie),
+  },
+  {
+    name: "action removeMemberAction", kind: "action", expect: allow(["owner"]),
+    call: async (f, cookie) => callAction(async () => (await teamActions()).removeMemberAction(null, form({ projectId: f.projectId, userId: "demo-reviewer" })), cookie),
+  },
+
+  // ——— account (server actions that need only a signed-in person) ———
+  {
+    // a wrong current password: signed-in callers get the 400 "not right" answer, nothing changes
+    name: "action changePasswordAction (wrong current password)", kind: "action",
+    expect: { owner: 400, designer: 400, reviewer: 400, installer: 400, trainee: 400, anon: 401 },
+    call: async (_f, cookie) => callAction(async () => (await authActions()).changePasswordAction(null, form({ current: "not-the-password", password: "a-new-password-1" })), cookie),
+  },
+  {
+    name: "action acceptInvitationAction (someone else's invitation)", kind: "action",
+    // members are already in the project, so joining changes nothing for them; signed out → 401
+    expect: { owner: 200, designer: 200, reviewer: 200, installer: 200, trainee: 200, anon: 401 },
+    call: async (f, cookie) => {
+      const out = await callAction(async () => (await authActions()).acceptInvitationAction(null, form({ token: f.invitationToken })), cookie);
+      return out.status === 303 ? { ...out, status: 200 } : out;
+    },
+  },
+
+  // ——— schematics (board routes) ———
+  {
+    name: "POST /api/v1/calculate", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await calculateRoute()).POST as never, { method: "POST", path: "/api/v1/calculate", cookie, body: f.doc }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id] team, draft only", kind: "route",
+    expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => callRoute((await schematicRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}`, cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id] team, issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await schematicRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}`, cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id] practice variant", kind: "route", expect: allow(["owner", "trainee"]),
+    call: async (f, cookie) => callRoute((await schematicRoute()).GET as never, { path: `/api/v1/schematics/${f.practiceSchematicId}`, cookie, params: { schematicId: f.practiceSchematicId } }),
+  },
+  {
+    name: "PUT /api/v1/schematics/[id] team draft", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await schematicRoute()).PUT as never, {
+      method: "PUT", path: `/api/v1/schematics/${f.teamSchematicId}`, cookie, params: { schematicId: f.teamSchematicId }, body: { lockVersion: f.lockVersion, doc: f.doc },
+    }),
+  },
+  {
+    name: "PUT /api/v1/schematics/[id] practice variant", kind: "route", expect: allow(["trainee"]),
+    call: async (f, cookie) => callRoute((await schematicRoute()).PUT as never, {
+      method: "PUT", path: `/api/v1/schematics/${f.practiceSchematicId}`, cookie, params: { schematicId: f.practiceSchematicId }, body: { lockVersion: f.lockVersion, doc: f.doc },
+    }),
+  },
+
+  // ——— TODO: board routes not written yet; replace each with a real row ———
+  { name: "POST /api/v1/schematics/[id]/revisions (save a revision)", kind: "route", todo: "expect allow(['owner','designer'], 201)" },
+  { name: "PATCH /api/v1/revisions/[id]/status (submit/approve/send back/issue)", kind: "route", todo: "one row per transition: submit → owner/designer, review → owner/reviewer, issue → owner/designer" },
+  { name: "POST /api/v1/schematics/[id]/variants (practice variant)", kind: "route", todo: "expect allow(['owner','designer','trainee'], 201)" },
+  { name: "POST /api/v1/revisions/[id]/comments", kind: "route", todo: "expect allow(['owner','designer','reviewer'], 201)" },
+  { name: "POST /api/v1/revisions/[id]/site-records", kind: "route", todo: "expect allow(['owner','installer'], 201) on an issued revision" },
+];
