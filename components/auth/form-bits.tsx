@@ -1,5 +1,6 @@
 "use client";
 
+import { useState } from "react";
 import { useFormStatus } from "react-dom";
 import { buttonClass } from "@/components/ui/button";
 
@@ -14,9 +15,13 @@ export function fieldError(state: FormResult, name: string): string | undefined 
   return state && !state.ok ? state.issues?.find((i) => i.path === name)?.message : undefined;
 }
 
-export function Field({ label, name, state, hint, ...input }: React.InputHTMLAttributes<HTMLInputElement> & { label: string; name: string; state: FormResult; hint?: string }) {
+export function Field({ label, name, state, hint, defaultValue, ...input }: React.InputHTMLAttributes<HTMLInputElement> & { label: string; name: string; state: FormResult; hint?: string }) {
   const err = fieldError(state, name);
   const id = `f-${name}`;
+  // React resets a form after its action runs; keep what was typed (except passwords)
+  // so a failed attempt does not wipe the e-mail address.
+  const [value, setValue] = useState(String(defaultValue ?? ""));
+  const keep = input.type !== "password" ? { value, onChange: (e: React.ChangeEvent<HTMLInputElement>) => setValue(e.target.value) } : { defaultValue };
   return (
     <div>
       <label htmlFor={id} className="block text-sm font-medium text-ink">{label}</label>
@@ -24,6 +29,7 @@ export function Field({ label, name, state, hint, ...input }: React.InputHTMLAtt
         id={id} name={name} aria-invalid={err ? true : undefined} aria-describedby={err ? `${id}-err` : hint ? `${id}-hint` : undefined}
         className={`mt-1 block w-full rounded-md border bg-white px-3 py-2 text-sm shadow-sm outline-none transition focus:border-copper-500 focus:ring-2 focus:ring-copper-100 ${err ? "border-fault" : "border-ink/15"}`}
         {...input}
+        {...keep}
       />
       {err ? <p id={`${id}-err`} className="mt-1 text-xs text-fault">{err}</p>
         : hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-ink-faint">{hint}</p> : null}

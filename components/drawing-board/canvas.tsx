@@ -37,8 +37,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   const [nodes, setNodes] = useState<PartNode[]>(derived);
   useEffect(() => setNodes(derived), [derived]);
   const flow = useReactFlow();
-  // port names are small print: hide them when zoomed far out
-  const far = useStore((s) => s.transform[2] < 0.7);
+  // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %
+  const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : ""));
 
   const onNodesChange: OnNodesChange<PartNode> = useCallback((changes) => setNodes((ns) => applyNodeChanges(changes, ns)), []);
   const onNodeDragStop = useCallback(
@@ -91,7 +91,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   useBoardKeys(onView);
 
   return (
-    <div className={`lw-canvas relative h-full w-full ${far ? "lw-far" : ""}`} data-testid="board-canvas">
+    <div className={`lw-canvas relative h-full w-full ${band}`} data-testid="board-canvas">
       <ReactFlow<PartNode>
         nodes={nodes}
         edges={edges}
@@ -102,7 +102,6 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         onSelectionChange={onSelectionChange}
         onConnect={onConnect}
         isValidConnection={isValidConnection}
-        onConnectEnd={() => setTimeout(() => store.getState().setHint(store.getState().hint), 0)}
         onDragOver={onDragOver}
         onDrop={onDrop}
         connectionMode={ConnectionMode.Loose}

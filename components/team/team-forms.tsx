@@ -18,7 +18,7 @@ export function InviteForm({ projectId }: { projectId: string }) {
       <FormAlert state={state} />
       <input type="hidden" name="projectId" value={projectId} />
       <div className="grid gap-3 sm:grid-cols-[1fr_10rem_auto] sm:items-end">
-        <Field label="E-mail address" name="email" type="email" required placeholder="name@example.com" state={state} />
+        <Field key={state?.ok ? state.data : "email"} label="E-mail address" name="email" type="email" required placeholder="name@example.com" state={state} />
         <div>
           <label htmlFor="invite-role" className="block text-sm font-medium">Role</label>
           <select id="invite-role" name="role" defaultValue="designer" className={`mt-1 block w-full ${selectClass}`}>

@@ -1,5 +1,5 @@
 import "server-only";
-import type { SchematicAccess } from "@/lib/auth/authorize";
+import { AuthError, requireSchematicAccess, type SchematicAccess } from "@/lib/auth/authorize";
 import { getRevision, getSchematic, listRevisions, type RevisionRecord } from "@/db/queries/schematics";
 import { draftIsReadOnly } from "@/lib/revisions/draft-state";
 
@@ -11,11 +11,25 @@ export interface SchematicView {
   doc: unknown;
   revisions: RevisionRecord[];
   readOnly: boolean;
+  /** The caller's role may edit this schematic (an issued lock aside). */
+  mayEdit: boolean;
   /** Why it is read-only, for the banner. */
   readOnlyReason: "issued" | "role" | null;
 }
 
-export async function schematicView(access: SchematicAccess, canEdit = false): Promise<SchematicView | null> {
+/** Whether the caller may do `mode` on the schematic (lib/auth decides; a refusal is just "no"). */
+export async function mayDo(schematicId: string, mode: "edit" | "size"): Promise<boolean> {
+  try {
+    await requireSchematicAccess(schematicId, mode);
+    return true;
+  } catch (e) {
+    if (e instanceof AuthError) return false;
+    throw e;
+  }
+}
+
+export async function schematicView(access: SchematicAccess): Promise<SchematicView | null> {
+  const canEdit = !access.issuedOnly && (await mayDo(access.schematic.id, "edit"));
   const s = await getSchematic(access.schematic.id);
   if (!s) return null;
   let revisions = await listRevisions(s.id);
@@ -33,6 +47,7 @@ export async function schematicView(access: SchematicAccess, canEdit = false): P
     doc,
     revisions,
     readOnly: issuedLock || !canEdit,
+    mayEdit: canEdit,
     readOnlyReason: issuedLock ? "issued" : canEdit ? null : "role",
   };
 }

@@ -40,6 +40,7 @@ export interface BuildingOptions {
 const RHO = 990; // kg/m³, water near 60 °C: sizing only, the engine uses its own properties
 const CP = 4180; // J/(kg·K)
 const MAX_V = 1.0; // m/s, sizing velocity (design.maxVelocityMps is set 0.5 above it)
+const MAX_R = 250; // Pa/m, sizing gradient (UK practice 150–250 Pa/m, references.md §9)
 const MAX_FLOORS = 20; // per riser in generateBuildingWithPipes: keeps static height ≤ 60 m
 
 const round3 = (x: number) => Math.round(x * 1000) / 1000;
@@ -57,9 +58,13 @@ interface Sized {
 const copper = pipeCatalogue.copper.filter((p) => Number(p.size) >= 15);
 const steel = pipeCatalogue.steel;
 
-/** Smallest catalogue pipe with v ≤ MAX_V; beyond DN50 a steel pipe with a d_i override in 10 mm steps. */
+/**
+ * Smallest catalogue pipe with v ≤ MAX_V and an estimated gradient ≤ MAX_R; beyond
+ * DN50 a steel pipe with a d_i override in 10 mm steps (velocity rule only).
+ */
 function sizeFor(q: number): Sized {
-  const fits = (p: PipeSize) => q / 3600 / ((Math.PI * (p.innerDiameterMm / 1000) ** 2) / 4) <= MAX_V;
+  const fits = (p: PipeSize) =>
+    q / 3600 / ((Math.PI * (p.innerDiameterMm / 1000) ** 2) / 4) <= MAX_V && gradientPaPerM(q, p.innerDiameterMm) <= MAX_R;
   const cu = copper.find(fits);
   if (cu) return { material: "copper", size: cu.size, innerDiameterMm: cu.innerDiameterMm };
   const st = steel.find(fits);
@@ -79,11 +84,11 @@ function gradientPaPerM(q: number, dMm: number): number {
 
 /** Pipes the generator makes for a building (without extra valves). */
 export function buildingPipeCount(floors: number, radiatorsPerFloor: number, risers = 1): number {
-  // boiler→pump, tee→boiler, vessel leg (3); basement main up to each riser tee, flow and
-  // return (2(R−1)); per riser: riser segments (2F), floor branches off the tees (2(F−1)),
+  // plant room (12: isolation valves, safety valve, pump, bypass, vessel, strainer); basement
+  // main up to each riser tee, flow and return (2(R−1)); per riser: riser segments (2F), floor branches off the tees (2(F−1)),
   // zone valve→manifold (F), radiator tails (2NF).
   const perRiser = 2 * floors + 2 * (floors - 1) + floors + 2 * radiatorsPerFloor * floors;
-  return 3 + 2 * (risers - 1) + risers * perRiser;
+  return 12 + 2 * (risers - 1) + risers * perRiser;
 }
 
 export function generateBuilding(options: BuildingOptions): Schematic {
@@ -112,7 +117,8 @@ export function generateBuilding(options: BuildingOptions): Schematic {
       ...(s.override ? { innerDiameterMm: s.override } : {}),
     });
   };
-  const kvFor = (q: number, dpKpa: number) => Math.max(0.1, Math.round((q / Math.sqrt(dpKpa / 100)) * 100) / 100);
+  // Kv for a drop of dpKpa at q, within the schema's 0.1…1000 (very large plant: valves lose a little more)
+  const kvFor = (q: number, dpKpa: number) => Math.min(1000, Math.max(0.1, Math.round((q / Math.sqrt(dpKpa / 100)) * 100) / 100));
 
   // Loads in a fixed ±25 % pattern so that circuits differ and balancing has work to do.
   const loadOf = (floor: number, i: number) => Math.round(meanLoadW * (0.75 + 0.125 * ((floor * 3 + i * 7) % 5)));
@@ -133,42 +139,59 @@ export function generateBuilding(options: BuildingOptions): Schematic {
   const yOf = (k: number) => (F - k) * 300 + 100;
   const yBase = yOf(1) + 300;
 
+  // Plant room, drawn left of the risers: flow along yBase, return along yBase + 200.
+  const kvBig = (dpKpa: number) => kvFor(qTotal, dpKpa);
   parts.push({
     id: "boiler", type: "boiler", x: 0, y: yBase + 100, label: "Boiler",
-    props: { ratedOutputKw: Math.ceil((riserW * R * 1.1) / 1000), minFlowM3h: 0, kv: kvFor(qTotal, 20), waterVolumeL: 20, minSystemVolumeL: null, pumpCurve: null },
+    props: { ratedOutputKw: Math.ceil((riserW * R * 1.1) / 1000), minFlowM3h: 0, kv: kvBig(20), waterVolumeL: 20, minSystemVolumeL: null, pumpCurve: null },
   });
-  parts.push({ id: "t-ev", type: "tee", x: 100, y: yBase + 200, label: "Tee, expansion vessel", props: {} });
-  parts.push({ id: "ev", type: "expansion-vessel", x: 100, y: yBase + 300, label: "Expansion vessel", props: { volumeL: 50, prechargeBar: null } });
+  parts.push({ id: "iso-f", type: "isolation-valve", x: 100, y: yBase, label: "Isolation valve, boiler flow", props: { kv: kvBig(0.5), open: true } });
+  parts.push({ id: "t-sv", type: "tee", x: 200, y: yBase, label: "Tee, safety valve", props: {} });
+  parts.push({ id: "t-bpf", type: "tee", x: 400, y: yBase, label: "Tee, bypass flow", props: {} });
+  parts.push({ id: "bp", type: "dp-bypass-valve", x: 400, y: yBase + 100, label: "Differential-pressure bypass", props: { kvs: kvFor(qTotal * 0.2, 10), openingKpa: null } });
+  parts.push({ id: "t-bpr", type: "tee", x: 400, y: yBase + 200, label: "Tee, bypass return", props: {} });
+  parts.push({ id: "t-ev", type: "tee", x: 300, y: yBase + 200, label: "Tee, expansion vessel", props: {} });
+  parts.push({ id: "str", type: "strainer", x: 200, y: yBase + 200, label: "Strainer", props: { kv: kvBig(3) } });
+  parts.push({ id: "iso-r", type: "isolation-valve", x: 100, y: yBase + 200, label: "Isolation valve, boiler return", props: { kv: kvBig(0.5), open: true } });
 
   // Pump curve through an estimate of the index circuit (farthest riser, top floor) with margin.
   let indexPa = 0;
   for (let j = 1; j <= R; j++) indexPa += 2 * gradientPaPerM(qRiserTotal * (R - j + 1), sizeFor(qRiserTotal * (R - j + 1)).innerDiameterMm) * 10;
   for (let k = 1; k <= F; k++) indexPa += 2 * gradientPaPerM(above(k), sizeFor(above(k)).innerDiameterMm) * storeyM;
-  const headKpa = 20 + (indexPa * 1.3) / 1000 + 5 + 25; // boiler 20, fittings ×1.3, zone valve 5, floor + radiator 25
+  const headKpa = 24 + (indexPa * 1.3) / 1000 + 5 + 25; // boiler 20 + valves 4, fittings ×1.3, zone valve 5, floor + radiator 25
   const h = Math.ceil(headKpa * 1.15);
   parts.push({
-    id: "pump", type: "pump", x: 100, y: yBase, label: "Circulating pump",
+    id: "pump", type: "pump", x: 300, y: yBase, label: "Circulating pump",
     props: { curve: [[0, Math.round(h * 1.35)], [round3(qTotal), h], [round3(qTotal * 1.6), Math.round(h * 0.45)]] as [number, number][] },
   });
-  pipe("boiler-pump", "boiler.flow", "pump.in", qTotal, 1.5, fit({ elbow: 2 }));
-  pipe("ev-leg", "t-ev.c", "ev.connection", 0.01, 1, fit({ teeBranch: 1 }));
-  pipe("ev-boiler", "t-ev.b", "boiler.return", qTotal, 1.5, fit({ elbow: 2, teeRun: 1 }));
+  pipe("plant-f1", "boiler.flow", "iso-f.a", qTotal, 1.5, fit({ elbow: 2 }));
+  pipe("plant-f2", "iso-f.b", "t-sv.a", qTotal, 0.5);
+  pipe("plant-f3", "t-sv.b", "pump.in", qTotal, 0.8, fit({ teeRun: 1 }));
+  pipe("plant-f4", "pump.out", "t-bpf.a", qTotal, 0.8);
+  pipe("bp-f", "t-bpf.c", "bp.a", qTotal * 0.2, 0.5, fit({ teeBranch: 1 }));
+  pipe("bp-r", "bp.b", "t-bpr.c", qTotal * 0.2, 0.5, fit({ teeBranch: 1 }));
+  pipe("plant-r1", "t-bpr.b", "t-ev.a", qTotal, 0.8, fit({ teeRun: 1 }));
+  pipe("plant-r2", "t-ev.b", "str.a", qTotal, 0.5, fit({ teeRun: 1 }));
+  pipe("plant-r3", "str.b", "iso-r.a", qTotal, 0.5);
+  pipe("plant-r4", "iso-r.b", "boiler.return", qTotal, 1.5, fit({ elbow: 2 }));
+  pipe("ev-leg", "t-ev.c", "ev.connection", 0.5, 1, fit({ teeBranch: 1 }));
+  pipe("sv-leg", "t-sv.c", "sv.connection", 0.5, 0.3, fit({ teeBranch: 1 }));
 
   // Basement main: tees m{j} (flow) and n{j} (return) feed risers 1…R−1; riser R hangs off their ends.
   for (let j = 1; j < R; j++) {
-    const x = 200 + (j - 1) * wingW;
+    const x = 600 + (j - 1) * wingW;
     parts.push({ id: `m${j}`, type: "tee", x, y: yBase, label: `Main flow tee, riser ${j}`, props: {} });
     parts.push({ id: `n${j}`, type: "tee", x: x + 60, y: yBase + 200, label: `Main return tee, riser ${j}`, props: {} });
     const q = qRiserTotal * (R - j + 1); // flow arriving at tee j
-    pipe(`main-f${j}`, j === 1 ? "pump.out" : `m${j - 1}.b`, `m${j}.a`, q, j === 1 ? 2 : 10, fit({ elbow: j === 1 ? 2 : 0, teeRun: 1 }));
-    pipe(`main-r${j}`, `n${j}.a`, j === 1 ? "t-ev.a" : `n${j - 1}.b`, q, j === 1 ? 2 : 10, fit({ elbow: j === 1 ? 2 : 0, teeRun: 1 }));
+    pipe(`main-f${j}`, j === 1 ? "t-bpf.b" : `m${j - 1}.b`, `m${j}.a`, q, j === 1 ? 2 : 10, fit({ elbow: j === 1 ? 2 : 0, teeRun: 1 }));
+    pipe(`main-r${j}`, `n${j}.a`, j === 1 ? "t-bpr.a" : `n${j - 1}.b`, q, j === 1 ? 2 : 10, fit({ elbow: j === 1 ? 2 : 0, teeRun: 1 }));
   }
 
   for (let j = 1; j <= R; j++) {
     const pre = R === 1 ? "" : `w${j}-`; // ids stay short for the one-riser building
-    const x0 = 200 + (j - 1) * wingW;
-    const feedF = R === 1 ? "pump.out" : j < R ? `m${j}.c` : `m${R - 1}.b`;
-    const feedR = R === 1 ? "t-ev.a" : j < R ? `n${j}.c` : `n${R - 1}.b`;
+    const x0 = 600 + (j - 1) * wingW;
+    const feedF = R === 1 ? "t-bpf.b" : j < R ? `m${j}.c` : `m${R - 1}.b`;
+    const feedR = R === 1 ? "t-bpr.a" : j < R ? `n${j}.c` : `n${R - 1}.b`;
     for (let k = 1; k <= F; k++) {
       const y = yOf(k);
       const top = k === F;
@@ -217,18 +240,34 @@ export function generateBuilding(options: BuildingOptions): Schematic {
       }
     }
   }
+  // Safety valve, vessel and fill after EN 12828 Annex D (references.md §8.1), sized on the
+  // water content drawn here with e = 2.5 % (≥ 2.24 % for 10 → 70 °C) and 20 % spare.
   const staticM = F * storeyM;
+  const p0 = Math.round((staticM / 10 + 0.2) * 10) / 10;
+  const svBar = Math.min(16, Math.ceil(p0 + 2.5));
+  const pe = svBar <= 5 ? svBar - 0.5 : 0.9 * svBar;
+  let systemL = 20;
+  for (const p of pipes) {
+    const d = p.innerDiameterMm ?? pipeCatalogue[p.material].find((c) => c.size === p.size)!.innerDiameterMm;
+    systemL += ((Math.PI * d * d) / 4 / 1000) * p.lengthM;
+  }
+  for (const p of parts) if (p.type === "radiator") systemL += (p.props as { waterVolumeL: number }).waterVolumeL;
+  const reserveL = Math.max(0.005 * systemL, 3);
+  const vesselL = Math.ceil((((0.025 * systemL + reserveL) * (pe + 1)) / (pe - p0)) * 1.2 / 10) * 10;
+  const minFill = ((p0 + 1) * vesselL) / (vesselL - reserveL) - 1;
+  const fillBar = Math.ceil(Math.max(p0 + 0.3, minFill + 0.05) * 10) / 10;
+  parts.push({ id: "ev", type: "expansion-vessel", x: 300, y: yBase + 300, label: `Expansion vessel ${vesselL} L`, props: { volumeL: vesselL, prechargeBar: p0 } });
+  parts.push({ id: "sv", type: "safety-valve", x: 200, y: yBase - 100, label: `Safety valve ${svBar} bar`, props: { setBar: svBar } });
+
   return {
     format: "loopwright/schematic",
     version: 1,
     name: `Generated building — ${R} riser${R > 1 ? "s" : ""} × ${F} floors × ${N} radiators`,
     fluid: { kind: "water" },
     design: {
-      flowTemperatureC: tf, returnTemperatureC: tr,
-      // fill ≈ static head + 0.5 bar; safety valve well above fill + expansion
-      coldFillPressureBar: Math.round((staticM / 10 + 0.5) * 10) / 10,
-      safetyValveBar: Math.min(16, Math.max(3, Math.ceil(staticM / 10 + 2))), staticHeightM: staticM,
-      maxVelocityMps: MAX_V + 0.5, targetGradientPaPerM: 300, fillTemperatureC: 10, maxFlowTemperatureC: null,
+      flowTemperatureC: tf, returnTemperatureC: tr, coldFillPressureBar: fillBar,
+      safetyValveBar: svBar, staticHeightM: staticM,
+      maxVelocityMps: MAX_V, targetGradientPaPerM: 300, fillTemperatureC: 10, maxFlowTemperatureC: null,
       minOutdoorTemperatureC: null,
     },
     parts,
@@ -238,7 +277,7 @@ export function generateBuilding(options: BuildingOptions): Schematic {
 }
 
 /**
- * A building with exactly `targetPipes` pipes (≥ 8): radiators per floor grow
+ * A building with exactly `targetPipes` pipes (≥ 17): radiators per floor grow
  * with the size (≈ √target / 5, 4…48), floors up to 20 per riser, as many
  * risers as needed, and isolation valves on radiator tails make up the
  * remainder. Falls back to fewer radiators per floor when the remainder does
@@ -246,7 +285,7 @@ export function generateBuilding(options: BuildingOptions): Schematic {
  */
 export function generateBuildingWithPipes(targetPipes: number, options: Partial<BuildingOptions> = {}): Schematic {
   const target = Math.floor(targetPipes);
-  if (!(target >= 8)) throw new RangeError("targetPipes must be at least 8");
+  if (!(target >= 17)) throw new RangeError("targetPipes must be at least 17");
   const n0 = options.radiatorsPerFloor ?? Math.min(48, Math.max(4, Math.round(Math.sqrt(target) / 5)));
   for (let n = n0; n >= 1; n--) {
     for (let risers = 1; risers <= target; risers++) {

@@ -16,7 +16,8 @@ import { linkIn, mailTo } from "./helpers/mail";
 // invitations, bad input, and the audit log.
 
 const uniq = () => randomUUID().slice(0, 8);
-const email = (tag: string) => `${tag}-${uniq()}@example.test`;
+const made: string[] = [];
+const email = (tag: string) => { const e = `${tag}-${uniq()}@example.test`; made.push(e); return e; };
 const ip = () => `10.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}`;
 
 async function whoAmI(cookie: string | null) {
@@ -31,7 +32,7 @@ async function auditRows(action: string, target?: string) {
 beforeAll(() => { expect(process.env.DATABASE_URL ?? "").toMatch(/_test$/); });
 afterAll(async () => {
   await dropFixtures();
-  await db()("users").where("email", "like", "%@example.test").delete();
+  await db()("users").whereIn("email", made).delete();
   await db()("organisations").where("name", "like", "Test firm %").delete();
   await db().destroy();
   await pgPool().end();

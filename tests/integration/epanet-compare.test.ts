@@ -170,34 +170,38 @@ describe("series loop vs EPANET 2.2 (Rossman et al. 2020, US EPA)", () => {
     const ep = runEpanet(doc, results.fluid.kinematicViscosityM2s!, chain, "n0", "n10", q / 3.6);
     const rho = results.fluid.densityKgM3!;
     const rows: string[] = [];
+    const checks: { what: string; deviation: number; tolerance: number }[] = [];
     for (const e of chain) {
       const epKpa = (rho * G_EPANET * ep.headlossM.get(e.id)!) / 1000;
       if (e.kind === "pipe") {
         const r = pipeRes.get(e.id)!;
         expect(r.flowM3h).toBeCloseTo(q, 9);
         const engineKpa = r.pressureDropKpa!;
-        // raw: Colebrook (engine) vs Swamee–Jain (EPANET), ≤ 0.9 % for Re ≥ 1e4 (references §3.1)
-        expect(r.reynolds!).toBeGreaterThan(1e4);
-        expect(Math.abs(engineKpa / epKpa - 1)).toBeLessThan(0.01);
-        // tight: swap the engine's friction factor for Swamee–Jain, keep its fittings part
         const pipe = doc.pipes.find((x) => x.id === e.id)!;
         const row = findPipeSize(pipe.material as PipeMaterial, pipe.size)!;
-        const dM = row.innerDiameterMm / 1000;
+        const relRough = row.roughnessMm / row.innerDiameterMm;
+        // raw: Colebrook (engine) vs Swamee–Jain (EPANET): ≤ 0.9 % for Re ≥ 1e4 and ε/D ≤ 1e-3,
+        // ≤ 3.1 % for Re ≥ 4e3 and ε/D ≤ 1e-2 (references §3.1 grid scan) → 1 % / 3.5 %
+        expect(r.reynolds!).toBeGreaterThan(1e4);
+        const rawTol = relRough <= 1e-3 ? 0.01 : 0.035;
+        checks.push({ what: `${e.id} raw`, deviation: engineKpa / epKpa - 1, tolerance: rawTol });
+        // tight: swap the engine's friction factor for Swamee–Jain, keep its fittings part
         const dynKpa = (rho * r.velocityMps! ** 2) / 2 / 1000;
-        const frictionKpa = ((r.frictionFactor! * pipe.lengthM) / dM) * dynKpa;
-        const fSJ = swameeJain(r.reynolds!, row.roughnessMm / row.innerDiameterMm);
+        const frictionKpa = ((r.frictionFactor! * pipe.lengthM) / (row.innerDiameterMm / 1000)) * dynKpa;
+        const fSJ = swameeJain(r.reynolds!, relRough);
         const adjustedKpa = engineKpa - frictionKpa + frictionKpa * (fSJ / r.frictionFactor!);
-        expect(Math.abs(adjustedKpa / epKpa - 1)).toBeLessThan(5e-4);
-        rows.push(`${e.id} ${pipe.material} ${pipe.size}: engine ${engineKpa.toFixed(4)} kPa, EPANET ${epKpa.toFixed(4)} kPa (${((engineKpa / epKpa - 1) * 100).toFixed(3)} %), SJ-adjusted ${((adjustedKpa / epKpa - 1) * 100).toFixed(4)} %`);
+        checks.push({ what: `${e.id} SJ-adjusted`, deviation: adjustedKpa / epKpa - 1, tolerance: 5e-4 });
+        rows.push(`${e.id} ${pipe.material} ${pipe.size} Re ${r.reynolds!.toFixed(0)}: engine ${engineKpa.toFixed(4)} kPa, EPANET ${epKpa.toFixed(4)} kPa (${((engineKpa / epKpa - 1) * 100).toFixed(3)} %), SJ-adjusted ${((adjustedKpa / epKpa - 1) * 100).toFixed(4)} %`);
       } else {
         const part = heating.parts.find((x) => x.id === e.id);
         if (!part || part.pressureDropKpa === null) continue; // not every source reports its own drop
         // both sides are (Q/Kv)²·ρ/1000 bar: agreement only limited by EPANET's 0.02517 rounding of 8/(gπ²)
-        expect(Math.abs(part.pressureDropKpa / epKpa - 1)).toBeLessThan(5e-4);
-        rows.push(`${e.id} Kv ${e.kv}: engine ${part.pressureDropKpa.toFixed(4)} kPa, EPANET ${epKpa.toFixed(4)} kPa`);
+        checks.push({ what: `${e.id} Kv`, deviation: part.pressureDropKpa / epKpa - 1, tolerance: 5e-4 });
+        rows.push(`${e.id} Kv ${e.kv}: engine ${part.pressureDropKpa.toFixed(4)} kPa, EPANET ${epKpa.toFixed(4)} kPa (${((part.pressureDropKpa / epKpa - 1) * 100).toFixed(4)} %)`);
       }
     }
     console.log(`series loop at ${q.toFixed(4)} m³/h\n  ${rows.join("\n  ")}`);
+    for (const c of checks) expect(Math.abs(c.deviation), c.what).toBeLessThan(c.tolerance);
   });
 });
 

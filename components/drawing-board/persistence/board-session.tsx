@@ -15,7 +15,6 @@ import { useAutosave } from "./use-autosave";
 interface Props {
   view: SchematicView;
   role: ProjectRole;
-  canEdit: boolean;
   canSize: boolean;
   units: UnitPrefs;
   children: ReactNode;
@@ -28,7 +27,8 @@ type Opened = { doc: Schematic; lockVersion: number; readOnly: boolean; key: num
  * store is made here (one per opening) so "Reload theirs" can swap in a fresh
  * store with the stored draft by bumping `key`, without leaving the page.
  */
-export function BoardSession({ view, role, canEdit, canSize, units, children }: Props) {
+export function BoardSession({ view, role, canSize, units, children }: Props) {
+  const canEdit = view.mayEdit;
   const first = parseSchematic(view.doc);
   const [opened, setOpened] = useState<Opened | null>(() =>
     first.ok ? { doc: first.doc, lockVersion: view.schematic.lockVersion, readOnly: view.readOnly, key: 0 } : null);
@@ -64,7 +64,7 @@ export function BoardSession({ view, role, canEdit, canSize, units, children }: 
   return (
     <UnitsProvider initial={units}>
       <BoardStoreProvider key={opened.key} store={store} initialDoc={opened.doc} readOnly={opened.readOnly}>
-        <Saving view={view} role={role} canEdit={canEdit} canSize={canSize} opened={opened} revisions={revisions}
+        <Saving view={view} role={role} canSize={canSize} opened={opened} revisions={revisions}
           setRevisions={setRevisions} readOnlyReason={readOnlyReason} reload={reload} unlock={unlock}>
           {children}
         </Saving>
@@ -79,7 +79,7 @@ function Saving(p: Omit<Props, "units"> & { opened: Opened; revisions: Schematic
   const save = useAutosave(p.view.schematic.id, p.opened.lockVersion, !p.opened.readOnly);
   const value = {
     schematicId: p.view.schematic.id, projectId: p.view.schematic.projectId, name: p.view.schematic.name, role: p.role,
-    canEdit: p.canEdit && !p.opened.readOnly, mayEdit: p.canEdit, canSize: p.canSize, readOnlyReason: p.readOnlyReason,
+    canEdit: p.view.mayEdit && !p.opened.readOnly, mayEdit: p.view.mayEdit, canSize: p.canSize, readOnlyReason: p.readOnlyReason,
     revisions: p.revisions, setRevisions: p.setRevisions, save, reload: p.reload, unlock: p.unlock,
   };
   return (

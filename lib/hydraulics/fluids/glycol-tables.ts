@@ -1,8 +1,9 @@
 /**
  * Glycol–water property tables by VOLUME percent of glycol, at 1–2 bar.
  *
- * Source: ASHRAE Handbook—Fundamentals (2001, ch. 21 "Physical Properties of
- * Secondary Coolants (Brines)", propylene/ethylene glycol tables by volume), as
+ * Source: ASHRAE Handbook—Fundamentals 2001, chapter "Physical Properties of
+ * Secondary Coolants (Brines)" (ch. 21 in 2001 from memory; ch. 31 in the 2009–2021
+ * eds.), propylene/ethylene glycol tables by volume, as
  * represented by the ASHRAE-2001 polynomial fits shipped in CoolProp 8.0.0
  * (`INCOMP::APG`, `INCOMP::AEG`, volume-fraction based, fit validity 10–60 % vol,
  * −35…100 °C above freezing). Values were evaluated from those fits when this

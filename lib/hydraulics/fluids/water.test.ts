@@ -11,13 +11,15 @@ describe("IAPWS-IF97 region 1 — official check values (IAPWS R7-97 Table 5)", 
   // 8.0.0's IF97 backend when this test was written. Values are printed to 9 significant
   // digits, so 1e-8 relative proves the 34 coefficients are typed in exactly.
   it.each([
-    [300, 3, 0.100215168e-2, 4.17301218],
-    [300, 80, 0.971180894e-3, 4.01008987],
-    [500, 3, 0.1202418e-2, 4.65580682],
-  ])("T %d K, p %d MPa → v %f m³/kg, cp %f kJ/(kg·K)", (tK, pMpa, v, cpKj) => {
+    [300, 3, 0.100215168e-2, 4.17301218, 0.115331273e3],
+    [300, 80, 0.971180894e-3, 4.01008987, 0.184142828e3],
+    [500, 3, 0.1202418e-2, 4.65580682, 0.975542239e3],
+  ])("T %d K, p %d MPa → v %f m³/kg, cp %f kJ/(kg·K), h %f kJ/kg", (tK, pMpa, v, cpKj, hKj) => {
     const s = if97Region1(tK, pMpa);
     expect(rel(s.specificVolumeM3Kg, v)).toBeLessThan(1e-8);
     expect(rel(s.specificHeatJkgK, cpKj * 1000)).toBeLessThan(1e-8);
+    // h exercises the J = 1 coefficients that neither v nor cp depends on
+    expect(rel(s.enthalpyJkg, hKj * 1000)).toBeLessThan(1e-8);
   });
   it("rejects states outside region 1", () => {
     expect(() => if97Region1(273.0, 0.1)).toThrow(RangeError);

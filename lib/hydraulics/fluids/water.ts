@@ -2,8 +2,8 @@
  * Liquid water properties at about 1 atm, 0–100 °C.
  *
  * - Density and isobaric heat capacity: IAPWS-IF97 region 1 (IAPWS R7-97) at
- *   p = 0.101325 MPa. Agrees with IAPWS-95 (the scientific formulation) to
- *   better than 0.001 % in ρ and 0.1 % in cp over 0–100 °C.
+ *   p = 0.101325 MPa. Deviation from IAPWS-95 (the scientific formulation),
+ *   checked every 5 K over 0–100 °C: ρ ≤ 0.0015 %, cp ≤ 0.053 %, μ ≤ 0.003 %.
  * - Viscosity: IAPWS 2008 (R12-08) evaluated at the IF97 density.
  * Pressure effect: 2 bar instead of 1 atm changes ρ by ~0.04 kg/m³ — ignored.
  * At 99.97–100 °C the state at 1 atm is metastable liquid; the formulation is

@@ -4,6 +4,20 @@
  * and throw RangeError naming the argument otherwise.
  */
 
+/** Stated validity of each formula (data, for findings): Re and ε/D ranges. */
+export const FRICTION_VALIDITY = {
+  laminar: { reMin: 0, reMax: 2300, relRoughnessMin: 0, relRoughnessMax: 1 },
+  colebrook: { reMin: 4000, reMax: 1e8, relRoughnessMin: 0, relRoughnessMax: 0.05 },
+  swameeJain: { reMin: 5000, reMax: 1e8, relRoughnessMin: 1e-6, relRoughnessMax: 1e-2 },
+  haaland: { reMin: 4000, reMax: 1e8, relRoughnessMin: 0, relRoughnessMax: 0.05 },
+} as const;
+
+/** Whether (re, relRoughness) lies in the stated validity of `method`. */
+export function frictionFormulaValid(method: keyof typeof FRICTION_VALIDITY, re: number, relRoughness: number): boolean {
+  const v = FRICTION_VALIDITY[method];
+  return re >= v.reMin && re <= v.reMax && relRoughness >= v.relRoughnessMin && relRoughness <= v.relRoughnessMax;
+}
+
 function checkArgs(re: number, relRoughness: number): void {
   if (!(re > 0) || !Number.isFinite(re)) throw new RangeError(`re must be > 0 and finite, got ${re}`);
   if (!(relRoughness >= 0 && relRoughness < 1)) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { colebrook, darcyFrictionFactor, fullyRoughFrictionFactor, haaland, laminar, reynolds, swameeJain } from "./index";
+import { colebrook, darcyFrictionFactor, frictionFormulaValid, fullyRoughFrictionFactor, haaland, laminar, reynolds, swameeJain } from "./index";
 
 const rel = (a: number, e: number) => Math.abs(a / e - 1);
 
@@ -109,5 +109,14 @@ describe("reynolds", () => {
     expect(reynolds(-1, 0.02, 1e-6)).toBeCloseTo(20_000, 9);
     expect(() => reynolds(1, 0, 1e-6)).toThrow(/innerDiameterM/);
     expect(() => reynolds(1, 0.02, 0)).toThrow(/kinematicViscosityM2s/);
+  });
+});
+
+describe("validity as data", () => {
+  it("Swamee–Jain is stated for Re ≥ 5000 and 1e-6 ≤ ε/D ≤ 1e-2 (Swamee & Jain 1976)", () => {
+    expect(frictionFormulaValid("swameeJain", 1e5, 1e-4)).toBe(true);
+    expect(frictionFormulaValid("swameeJain", 3000, 1e-4)).toBe(false);
+    expect(frictionFormulaValid("swameeJain", 1e5, 0)).toBe(false);
+    expect(frictionFormulaValid("colebrook", 1e5, 0)).toBe(true);
   });
 });

@@ -5,5 +5,5 @@
  * (laminar / linear transition 2300–4000 / Colebrook).
  */
 export { reynolds } from "./reynolds";
-export { colebrook, fullyRoughFrictionFactor, haaland, laminar, swameeJain } from "./colebrook";
+export { colebrook, FRICTION_VALIDITY, frictionFormulaValid, fullyRoughFrictionFactor, haaland, laminar, swameeJain } from "./colebrook";
 export { darcyFrictionFactor, RE_LAMINAR_MAX, RE_TURBULENT_MIN, type FlowRegime } from "./darcy";

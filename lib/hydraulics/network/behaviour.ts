@@ -7,7 +7,7 @@
  * (Rossman, EPANET 2.2 manual §12.2: closed links get a very large resistance).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { pipeDpDerivative, pipePressureDrop } from "@/lib/hydraulics/pipes";
+import { pipePressureDrop } from "@/lib/hydraulics/pipes";
 import { maxFlowM3h, pumpHeadKpa, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 import type { Evaluate } from "./gga";
 
@@ -46,27 +46,35 @@ export interface PipeGeometry {
   sumK: number;
 }
 
-/** Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts), slope from the regime's exponent. */
+/**
+ * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope uses
+ * the local exponent of each part of the loss: friction ∝ q in laminar flow
+ * (Hagen–Poiseuille), ≈ q^1.75…2 turbulent (Blasius … fully rough; 1.9 taken),
+ * 2 in the interpolated transition zone; fittings ∝ q². An approximate slope
+ * only slows Newton slightly; the heads and flows still satisfy the exact law.
+ * The last evaluation is cached: on a tree, design flows repeat exactly.
+ */
 export function pipeLaw(geom: PipeGeometry, densityKgM3: number, kinematicViscosityM2s: number): Evaluate {
   // Below 1e-6 m³/h the flow is laminar in any catalogue pipe: h is linear there.
   const qTiny = 1e-6;
   const input = { ...geom, densityKgM3, kinematicViscosityM2s, flowM3s: 0 };
+  let lastA = -1;
+  let lastH = 0;
+  let lastG = 0;
   return (q, out) => {
     const a = Math.max(Math.abs(q), qTiny);
-    input.flowM3s = a / 3600;
-    const r = pipePressureDrop(input);
-    const fr = r.frictionDpPa / 1000;
-    const fit = r.fittingsDpPa / 1000;
-    let g: number;
-    // Friction loss ∝ q in laminar flow, ≈ q^1.75…2 turbulent (Blasius…fully rough);
-    // fittings ∝ q². The transition zone uses the numerical slope.
-    if (r.regime === "laminar") g = (fr + 2 * fit) / a;
-    else if (r.regime === "turbulent") g = (1.9 * fr + 2 * fit) / a;
-    else g = pipeDpDerivative(input) / 1000 / 3600;
-    g += OPEN_R;
-    const h = fr + fit;
-    out[0] = Math.abs(q) < qTiny ? (h / qTiny) * q + OPEN_R * q : Math.sign(q) * h + OPEN_R * q;
-    out[1] = g;
+    if (a !== lastA) {
+      input.flowM3s = a / 3600;
+      const r = pipePressureDrop(input);
+      const fr = r.frictionDpPa / 1000;
+      const fit = r.fittingsDpPa / 1000;
+      const n = r.regime === "laminar" ? 1 : r.regime === "turbulent" ? 1.9 : 2;
+      lastA = a;
+      lastH = fr + fit;
+      lastG = (n * fr + 2 * fit) / a + OPEN_R;
+    }
+    out[0] = Math.abs(q) < qTiny ? (lastH / qTiny) * q + OPEN_R * q : Math.sign(q) * lastH + OPEN_R * q;
+    out[1] = lastG;
   };
 }
 

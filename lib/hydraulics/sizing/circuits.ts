@@ -136,7 +136,13 @@ function circuitOf(
   const h = sol.head;
   const r = links[root]!;
   const dp = h[r.to]! - h[load.inNode]! + dpLoad + (h[load.outNode]! - h[r.from]!);
-  const path = flowLeg && returnLeg ? [...flowLeg.reverse(), load.id, ...returnLeg] : [];
+  let path: string[] = [];
+  if (flowLeg && returnLeg) {
+    path = new Array<string>(flowLeg.length + 1 + returnLeg.length);
+    for (let i = 0; i < flowLeg.length; i++) path[i] = flowLeg[flowLeg.length - 1 - i]!;
+    path[flowLeg.length] = load.id;
+    for (let i = 0; i < returnLeg.length; i++) path[flowLeg.length + 1 + i] = returnLeg[i]!;
+  }
   return { ...base, pump: r.id, path, pressureDropKpa: Number.isFinite(dp) ? dp : null };
 }
 

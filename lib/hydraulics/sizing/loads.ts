@@ -45,8 +45,7 @@ export function ratedSourceW(ctx: EngineContext): number {
   return w;
 }
 
-function loadPowerW(ctx: EngineContext, part: Part, mode: "heating" | "hot-water", dT: number): number | null {
-  const hasDiverter = ctx.doc.parts.some((p) => p.type === "diverter-valve");
+function loadPowerW(ctx: EngineContext, part: Part, mode: "heating" | "hot-water", dT: number, hasDiverter: boolean): number | null {
   if (mode === "hot-water") return part.type === "cylinder" ? ratedSourceW(ctx) : 0;
   switch (part.type) {
     case "radiator":
@@ -66,6 +65,7 @@ export function designLoads(ctx: EngineContext, mode: "heating" | "hot-water"): 
   const { fluid, model, doc } = ctx;
   if (!fluid) return [];
   const out: DesignLoad[] = [];
+  const hasDiverter = doc.parts.some((p) => p.type === "diverter-valve");
   const flowOf = (powerW: number, dT: number) =>
     flowForHeat({ powerW, deltaTK: dT, densityKgM3: fluid.densityKgM3, specificHeatJkgK: fluid.specificHeatJkgK }) * 3600;
   for (const link of model.links) {
@@ -81,7 +81,7 @@ export function designLoads(ctx: EngineContext, mode: "heating" | "hot-water"): 
     const own = "deltaTK" in part.props ? (part.props as { deltaTK: number | null }).deltaTK : null;
     const dT = own ?? ctx.deltaTK;
     if (dT === null || !(dT > 0)) continue;
-    const w = loadPowerW(ctx, part, mode, dT);
+    const w = loadPowerW(ctx, part, mode, dT, hasDiverter);
     if (w === null) {
       ctx.findings.warning(
         "load.no-heat-load",

@@ -18,7 +18,8 @@ const clean = (q: number) => (Math.abs(q) < NO_FLOW_M3H ? 0 : q);
 /** The link that carries the part's flow for reporting (selected diverter side, header primary pass). */
 function mainLink(ctx: EngineContext, ks: number[], state: NetworkState): number {
   if (ks.length === 1) return ks[0]!;
-  const open = ks.find((k) => !isCut(ctx, ctx.model.links[k]!, { ...state, purpose: "simulate" }));
+  const sim: NetworkState = { ...state, purpose: "simulate" };
+  const open = ks.find((k) => !isCut(ctx, ctx.model.links[k]!, sim));
   return open ?? ks[0]!;
 }
 

@@ -16,7 +16,11 @@ export function suggestSize(ctx: EngineContext, pipeIndex: number, flowM3h: numb
   const fluid = ctx.fluid!;
   const geom = ctx.pipeGeom[pipeIndex];
   if (Math.abs(flowM3h) < 1e-9) return null;
+  const qM3s = Math.abs(flowM3h) / 3600;
   for (const row of pipeCatalogue[pipe.material]) {
+    // Velocity first: it needs no friction factor and rules out most small sizes.
+    const dM = row.innerDiameterMm / 1000;
+    if (qM3s / ((Math.PI * dM * dM) / 4) > ctx.doc.design.maxVelocityMps) continue;
     const r = pipePressureDrop({
       flowM3s: Math.abs(flowM3h) / 3600,
       innerDiameterM: row.innerDiameterMm / 1000,

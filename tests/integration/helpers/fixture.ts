@@ -13,7 +13,9 @@ export type Fixture = {
   revisionId: string; invitationId: string; invitationToken: string; lockVersion: number; doc: Record<string, unknown>;
 };
 
-export const FIXTURE_PREFIX = "Matrix fixture";
+// Tagged per test file (each vitest file has its own module instance), so one file's
+// clean-up never removes another file's fixtures while it runs.
+export const FIXTURE_PREFIX = `Matrix fixture ${randomUUID().slice(0, 6)}`;
 const roles = ["owner", "designer", "reviewer", "installer", "trainee"] as const;
 
 export async function makeFixture(o: { revisionStatus?: "draft" | "in-review" | "approved" | "issued" } = {}): Promise<Fixture> {

@@ -9,6 +9,7 @@ import { saveUserUnits } from "@/db/queries/user-preferences";
 import { parseSchematic } from "@/lib/schematic";
 import { invalidDocument, refusal, Refused, runChecked } from "@/lib/persistence/outcome";
 import { size } from "@/lib/persistence/size";
+import { makeVariant } from "@/lib/persistence/variants";
 import { findTransition, revisionStatuses } from "@/lib/revisions/transitions";
 import { unitPrefsSchema } from "@/lib/units/display";
 
@@ -59,18 +60,11 @@ export async function setRevisionStatus(input: { revisionId: string; status: str
   });
 }
 
-/** A copy of the given document as a new schematic: a team variant for designers, a private practice one otherwise. */
+/** The board's document as a new schematic beside this one (lib/persistence/variants.ts). */
 export async function saveAsVariant(input: { schematicId: string; doc: unknown; name: string }) {
   return runChecked(async () => {
     const i = z.object({ schematicId: uuid, doc: z.unknown(), name: z.string().trim().min(1).max(160) }).parse(input);
-    const { user, role, schematic } = await requireSchematicAccess(i.schematicId, "read");
-    const { role: allowed } = await requireProjectRole(schematic.projectId, role === "trainee" ? "variant.practice" : "schematic.edit");
-    const parsed = parseSchematic(i.doc);
-    if (!parsed.ok) return invalidDocument(parsed.issues);
-    const name = await q.freeSchematicName(schematic.projectId, i.name);
-    const r = await q.createSchematic({ projectId: schematic.projectId, name, doc: parsed.doc, userId: user.id,
-      kind: allowed === "trainee" ? "practice" : "team", variantOf: schematic.id });
-    return r.ok ? { id: r.schematic.id, name: r.schematic.name, projectId: r.schematic.projectId } : refusal(r);
+    return makeVariant(i.schematicId, i.doc, i.name);
   });
 }
 

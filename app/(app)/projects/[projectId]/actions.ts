@@ -1,0 +1,29 @@
+"use server";
+
+import { z } from "zod";
+import { requireProjectRole } from "@/lib/auth/authorize";
+import { createSchematic } from "@/db/queries/schematics";
+import { refusal, runChecked } from "@/lib/persistence/outcome";
+import { makeVariant } from "@/lib/persistence/variants";
+import { parseSchematic } from "@/lib/schematic";
+
+// Project page actions: a new, empty team schematic (designers, owners) and a private
+// practice copy of a team schematic (trainees; designers get a team variant).
+
+export async function createSchematicAction(input: { projectId: string; name: string }) {
+  return runChecked(async () => {
+    const i = z.object({ projectId: z.uuid(), name: z.string().trim().min(1, "give the schematic a name").max(160) }).parse(input);
+    const { user } = await requireProjectRole(i.projectId, "schematic.edit");
+    const blank = parseSchematic({ format: "loopwright/schematic", version: 1, name: i.name });
+    if (!blank.ok) throw new Error("the blank schematic does not parse"); // a bug, not user input
+    const r = await createSchematic({ projectId: i.projectId, name: i.name, doc: blank.doc, userId: user.id, kind: "team" });
+    return r.ok ? { id: r.schematic.id } : refusal(r);
+  });
+}
+
+export async function newVariantAction(input: { schematicId: string }) {
+  return runChecked(async () => {
+    const i = z.object({ schematicId: z.uuid() }).parse(input);
+    return makeVariant(i.schematicId, undefined, undefined);
+  });
+}

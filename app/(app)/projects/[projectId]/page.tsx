@@ -1,0 +1,67 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { AuthError, can, requireProjectRole } from "@/lib/auth/authorize";
+import { getProjectHead } from "@/db/queries/project-admin";
+import { listProjectSchematics } from "@/db/queries/schematics";
+import { NewSchematicForm } from "@/components/projects/new-schematic-form";
+import { SchematicCard } from "@/components/projects/schematic-card";
+
+export const metadata: Metadata = { title: "Project" };
+export const dynamic = "force-dynamic";
+
+export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
+  const { projectId } = await params;
+  let access;
+  try {
+    access = await requireProjectRole(projectId, "project.read");
+  } catch (e) {
+    if (e instanceof AuthError && e.status === 404) notFound();
+    throw e;
+  }
+  const { user, role } = access;
+  const [project, schematics] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id)]);
+  if (!project) notFound();
+  // Variants are listed under the schematic they were made from; orphans stand on their own.
+  const ids = new Set(schematics.map((s) => s.id));
+  const roots = schematics.filter((s) => !s.variantOf || !ids.has(s.variantOf));
+  const variantsOf = (id: string) => schematics.filter((s) => s.variantOf === id);
+  const canCreate = can(role, "schematic.edit");
+  const canPractice = role === "trainee" ? can(role, "variant.practice") : canCreate;
+
+  return (
+    <main className="mx-auto max-w-5xl px-4 py-8">
+      <p className="text-sm text-ink-faint"><Link href="/projects" className="hover:text-copper-600">Projects</Link> / {project.name}</p>
+      <div className="mt-1 flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 className="text-2xl font-semibold">{project.name}</h1>
+          <p className="mt-1 text-sm text-ink-soft">{project.client}{project.site && <> · <span className="text-ink-faint">{project.site}</span></>}</p>
+        </div>
+        <p className="text-sm text-ink-soft">
+          You are <span className="font-medium text-copper-700">{role}</span> ·{" "}
+          <Link href={`/projects/${projectId}/team`} className="text-copper-600 hover:underline">Team</Link>
+        </p>
+      </div>
+
+      <section className="mt-8" aria-labelledby="schematics-h">
+        <div className="flex flex-wrap items-center justify-between gap-3">
+          <h2 id="schematics-h" className="text-lg font-semibold">Schematics <span className="num text-sm font-normal text-ink-faint">{schematics.length}</span></h2>
+          {canCreate && <NewSchematicForm projectId={projectId} />}
+        </div>
+        {roots.length === 0 && <p className="mt-4 text-sm text-ink-soft">No schematics yet.{canCreate ? " Create the first one." : ""}</p>}
+        <ul className="mt-4 space-y-4" data-testid="schematic-list">
+          {roots.map((s) => (
+            <li key={s.id}>
+              <SchematicCard projectId={projectId} s={s} canVariant={canPractice} variantLabel={role === "trainee" ? "New practice variant" : "New variant"} />
+              {variantsOf(s.id).length > 0 && (
+                <ul className="mt-2 ml-4 space-y-2 border-l-2 border-copper-100 pl-4 sm:ml-6">
+                  {variantsOf(s.id).map((v) => <li key={v.id}><SchematicCard projectId={projectId} s={v} compact /></li>)}
+                </ul>
+              )}
+            </li>
+          ))}
+        </ul>
+      </section>
+    </main>
+  );
+}

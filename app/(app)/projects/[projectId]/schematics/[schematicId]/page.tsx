@@ -1,0 +1,38 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import { DrawingBoard } from "@/components/drawing-board";
+import { CanvasOverlay } from "@/components/drawing-board/overlay/canvas-overlay";
+import { BoardSession } from "@/components/drawing-board/persistence/board-session";
+import { BoardToolbar } from "@/components/drawing-board/persistence/board-toolbar";
+import { SizingReport } from "@/components/drawing-board/report/sizing-report";
+import { AuthError, requireSchematicAccess } from "@/lib/auth/authorize";
+import { mayDo, schematicView } from "@/lib/persistence/schematic-view";
+import { unitPrefsFrom } from "@/lib/units/display";
+
+export const metadata: Metadata = { title: "Drawing board" };
+export const dynamic = "force-dynamic";
+
+type Params = { params: Promise<{ projectId: string; schematicId: string }> };
+
+export default async function BoardPage({ params }: Params) {
+  const { projectId, schematicId } = await params;
+  let access;
+  try {
+    access = await requireSchematicAccess(schematicId, "read");
+  } catch (e) {
+    if (e instanceof AuthError && e.status !== 401) {
+      if (e.status === 404) notFound();
+      return <p role="alert" className="mx-auto max-w-xl px-4 py-10 text-ink-soft">{e.message}</p>;
+    }
+    throw e;
+  }
+  if (access.schematic.projectId !== projectId) redirect(`/projects/${access.schematic.projectId}/schematics/${schematicId}`);
+  const [view, canSize] = await Promise.all([schematicView(access), mayDo(schematicId, "size")]);
+  if (!view) notFound();
+
+  return (
+    <BoardSession view={view} role={access.role} canSize={canSize} units={unitPrefsFrom(access.user.preferences)}>
+      <DrawingBoard toolbarSlot={<BoardToolbar />} reportSlot={<SizingReport />} canvasSlot={<CanvasOverlay />} />
+    </BoardSession>
+  );
+}

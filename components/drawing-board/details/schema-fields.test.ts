@@ -1,0 +1,27 @@
+import { describe, expect, it } from "vitest";
+import { partPropsSchemas } from "@/lib/schematic";
+import { fieldsOf, issueMessage, parseNumber } from "./schema-fields";
+
+describe("schema fields", () => {
+  it("reads labels, units, nullability and enums from the props schemas", () => {
+    const rad = fieldsOf(partPropsSchemas.radiator);
+    expect(rad.find((f) => f.name === "outputAtDt50W")).toMatchObject({ kind: "number", label: "EN 442 output at ΔT 50 K", unit: "W", nullable: false });
+    expect(rad.find((f) => f.name === "deltaTK")).toMatchObject({ unit: "K", nullable: true, nullHint: "design flow − return" });
+    expect(rad.find((f) => f.name === "valveKv")).toMatchObject({ unit: "Kv", nullable: true });
+    expect(fieldsOf(partPropsSchemas["diverter-valve"]).find((f) => f.name === "position")).toMatchObject({ kind: "enum", options: ["a", "b"] });
+    expect(fieldsOf(partPropsSchemas.pump)[0]).toMatchObject({ kind: "curve" });
+    expect(fieldsOf(partPropsSchemas.manifold)[0]).toMatchObject({ integer: true });
+    expect(fieldsOf(partPropsSchemas["zone-valve"]).find((f) => f.name === "open")).toMatchObject({ kind: "boolean" });
+  });
+  it("every part type's fields are ones the form can draw", () => {
+    for (const schema of Object.values(partPropsSchemas)) for (const f of fieldsOf(schema)) expect(f.kind).not.toBe("other");
+  });
+  it("parses typed numbers strictly and words issues", () => {
+    expect(parseNumber(" 1,5 ")).toBe(1.5);
+    expect(parseNumber("abc")).toBeNull();
+    expect(parseNumber("")).toBeNull();
+    const r = partPropsSchemas["zone-valve"].safeParse({ kvs: 0 });
+    expect(r.success).toBe(false);
+    if (!r.success) expect(issueMessage(r.error.issues[0]!, "Kv")).toBe("Must be more than 0.");
+  });
+});

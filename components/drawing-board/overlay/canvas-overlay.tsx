@@ -1,0 +1,27 @@
+"use client";
+
+import { useState } from "react";
+import { useBoard } from "../store";
+import { FindingsList } from "./findings-list";
+import { VelocityLegend } from "./velocity-legend";
+
+/** Over the canvas once sized: the velocity legend (bottom left) and the findings panel (top right, foldable). */
+export function CanvasOverlay() {
+  const count = useBoard((s) => s.results?.findings.length ?? null);
+  const [open, setOpen] = useState(true);
+  if (count === null) return null;
+  return (
+    <>
+      <div className="pointer-events-auto absolute bottom-3 left-3 z-10 hidden sm:block"><VelocityLegend /></div>
+      <div className="pointer-events-auto absolute top-2 right-2 z-10 w-[min(22rem,calc(100%-1rem))]">
+        <div className="rounded-md border border-ink/10 bg-white/95 shadow-sm">
+          <button type="button" onClick={() => setOpen((o) => !o)} aria-expanded={open}
+            className="flex w-full items-center justify-between px-3 py-1.5 text-sm font-medium">
+            Findings <span className="num text-xs text-ink-faint">{count} {open ? "▴" : "▾"}</span>
+          </button>
+          {open && <div className="max-h-[40vh] overflow-auto border-t border-ink/10 px-1 py-1"><FindingsList /></div>}
+        </div>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,16 @@
+"use client";
+
+import { UnitsPicker } from "@/components/units/units-picker";
+import { SizeItButton } from "../overlay/size-it-button";
+import { RevisionStatusBar } from "./revision-status-bar";
+
+/** board-2's part of the board's top bar (DrawingBoard toolbarSlot). */
+export function BoardToolbar() {
+  return (
+    <>
+      <RevisionStatusBar />
+      <UnitsPicker />
+      <SizeItButton />
+    </>
+  );
+}

@@ -1,0 +1,50 @@
+import Link from "next/link";
+import type { SchematicSummary } from "@/db/queries/schematic-rows";
+import { NewVariantButton } from "./new-variant-button";
+import { StatusBadge } from "./status-badge";
+
+const date = (iso: string) => new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
+
+/** One schematic on the project page: latest revision status, its revisions, open and variant actions. */
+export function SchematicCard({ projectId, s, compact = false, canVariant = false, variantLabel = "New variant" }: {
+  projectId: string; s: SchematicSummary; compact?: boolean; canVariant?: boolean; variantLabel?: string;
+}) {
+  const href = `/projects/${projectId}/schematics/${s.id}`;
+  return (
+    <article className={`rounded-lg border border-ink/10 bg-white shadow-sm ${compact ? "p-3" : "p-4"}`} data-testid="schematic-card">
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <div className="min-w-0">
+          <h3 className="font-semibold"><Link href={href} className="hover:text-copper-600">{s.name}</Link></h3>
+          <p className="mt-0.5 text-xs text-ink-faint">
+            {s.kind === "practice" ? <span className="mr-1 rounded bg-paper-dark px-1.5 py-0.5 text-ink-soft">practice · private</span> : null}
+            {s.variantOf && s.kind === "team" ? "variant · " : ""}
+            {s.ownerName ? `by ${s.ownerName} · ` : ""}updated {date(s.updatedAt)}
+          </p>
+        </div>
+        <div className="flex items-center gap-2">
+          {s.latest ? <><span className="num text-xs text-ink-soft">Rev {s.latest.number}</span><StatusBadge status={s.latest.status} /></>
+            : <span className="text-xs text-ink-faint">draft only</span>}
+        </div>
+      </div>
+      <div className="mt-3 flex flex-wrap items-center gap-2">
+        <Link href={href} className="rounded-md bg-copper-500 px-3 py-1.5 text-sm font-medium text-white hover:bg-copper-600">Open</Link>
+        {canVariant && <NewVariantButton schematicId={s.id} label={variantLabel} />}
+      </div>
+      {s.revisions.length > 0 && (
+        <details className="mt-3 text-sm">
+          <summary className="cursor-pointer text-ink-soft hover:text-ink">Revisions ({s.revisions.length})</summary>
+          <ol className="mt-2 space-y-1">
+            {s.revisions.map((r) => (
+              <li key={r.id} className="flex flex-wrap items-center gap-2">
+                <span className="num w-12 text-ink-soft">Rev {r.number}</span>
+                <StatusBadge status={r.status} />
+                <span className="min-w-0 flex-1 truncate">{r.message || <span className="text-ink-faint">no message</span>}</span>
+                <span className="text-xs text-ink-faint">{r.authorName ?? "—"} · {date(r.createdAt)}</span>
+              </li>
+            ))}
+          </ol>
+        </details>
+      )}
+    </article>
+  );
+}
