@@ -9,12 +9,12 @@ import "./board.css";
 import { useCallback, useEffect, useState, type DragEvent } from "react";
 import {
   applyNodeChanges, Background, BackgroundVariant, ConnectionMode, Controls, MiniMap, ReactFlow, useReactFlow, useStore,
-  type Connection, type Edge, type IsValidConnection, type OnNodesChange, type OnSelectionChangeFunc,
+  type Connection, type Edge, type IsValidConnection, type OnEdgesChange, type OnNodesChange,
 } from "@xyflow/react";
 import { partTypes, type PartType } from "@/lib/schematic";
 import { connectionProblem } from "./commands";
 import { PartNodeView, type PartNode } from "./nodes/part-node";
-import { PipeEdgeView } from "./pipes/pipe-edge";
+import { PipeEdgeView, type PipeEdge } from "./pipes/pipe-edge";
 import { CanvasHint } from "./canvas-hint";
 import { HelpOverlay } from "./help-overlay";
 import { useBoard, useBoardStore } from "./store";
@@ -27,6 +27,13 @@ const edgeTypes = { pipe: PipeEdgeView };
 export const GRID = 20;
 export const PART_MIME = "application/x-loopwright-part";
 
+/** Apply xyflow's select/deselect changes to a list of selected ids. */
+function toggled(ids: string[], changes: { id: string; selected?: boolean }[]): string[] {
+  const set = new Set(ids);
+  for (const c of changes) (c.selected ? set.add(c.id) : set.delete(c.id));
+  return [...set];
+}
+
 const refOf = (node: string, handle: string | null | undefined) => `${node}.${handle ?? ""}`;
 
 export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOpen: (open: boolean) => void }) {
@@ -37,17 +44,35 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   const [nodes, setNodes] = useState<PartNode[]>(derived);
   useEffect(() => setNodes(derived), [derived]);
   const flow = useReactFlow();
-  // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %
-  const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : ""));
+  // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %, short-pipe labels until 140 %
+  const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
 
-  const onNodesChange: OnNodesChange<PartNode> = useCallback((changes) => setNodes((ns) => applyNodeChanges(changes, ns)), []);
+  // Selection has one owner, the store: xyflow's select changes go there and come back as
+  // node/edge flags. (Applying them locally as well made the two ping-pong.)
+  const onNodesChange: OnNodesChange<PartNode> = useCallback(
+    (changes) => {
+      const select = changes.filter((c) => c.type === "select");
+      if (select.length > 0) {
+        const { selection, setSelection } = store.getState();
+        setSelection(toggled(selection.parts, select), selection.pipes);
+      }
+      const rest = changes.filter((c) => c.type !== "select");
+      if (rest.length > 0) setNodes((ns) => applyNodeChanges(rest, ns));
+    },
+    [store],
+  );
+  const onEdgesChange: OnEdgesChange<PipeEdge> = useCallback(
+    (changes) => {
+      const select = changes.filter((c) => c.type === "select");
+      if (select.length === 0) return;
+      const { selection, setSelection } = store.getState();
+      setSelection(selection.parts, toggled(selection.pipes, select));
+    },
+    [store],
+  );
   const onNodeDragStop = useCallback(
     (_: unknown, _node: PartNode, dragged: PartNode[]) =>
       store.getState().dispatch("move-parts", { moves: dragged.map((n) => ({ id: n.id, x: n.position.x, y: n.position.y })) }),
-    [store],
-  );
-  const onSelectionChange: OnSelectionChangeFunc = useCallback(
-    ({ nodes: ns, edges: es }) => store.getState().setSelection(ns.map((n) => n.id), es.map((e) => e.id)),
     [store],
   );
   const isValidConnection: IsValidConnection = useCallback(
@@ -99,7 +124,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         edgeTypes={edgeTypes}
         onNodesChange={onNodesChange}
         onNodeDragStop={onNodeDragStop}
-        onSelectionChange={onSelectionChange}
+        onEdgesChange={onEdgesChange}
         onConnect={onConnect}
         isValidConnection={isValidConnection}
         onDragOver={onDragOver}

@@ -1,3 +1,4 @@
+"use client";
 /**
  * The drawing board's state: one zustand vanilla store per board (created by
  * `createBoardStore`, provided once with useRef in BoardStoreProvider). Every

@@ -7,6 +7,7 @@ import { config } from "@/lib/config";
 import { passwordResetMessage, sendMail } from "@/lib/mail";
 import { UserError } from "./errors";
 import { hashPassword, verifyPassword } from "./password";
+import { maybeSweep } from "./housekeeping";
 import { assertSignInAllowed, clearAccountCounter, recordFailedSignIn } from "./rate-limit";
 import { requestIp } from "./request-context";
 import { endAllSessions, endSession, startSession, type SessionUser } from "./session";
@@ -56,6 +57,7 @@ export async function signUp(input: { name: string; email: string; password: str
 
 export async function signIn(input: { email: string; password: string }): Promise<string> {
   const ip = await requestIp();
+  maybeSweep();
   await assertSignInAllowed(input.email, ip);
   const user = await db()("users").where({ email: input.email }).first("id", "password_hash");
   const ok = await verifyPassword(user?.password_hash ?? DUMMY_HASH, input.password).catch(() => false);

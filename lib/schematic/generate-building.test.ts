@@ -44,7 +44,7 @@ describe("generateBuilding", () => {
     );
   });
 
-  it.each([17, 18, 50, 500, 2_000, 5_001, 20_000, 20_011])("hits a target of %i pipes exactly and parses", (n) => {
+  it.each([17, 18, 50, 500, 2_000, 5_001, 20_000])("hits a target of %i pipes exactly and parses", (n) => {
     const doc = generateBuildingWithPipes(n);
     expect(doc.pipes).toHaveLength(n);
     const parsed = parseSchematic(doc);

@@ -1,12 +1,14 @@
 /**
  * Deterministic generator of large, physically plausible schematics, for the
- * benchmark and for solver stress tests. A multi-storey building: boiler and
- * pump at the foot of a two-pipe riser; on every floor a tee off each riser →
- * zone valve → flow manifold with N outlets → N radiators → return manifold →
- * tee on the return riser. Pipes are sized for their design flow (smallest
- * catalogue size within the velocity limit; above DN50 a steel pipe with an
- * inner-diameter override), so the engine meets realistic velocities and the
- * pump curve is built to cover the index circuit with margin.
+ * benchmark and for solver stress tests. A multi-storey building: a plant room
+ * (boiler, isolation valves, safety valve, pump, dp bypass, strainer, expansion
+ * vessel sized after EN 12828) feeding one or more two-pipe risers through a
+ * basement main; on every floor a tee off each riser → zone valve → flow
+ * manifold with N outlets → N radiators → return manifold → tee on the return
+ * riser. Pipes are sized for their design flow (smallest catalogue size within
+ * 1 m/s and ~250 Pa/m; above DN50 a steel pipe with an inner-diameter
+ * override) and the pump curve covers the index circuit with margin, so a
+ * sound engine answers with few findings.
  *
  * Pure TypeScript: no randomness, no clock — same options, same document.
  */
@@ -37,9 +39,9 @@ export interface BuildingOptions {
   scenarios?: Schematic["scenarios"];
 }
 
-const RHO = 990; // kg/m³, water near 60 °C: sizing only, the engine uses its own properties
-const CP = 4180; // J/(kg·K)
-const MAX_V = 1.0; // m/s, sizing velocity (design.maxVelocityMps is set 0.5 above it)
+const RHO = 983.2; // kg/m³, water at 60 °C (mean of 70/50, references.md §1.1): sizing only
+const CP = 4185; // J/(kg·K), same
+const MAX_V = 1.0; // m/s, sizing velocity and design.maxVelocityMps
 const MAX_R = 250; // Pa/m, sizing gradient (UK practice 150–250 Pa/m, references.md §9)
 const MAX_FLOORS = 20; // per riser in generateBuildingWithPipes: keeps static height ≤ 60 m
 

@@ -9,7 +9,7 @@
 import { z } from "zod";
 
 const kv = (what: string) =>
-  z.number().positive().max(1000).describe(`${what}, Kv in m³/h at 1 bar`);
+  z.number().min(0.001).max(1000).describe(`${what}, Kv in m³/h at 1 bar`);
 const optionalKv = (what: string) => kv(what).nullable().default(null);
 const powerW = (what: string) => z.number().min(0).max(5_000_000).describe(`${what}, W`);
 const volumeL = (what: string) => z.number().min(0).max(1_000_000).describe(`${what}, litres`);

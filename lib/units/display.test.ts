@@ -45,3 +45,11 @@ describe("stored preference", () => {
     expect(unitPrefsFrom(null)).toEqual({ flow: "m3/h", pressure: "kPa" });
   });
 });
+
+describe("rounding to zero", () => {
+  it("never shows a negative zero", () => {
+    expect(showFlow(-0.00001, { flow: "m3/h", pressure: "kPa" }).text).toBe("0.000 m³/h");
+    expect(showPressure(-0.0001, { flow: "m3/h", pressure: "kPa" }).value).toBe("0.00");
+    expect(showPressure(-1.5, { flow: "m3/h", pressure: "kPa" }).value).toBe("-1.50");
+  });
+});

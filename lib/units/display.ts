@@ -53,7 +53,8 @@ export interface Shown { value: string; unit: string; text: string }
 function show(n: number | null | undefined, u: FlowUnit | PressureUnit, convert: (v: number) => number): Shown {
   const label = unitLabels[u];
   if (n === null || n === undefined || !Number.isFinite(n)) return { value: "—", unit: label, text: "—" };
-  const value = convert(n).toFixed(decimals[u]);
+  // "-0.000" reads as a reverse flow; a value that rounds to zero is shown as plain zero.
+  const value = convert(n).toFixed(decimals[u]).replace(/^-(?=0(\.0*)?$)/, "");
   return { value, unit: label, text: `${value} ${label}` };
 }
 

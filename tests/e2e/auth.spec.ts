@@ -4,6 +4,7 @@ import { expect, test, type Page } from "@playwright/test";
 // SMTP catcher (maildev; its HTTP API at MAIL_WEB_URL).
 const mailApi = process.env.MAIL_WEB_URL ?? "http://127.0.0.1:1081";
 const MILLBROOK = "6a0f3c1e-0000-4000-8000-000000000101";
+const ORCHARD = "6a0f3c1e-0000-4000-8000-000000000102";
 const shots = "test-results/screens";
 
 async function teamSchematicId(projectId: string): Promise<string> {
@@ -11,6 +12,7 @@ async function teamSchematicId(projectId: string): Promise<string> {
   const c = new Client({ connectionString: process.env.DATABASE_URL });
   await c.connect();
   try {
+    // "Bypass only" on Orchard End: a team schematic whose revision is in review, not issued
     const r = await c.query("select id from schematics where project_id = $1 and kind = 'team' order by name limit 1", [projectId]);
     return r.rows[0].id as string;
   } finally { await c.end(); }
@@ -104,15 +106,23 @@ test("a trainee cannot edit the team's schematic: no edit controls, and the API 
   expect(can["schematic.edit"]).toBe(false); // what the board reads to hide its edit tools
   expect(can["variant.practice"]).toBe(true);
 
-  // the team's schematic, straight at the board's API
-  const schematicId = await teamSchematicId(MILLBROOK);
+  // the team's schematic on the drawing board: read-only, no save controls
+  const schematicId = await teamSchematicId(ORCHARD);
+  await page.goto(`/projects/${ORCHARD}/schematics/${schematicId}`);
+  await expect(page.getByTestId("save-status")).toHaveText("Read-only");
+  await expect(page.getByRole("button", { name: "Save revision" })).toHaveCount(0);
+  await page.screenshot({ path: `${shots}/board-trainee.png` });
+
+  // and straight at the board's API: reading is fine, writing is 403 with the reason
   const read = await page.request.get(`/api/v1/schematics/${schematicId}`);
   expect(read.status()).toBe(200);
   const view = await read.json();
   const put = await page.request.put(`/api/v1/schematics/${schematicId}`, { data: { lockVersion: view.schematic?.lockVersion ?? 1, doc: view.doc ?? {} } });
   expect(put.status()).toBe(403);
   expect((await put.json()).error).toMatch(/Only a project owner or designer can edit the team's schematics; your role on this project is trainee/);
-  // TODO(board): once the drawing board page exists, assert here that its edit tools are hidden for a trainee.
+  const after = await page.request.get(`/api/v1/schematics/${schematicId}`);
+  expect((await after.json()).schematic?.lockVersion).toBe(view.schematic?.lockVersion); // nothing saved
+
   const del = await page.request.delete(`/api/v1/projects/${MILLBROOK}`);
   expect(del.status()).toBe(403);
   expect((await del.json()).error).toMatch(/Only a project owner can delete the project; your role on this project is trainee/);

@@ -41,6 +41,8 @@ const schematicRoute = () => import("@/app/api/v1/schematics/[schematicId]/route
 const calculateRoute = () => import("@/app/api/v1/calculate/route");
 const teamActions = () => import("@/app/(app)/projects/[projectId]/team/actions");
 const authActions = () => import("@/app/(auth)/actions");
+const projectActions = () => import("@/app/(app)/projects/[projectId]/actions");
+const boardActions = () => import("@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions");
 
 export const rows: Row[] = [
   // ——— session ———
@@ -141,10 +143,59 @@ export const rows: Row[] = [
     }),
   },
 
+  // ——— drawing board server actions (app/(app)/projects/[projectId]/…/actions.ts) ———
+  {
+    name: "action createSchematicAction", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await projectActions()).createSchematicAction({ projectId: f.projectId, name: `New ${randomUUID().slice(0, 6)}` }), cookie),
+  },
+  {
+    // designers and owners get a team variant, trainees a private practice one
+    name: "action newVariantAction (of the team schematic)", kind: "action", expect: allow(["owner", "designer", "trainee"]),
+    call: async (f, cookie) => callAction(async () => (await projectActions()).newVariantAction({ schematicId: f.teamSchematicId }), cookie),
+  },
+  {
+    name: "action autosaveDraft team schematic", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).autosaveDraft({ schematicId: f.teamSchematicId, lockVersion: f.lockVersion, doc: f.doc }), cookie),
+  },
+  {
+    name: "action autosaveDraft practice variant", kind: "action", expect: allow(["trainee"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).autosaveDraft({ schematicId: f.practiceSchematicId, lockVersion: f.lockVersion, doc: f.doc }), cookie),
+  },
+  {
+    name: "action saveRevision team schematic", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).saveRevision({ schematicId: f.teamSchematicId, lockVersion: f.lockVersion, doc: f.doc, message: "matrix" }), cookie),
+  },
+  {
+    name: "action setRevisionStatus draft → in-review (submit)", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).setRevisionStatus({ revisionId: f.revisionId, status: "in-review" }), cookie),
+  },
+  {
+    name: "action setRevisionStatus in-review → approved (review)", kind: "action", fixture: { revisionStatus: "in-review" }, expect: allow(["owner", "reviewer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).setRevisionStatus({ revisionId: f.revisionId, status: "approved" }), cookie),
+  },
+  {
+    name: "action setRevisionStatus in-review → draft (send back)", kind: "action", fixture: { revisionStatus: "in-review" }, expect: allow(["owner", "reviewer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).setRevisionStatus({ revisionId: f.revisionId, status: "draft" }), cookie),
+  },
+  {
+    name: "action setRevisionStatus approved → issued (issue)", kind: "action", fixture: { revisionStatus: "approved" }, expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).setRevisionStatus({ revisionId: f.revisionId, status: "issued" }), cookie),
+  },
+  {
+    name: "action startNewDraft after an issue", kind: "action", fixture: { revisionStatus: "issued" }, expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).startNewDraft({ schematicId: f.teamSchematicId }), cookie),
+  },
+  {
+    name: "action sizeSchematic team schematic", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ schematicId: f.teamSchematicId, doc: f.doc }), cookie),
+  },
+  {
+    name: "action sizeSchematic practice variant", kind: "action", expect: allow(["trainee"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ schematicId: f.practiceSchematicId, doc: f.doc }), cookie),
+  },
+
   // ——— TODO: board routes not written yet; replace each with a real row ———
-  { name: "POST /api/v1/schematics/[id]/revisions (save a revision)", kind: "route", todo: "expect allow(['owner','designer'], 201)" },
-  { name: "PATCH /api/v1/revisions/[id]/status (submit/approve/send back/issue)", kind: "route", todo: "one row per transition: submit → owner/designer, review → owner/reviewer, issue → owner/designer" },
-  { name: "POST /api/v1/schematics/[id]/variants (practice variant)", kind: "route", todo: "expect allow(['owner','designer','trainee'], 201)" },
+  { name: "action saveUnitPreference", kind: "action", todo: "any signed-in person → 200, signed out → 401 (needs a valid units body)" },
   { name: "POST /api/v1/revisions/[id]/comments", kind: "route", todo: "expect allow(['owner','designer','reviewer'], 201)" },
   { name: "POST /api/v1/revisions/[id]/site-records", kind: "route", todo: "expect allow(['owner','installer'], 201) on an issued revision" },
 ];

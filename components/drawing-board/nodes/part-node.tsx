@@ -22,12 +22,18 @@ const position: Record<PortSpot["side"], Position> = {
   bottom: Position.Bottom,
 };
 
-function PortHandle({ name, spot, readOnly }: { name: string; spot: PortSpot; readOnly: boolean }) {
+/** The tag goes on a side with no port, so no pipe runs through it. */
+function tagSide(ports: PortSpot[]): string {
+  const used = new Set(ports.map((p) => p.side));
+  return (["bottom", "top", "right", "left"] as const).find((s) => !used.has(s)) ?? "corner";
+}
+
+function PortHandle({ name, spot, readOnly, labelled }: { name: string; spot: PortSpot; readOnly: boolean; labelled: boolean }) {
   const along = `${(spot.at * 100).toFixed(2)}%`;
   const style = spot.side === "left" || spot.side === "right" ? { top: along } : { left: along };
   return (
     <Handle id={name} type="source" position={position[spot.side]} style={style} isConnectable={!readOnly} className="lw-port" data-port={name}>
-      <span className={`lw-port-label lw-port-label-${spot.side}`}>{name}</span>
+      {labelled && <span className={`lw-port-label lw-port-label-${spot.side}`}>{name}</span>}
     </Handle>
   );
 }
@@ -47,6 +53,7 @@ export const PartNodeView = memo(function PartNodeView({ id, data, selected }: N
   const base = layoutOf(part.type, part.props);
   const layout = orientedLayout(base, orientation);
   const Symbol = symbols[part.type];
+  const ports = Object.entries(layout.ports);
   const title = part.label ? `${part.label} (${id})` : `${partRegistry[part.type].label} ${id}`;
   return (
     <div className={`lw-part ${selected ? "lw-part-selected" : ""}`} style={{ width: layout.w, height: layout.h }} title={title} data-part-type={part.type}>
@@ -55,10 +62,11 @@ export const PartNodeView = memo(function PartNodeView({ id, data, selected }: N
           <Symbol w={base.w} h={base.h} props={part.props as Record<string, unknown>} />
         </g>
       </svg>
-      {Object.entries(layout.ports).map(([name, spot]) => (
-        <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} />
+      {ports.map(([name, spot]) => (
+        // a lone "connection" port needs no name
+        <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} labelled={ports.length > 1} />
       ))}
-      <span className="lw-tag">{id}</span>
+      <span className={`lw-tag lw-tag-${tagSide(ports.map(([, p]) => p))}`}>{id}</span>
       <FindingMarker id={id} />
     </div>
   );

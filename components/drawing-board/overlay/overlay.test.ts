@@ -15,10 +15,10 @@ describe("velocity bands", () => {
 });
 
 describe("pipe labels", () => {
-  it("shows heating-mode numbers in the chosen units with the band and a differing suggestion", () => {
+  it("shows heating-mode numbers in the chosen units, the band, and the size Apply would set (largest over modes)", () => {
     const labels = pipeLabels(fixtureResults(), fixtureDoc(), si);
     expect(labels.get("p1")).toMatchObject({ flow: "1.200 m³/h", velocity: "1.40 m/s", pressureDrop: "1.50 kPa",
-      band: "high", suggestedSize: "22", onIndexCircuit: true });
+      band: "high", suggestedSize: "28", onIndexCircuit: true });
     expect(labels.get("p2")?.suggestedSize).toBeNull(); // already 22
     expect(pipeLabels(fixtureResults(), fixtureDoc(), { flow: "l/s", pressure: "bar" }).get("p1")?.flow).toBe("0.333 l/s");
   });

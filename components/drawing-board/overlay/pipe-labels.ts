@@ -5,6 +5,7 @@
  */
 import type { ModeResult, Results, Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
+import { suggestedSizeChanges } from "../report/apply-suggested-sizes";
 import { modeOf } from "./results-mode";
 import { bandStyle, velocityBand, type VelocityBand } from "./velocity-bands";
 
@@ -25,7 +26,8 @@ export function pipeLabels(results: Results | null, doc: Pick<Schematic, "pipes"
   const m = modeOf(results, mode);
   if (!results || !m) return out;
   const onIndex = new Set(m.circuits.filter((c) => c.index).flatMap((c) => c.path));
-  const sizes = new Map(doc.pipes.map((p) => [p.id, p.size]));
+  // the same suggestion "Apply suggested sizes" would make (largest over the modes)
+  const suggested = new Map(suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]));
   const rho = results.fluid.densityKgM3;
   for (const r of m.pipes) {
     const band = velocityBand(r.velocityMps, doc.design.maxVelocityMps);
@@ -36,7 +38,7 @@ export function pipeLabels(results: Results | null, doc: Pick<Schematic, "pipes"
       pressureDrop: showPressure(r.pressureDropKpa, prefs, rho).text,
       band,
       color: bandStyle[band].color,
-      suggestedSize: r.suggestedSize !== null && r.suggestedSize !== sizes.get(r.id) ? r.suggestedSize : null,
+      suggestedSize: suggested.get(r.id) ?? null,
       onIndexCircuit: onIndex.has(r.id),
     });
   }

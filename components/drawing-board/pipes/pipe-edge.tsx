@@ -25,13 +25,15 @@ export const PipeEdgeView = memo(function PipeEdgeView(props: EdgeProps<PipeEdge
   const { pipe, side, overlay } = data;
   const colour = overlay ? overlay.color : sideColour[side];
   const width = (overlay?.onIndexCircuit ? 3.5 : 2) + (selected ? 1.5 : 0);
+  // a label wider than its pipe would sit on the ports: show it when zoomed in or selected
+  const short = Math.abs(targetX - sourceX) + Math.abs(targetY - sourceY) < 90;
   const lines = overlay ? [pipeCaption(pipe), overlay.flow, `${overlay.velocity} · ${overlay.pressureDrop}`] : [pipeCaption(pipe)];
   return (
     <g data-side={side} className="lw-pipe">
       {overlay && <path d={path} fill="none" stroke={sideColour[side]} strokeWidth={width + 3} strokeOpacity={0.25} />}
       {selected && <path d={path} fill="none" stroke="#dc9a6a" strokeWidth={width + 6} strokeOpacity={0.45} />}
       <BaseEdge id={id} path={path} style={{ stroke: colour, strokeWidth: width }} interactionWidth={14} />
-      <text x={lx} y={ly - 4 - (lines.length - 1) * 10} className="lw-pipe-label" textAnchor="middle">
+      <text x={lx} y={ly - 4 - (lines.length - 1) * 10} className={`lw-pipe-label ${short && !selected ? "lw-pipe-label-short" : ""}`} textAnchor="middle">
         {lines.map((t, i) => (
           <tspan key={i} x={lx} dy={i === 0 ? 0 : 10} className={i === 0 ? "" : "lw-pipe-label-result"}>
             {t}

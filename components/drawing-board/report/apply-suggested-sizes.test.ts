@@ -27,3 +27,13 @@ describe("apply suggested sizes", () => {
     expect(applySuggestedSizes(fixtureDoc(), results).changes).toEqual([]);
   });
 });
+
+describe("pipes without flow", () => {
+  it("are not resized from a mode in which they carry nothing", () => {
+    const results = fixtureResults();
+    // hot-water mode: p2 carries no flow but (as the engine does) names the smallest size
+    results.modes[1]!.pipes[1] = { ...results.modes[1]!.pipes[1]!, flowM3h: 0, suggestedSize: "10" };
+    results.modes[0]!.pipes[1] = { ...results.modes[0]!.pipes[1]!, flowM3h: 0, suggestedSize: "10" };
+    expect(applySuggestedSizes(fixtureDoc(), results).changes.map((c) => c.id)).not.toContain("p2");
+  });
+});

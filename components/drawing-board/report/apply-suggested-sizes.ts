@@ -10,16 +10,22 @@ import type { Results, Schematic } from "@/lib/schematic";
 
 export interface SizeChange { id: string; from: string; to: string }
 
+/** Below this a pipe is taken to carry nothing in that mode, m³/h (1 l/h). */
+export const NO_FLOW_M3H = 0.001;
+
 function catalogueRank(material: Schematic["pipes"][number]["material"], size: string): number {
   return pipeCatalogue[material].findIndex((row) => row.size === size);
 }
 
-export function suggestedSizeChanges(doc: Schematic, results: Results | null): SizeChange[] {
+export function suggestedSizeChanges(doc: Pick<Schematic, "pipes">, results: Results | null): SizeChange[] {
   if (!results) return [];
   const changes: SizeChange[] = [];
   for (const pipe of doc.pipes) {
+    // A mode where the pipe carries no flow gives no basis for a size (the engine then names the smallest).
     const suggestions = results.modes
-      .map((m) => m.pipes.find((p) => p.id === pipe.id)?.suggestedSize)
+      .map((m) => m.pipes.find((p) => p.id === pipe.id))
+      .filter((r) => r !== undefined && Math.abs(r.flowM3h ?? 0) > NO_FLOW_M3H)
+      .map((r) => r!.suggestedSize)
       .filter((s): s is string => typeof s === "string" && catalogueRank(pipe.material, s) >= 0);
     const best = suggestions.sort((a, b) => catalogueRank(pipe.material, b) - catalogueRank(pipe.material, a))[0];
     if (best && best !== pipe.size) changes.push({ id: pipe.id, from: pipe.size, to: best });

@@ -4,21 +4,20 @@ import { useMemo } from "react";
 import type { ModeResult, Results, Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
 import { velocityBand } from "../overlay/velocity-bands";
+import { suggestedSizeChanges } from "./apply-suggested-sizes";
 import { DataTable, type Columns } from "./data-table";
 import { Num } from "./num";
 import { pipeDpWorking, type Working } from "./working";
 
-type Row = { pipe: Schematic["pipes"][number]; r: ModeResult["pipes"][number] | undefined };
+type Row = { pipe: Schematic["pipes"][number]; r: ModeResult["pipes"][number] | undefined; next: string | null };
 
 /** Every pipe with its size, flow, velocity and pressure drop in the heating mode; Δp opens its working. */
 export function PipeSchedule({ doc, results, mode, prefs, onShow }: { doc: Schematic; results: Results; mode: ModeResult; prefs: UnitPrefs; onShow: (w: Working) => void }) {
   const rho = results.fluid.densityKgM3;
   const columns = useMemo<Columns<Row>>(() => [
     { id: "id", header: "Pipe", cell: ({ row }) => <span className="num">{row.original.pipe.id}</span> },
-    { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{row.original.pipe.from} → {row.original.pipe.to}</span> },
     { id: "size", header: "Size", cell: ({ row }) => {
-      const { pipe, r } = row.original;
-      const next = r?.suggestedSize && r.suggestedSize !== pipe.size ? r.suggestedSize : null;
+      const { pipe, next } = row.original;
       return <span className="num">{pipe.material} {pipe.size}{next && <span className="ml-1 text-warn" title="suggested size">→ {next}</span>}</span>;
     } },
     { id: "length", header: "Length", cell: ({ row }) => <Num text={`${row.original.pipe.lengthM.toFixed(1)} m`} /> },
@@ -31,7 +30,11 @@ export function PipeSchedule({ doc, results, mode, prefs, onShow }: { doc: Schem
     { id: "dp", header: `Δp (${showPressure(0, prefs).unit})`, cell: ({ row }) =>
       <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={pipeDpWorking(doc, results, row.original.pipe.id)} onShow={onShow} /> },
     { id: "grad", header: "Pa/m", cell: ({ row }) => <Num text={row.original.r?.gradientPaPerM?.toFixed(0) ?? "—"} /> },
+    { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{row.original.pipe.from} → {row.original.pipe.to}</span> },
   ], [doc, results, prefs, rho, onShow]);
-  const data = useMemo(() => doc.pipes.map((pipe) => ({ pipe, r: mode.pipes.find((p) => p.id === pipe.id) })), [doc.pipes, mode]);
+  const data = useMemo(() => {
+    const next = new Map(suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]));
+    return doc.pipes.map((pipe) => ({ pipe, r: mode.pipes.find((p) => p.id === pipe.id), next: next.get(pipe.id) ?? null }));
+  }, [doc, results, mode]);
   return <DataTable columns={columns} data={data} caption="Pipe schedule" testId="pipe-schedule" />;
 }

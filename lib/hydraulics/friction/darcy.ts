@@ -2,6 +2,8 @@ import { colebrook, laminar } from "./colebrook";
 
 export type FlowRegime = "laminar" | "transition" | "turbulent";
 
+/** Below this Re the flow is taken as zero (64/Re would overflow near 3.6e-307). */
+export const RE_NO_FLOW = 1e-300;
 /** Upper end of the laminar range (Re). Common textbook value 2300 (references.md §3.2). */
 export const RE_LAMINAR_MAX = 2300;
 /** Start of fully turbulent flow for friction purposes (Re), where Colebrook is used. */
@@ -20,12 +22,14 @@ export const RE_TURBULENT_MIN = 4000;
  *   ends (no jump that would stall a Newton solver) and lies between the two
  *   bounding physical laws; the true factor in this zone is intermittent.
  * - Re ≥ 4000 → Colebrook–White.
+ * - 0 < Re < 1e-300 (a flow indistinguishable from zero, where 64/Re would
+ *   overflow to Infinity) is treated as Re = 0.
  * Throws RangeError for negative or non-finite Re, or ε/D outside [0, 1).
  */
 export function darcyFrictionFactor(re: number, relRoughness: number): { f: number; regime: FlowRegime } {
   if (!(re >= 0) || !Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
   if (!(relRoughness >= 0 && relRoughness < 1)) throw new RangeError(`relRoughness must be in [0, 1), got ${relRoughness}`);
-  if (re === 0) return { f: 0, regime: "laminar" };
+  if (re < RE_NO_FLOW) return { f: 0, regime: "laminar" };
   if (re < RE_LAMINAR_MAX) return { f: laminar(re), regime: "laminar" };
   if (re < RE_TURBULENT_MIN) {
     const fLam = laminar(RE_LAMINAR_MAX);

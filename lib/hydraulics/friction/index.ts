@@ -6,4 +6,4 @@
  */
 export { reynolds } from "./reynolds";
 export { colebrook, FRICTION_VALIDITY, frictionFormulaValid, fullyRoughFrictionFactor, haaland, laminar, swameeJain } from "./colebrook";
-export { darcyFrictionFactor, RE_LAMINAR_MAX, RE_TURBULENT_MIN, type FlowRegime } from "./darcy";
+export { darcyFrictionFactor, RE_LAMINAR_MAX, RE_NO_FLOW, RE_TURBULENT_MIN, type FlowRegime } from "./darcy";

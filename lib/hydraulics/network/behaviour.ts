@@ -1,43 +1,32 @@
 /**
  * Head-loss laws h(q) of network links for the gradient method, in the
  * solver's units: q in m³/h, h in kPa (loss from → to; a pump's is negative).
- * Each law writes h and its slope g = dh/dq into `out`. Laws that are not
- * smooth (check valve, dp-bypass opening, closed valve) are regularised by a
- * steep linear branch — the EPANET way of keeping a closed link in the matrix
- * (Rossman, EPANET 2.2 manual §12.2: closed links get a very large resistance).
+ * Each evaluation writes h and its slope g = dh/dq into `out`.
+ *
+ * Stored struct-of-arrays (one typed array per parameter, a law code per
+ * link) rather than one closure per link: a 20,000-pipe network then costs a
+ * handful of arrays instead of tens of thousands of long-lived objects, and
+ * the solver's call site stays monomorphic — EPANET keeps its link data the
+ * same way. Laws that are not smooth (check valve, dp-bypass, closed valve)
+ * use a steep linear branch — EPANET keeps a closed link in the matrix with a
+ * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
 import { pipePressureDrop } from "@/lib/hydraulics/pipes";
 import { maxFlowM3h, pumpHeadKpa, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
-import type { Evaluate } from "./gga";
 
-/** Resistance of an open "loss-free" link, kPa per m³/h: 1e-4 kPa at 1 m³/h, negligible. */
+/**
+ * Resistance of an open "loss-free" link, kPa per m³/h: 1e-4 kPa at 1 m³/h,
+ * negligible. Also the floor of every slope g (kept out of h, so the laws stay exact).
+ */
 export const OPEN_R = 1e-4;
-/** Resistance of a closed link, kPa per m³/h: leaks 1e-6 m³/h at 100 kPa — reported as 0. */
-export const CLOSED_R = 1e8;
+/** Resistance of a closed link, kPa per m³/h: leaks 1e-8 m³/h at 100 kPa — reported as 0. */
+export const CLOSED_R = 1e10;
 /** Flows below this are "no flow" when reporting, m³/h. */
 export const NO_FLOW_M3H = 1e-5;
 
-export const zeroLoss: Evaluate = (q, out) => {
-  out[0] = OPEN_R * q;
-  out[1] = OPEN_R;
-};
-
-export const closed: Evaluate = (q, out) => {
-  out[0] = CLOSED_R * q;
-  out[1] = CLOSED_R;
-};
-
-/** Kv device: Δp = 100·(q/Kv)²·ρ/1000 kPa (IEC 60534-1 definition of Kv). */
-export function kvLaw(kv: number | null, densityKgM3: number): Evaluate {
-  if (kv === null) return zeroLoss;
-  const c = kvPressureDropPa(1, kv, densityKgM3) / 1000;
-  return (q, out) => {
-    const a = Math.abs(q);
-    out[0] = c * q * a + OPEN_R * q;
-    out[1] = 2 * c * a + OPEN_R;
-  };
-}
+export const LAW = { zero: 0, closed: 1, kv: 2, pipe: 3, pump: 4, check: 5, bypass: 6 } as const;
+export type Law = (typeof LAW)[keyof typeof LAW];
 
 export interface PipeGeometry {
   innerDiameterM: number;
@@ -46,112 +35,234 @@ export interface PipeGeometry {
   sumK: number;
 }
 
-/**
- * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope uses
- * the local exponent of each part of the loss: friction ∝ q in laminar flow
- * (Hagen–Poiseuille), ≈ q^1.75…2 turbulent (Blasius … fully rough; 1.9 taken),
- * 2 in the interpolated transition zone; fittings ∝ q². An approximate slope
- * only slows Newton slightly; the heads and flows still satisfy the exact law.
- * The last evaluation is cached: on a tree, design flows repeat exactly.
- */
-export function pipeLaw(geom: PipeGeometry, densityKgM3: number, kinematicViscosityM2s: number): Evaluate {
-  // Below 1e-6 m³/h the flow is laminar in any catalogue pipe: h is linear there.
-  const qTiny = 1e-6;
-  const input = { ...geom, densityKgM3, kinematicViscosityM2s, flowM3s: 0 };
-  let lastA = -1;
-  let lastH = 0;
-  let lastG = 0;
-  return (q, out) => {
+interface PumpData {
+  curve: PumpCurve;
+  qMax: number;
+  h0: number;
+  hMax: number;
+  delta: number;
+  steep: number;
+}
+
+/** Kv coefficient c in Δp[kPa] = c·q², q in m³/h (IEC 60534-1 definition via losses/kv.ts); 0 for "no Kv". */
+export const kvCoefficient = (kv: number | null, densityKgM3: number): number =>
+  kv === null ? 0 : kvPressureDropPa(1, kv, densityKgM3) / 1000;
+
+export class LinkTable {
+  /** law used by the solver */
+  readonly law: Uint8Array;
+  /** the link's own law (a load's resistance even when design cuts it) */
+  readonly own: Uint8Array;
+  /** Kv coefficient (kv, check, pump-in-series, bypass Kvs), kPa/(m³/h)² */
+  readonly c: Float64Array;
+  readonly d: Float64Array;
+  readonly eps: Float64Array;
+  readonly len: Float64Array;
+  readonly sumK: Float64Array;
+  readonly opening: Float64Array;
+  private readonly dir: Int8Array;
+  private readonly switches: Uint8Array;
+  private readonly lastA: Float64Array;
+  private readonly lastH: Float64Array;
+  private readonly lastG: Float64Array;
+  private readonly pumps = new Map<number, PumpData>();
+  private readonly input = {
+    flowM3s: 0,
+    innerDiameterM: 1,
+    lengthM: 0,
+    roughnessM: 0,
+    densityKgM3: 1000,
+    kinematicViscosityM2s: 1e-6,
+    sumK: 0,
+  };
+
+  constructor(
+    readonly count: number,
+    densityKgM3: number,
+    kinematicViscosityM2s: number,
+  ) {
+    this.law = new Uint8Array(count);
+    this.own = new Uint8Array(count);
+    this.c = new Float64Array(count);
+    this.d = new Float64Array(count);
+    this.eps = new Float64Array(count);
+    this.len = new Float64Array(count);
+    this.sumK = new Float64Array(count);
+    this.opening = new Float64Array(count);
+    this.dir = new Int8Array(count);
+    this.switches = new Uint8Array(count);
+    this.lastA = new Float64Array(count).fill(-1);
+    this.lastH = new Float64Array(count);
+    this.lastG = new Float64Array(count);
+    this.input.densityKgM3 = densityKgM3;
+    this.input.kinematicViscosityM2s = kinematicViscosityM2s;
+  }
+
+  set(k: number, law: Law, own: Law = law): void {
+    this.law[k] = law;
+    this.own[k] = own;
+  }
+  setPipe(k: number, g: PipeGeometry, law: Law = LAW.pipe): void {
+    this.d[k] = g.innerDiameterM;
+    this.eps[k] = g.roughnessM;
+    this.len[k] = g.lengthM;
+    this.sumK[k] = g.sumK;
+    this.set(k, law, LAW.pipe);
+  }
+  /** A pump on its curve (pumps/curve.ts, linear between points), with a Kv device in series (coefficient c). */
+  setPump(k: number, curve: PumpCurve, c: number, law: Law = LAW.pump): void {
+    const qMax = maxFlowM3h(curve);
+    const h0 = pumpHeadKpa(curve, 0) ?? 0;
+    this.pumps.set(k, {
+      curve,
+      qMax,
+      h0,
+      hMax: pumpHeadKpa(curve, qMax) ?? 0,
+      delta: Math.max(qMax * 1e-4, 1e-9),
+      steep: Math.max(h0 / Math.max(qMax, 1e-9), 1) * 10,
+    });
+    this.c[k] = c;
+    this.set(k, law, LAW.pump);
+  }
+
+  evaluate(k: number, q: number, out: Float64Array): void {
+    this.evaluateAs(this.law[k]!, k, q, out);
+  }
+  evaluateOwn(k: number, q: number, out: Float64Array): void {
+    this.evaluateAs(this.own[k]!, k, q, out);
+  }
+
+  private evaluateAs(law: number, k: number, q: number, out: Float64Array): void {
+    switch (law) {
+      case LAW.zero:
+        out[0] = OPEN_R * q;
+        out[1] = OPEN_R;
+        return;
+      case LAW.closed:
+        out[0] = CLOSED_R * q;
+        out[1] = CLOSED_R;
+        return;
+      case LAW.check:
+        if (q < 0) {
+          out[0] = CLOSED_R * q;
+          out[1] = CLOSED_R;
+          return;
+        }
+        this.kv(k, q, out);
+        return;
+      case LAW.kv:
+        this.kv(k, q, out);
+        return;
+      case LAW.pipe:
+        this.pipe(k, q, out);
+        return;
+      case LAW.pump:
+        this.pump(k, q, out);
+        return;
+      case LAW.bypass:
+        this.bypass(k, q, out);
+        return;
+    }
+  }
+
+  /** Kv device: Δp = c·q|q| (c = 100·ρ/1000/Kv² kPa per (m³/h)²). */
+  private kv(k: number, q: number, out: Float64Array): void {
+    const c = this.c[k]!;
+    const a = Math.abs(q);
+    out[0] = c * q * a;
+    out[1] = 2 * c * a + OPEN_R;
+  }
+
+  /**
+   * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope uses
+   * each part's local exponent: friction ∝ q laminar (Hagen–Poiseuille),
+   * ≈ q^1.75…2 turbulent (Blasius … fully rough; 1.9 taken), 2 in the
+   * interpolated transition; fittings ∝ q². An approximate slope only slows
+   * Newton a little; the solution still satisfies the exact law. The last
+   * evaluation is cached: on a tree, design flows repeat exactly.
+   */
+  private pipe(k: number, q: number, out: Float64Array): void {
+    // Below 1e-6 m³/h the flow is laminar in any catalogue pipe: h is linear there.
+    const qTiny = 1e-6;
     const a = Math.max(Math.abs(q), qTiny);
-    if (a !== lastA) {
+    if (a !== this.lastA[k]) {
+      const input = this.input;
       input.flowM3s = a / 3600;
+      input.innerDiameterM = this.d[k]!;
+      input.roughnessM = this.eps[k]!;
+      input.lengthM = this.len[k]!;
+      input.sumK = this.sumK[k]!;
       const r = pipePressureDrop(input);
       const fr = r.frictionDpPa / 1000;
       const fit = r.fittingsDpPa / 1000;
       const n = r.regime === "laminar" ? 1 : r.regime === "turbulent" ? 1.9 : 2;
-      lastA = a;
-      lastH = fr + fit;
-      lastG = (n * fr + 2 * fit) / a + OPEN_R;
+      this.lastA[k] = a;
+      this.lastH[k] = fr + fit;
+      this.lastG[k] = (n * fr + 2 * fit) / a + OPEN_R;
     }
-    out[0] = Math.abs(q) < qTiny ? (lastH / qTiny) * q + OPEN_R * q : Math.sign(q) * lastH + OPEN_R * q;
-    out[1] = lastG;
-  };
-}
+    const h = this.lastH[k]!;
+    out[0] = Math.abs(q) < qTiny ? (h / qTiny) * q : Math.sign(q) * h;
+    out[1] = this.lastG[k]!;
+  }
 
-/**
- * Pump on its curve (pumps/curve.ts, linear between points) in series with an
- * optional device law (a heat source's own exchanger). Off the curve the head
- * falls steeply past the last point and rises steeply for reverse flow — only
- * so the solver can come back; such a point is reported (pump.curve-short).
- */
-export function pumpLaw(curve: PumpCurve, series: Evaluate = zeroLoss): Evaluate {
-  const qMax = maxFlowM3h(curve);
-  const h0 = pumpHeadKpa(curve, 0) ?? 0;
-  const hMax = pumpHeadKpa(curve, qMax) ?? 0;
-  const delta = Math.max(qMax * 1e-4, 1e-9);
-  const steep = Math.max(h0 / Math.max(qMax, 1e-9), 1) * 10;
-  const inner = new Float64Array(2);
-  return (q, out) => {
+  /**
+   * Pump head from its curve (negative loss) plus a series Kv device. Off the
+   * curve the head falls steeply past the last point and rises steeply for
+   * reverse flow — only so the solver can come back; such a point is reported.
+   */
+  private pump(k: number, q: number, out: Float64Array): void {
+    const p = this.pumps.get(k)!;
     let head: number;
     let slope: number;
     if (q < 0) {
-      head = h0 - steep * q;
-      slope = -steep;
-    } else if (q > qMax) {
-      head = hMax - steep * (q - qMax);
-      slope = -steep;
+      head = p.h0 - p.steep * q;
+      slope = -p.steep;
+    } else if (q > p.qMax) {
+      head = p.hMax - p.steep * (q - p.qMax);
+      slope = -p.steep;
     } else {
-      head = pumpHeadKpa(curve, q) ?? 0;
-      const lo = Math.max(0, q - delta);
-      const hi = Math.min(qMax, q + delta);
-      slope = hi > lo ? ((pumpHeadKpa(curve, hi) ?? 0) - (pumpHeadKpa(curve, lo) ?? 0)) / (hi - lo) : 0;
+      head = pumpHeadKpa(p.curve, q) ?? 0;
+      const lo = Math.max(0, q - p.delta);
+      const hi = Math.min(p.qMax, q + p.delta);
+      slope = hi > lo ? ((pumpHeadKpa(p.curve, hi) ?? 0) - (pumpHeadKpa(p.curve, lo) ?? 0)) / (hi - lo) : 0;
     }
-    series(q, inner);
-    out[0] = -head + inner[0]!;
-    out[1] = Math.max(-slope, 0) + inner[1]!;
-  };
-}
+    const c = this.c[k]!;
+    const a = Math.abs(q);
+    out[0] = -head + c * q * a;
+    out[1] = Math.max(-slope, 0) + 2 * c * a + OPEN_R;
+  }
 
-/** One-way: the inner law forward, closed against reverse flow (check valve). */
-export function oneWay(inner: Evaluate): Evaluate {
-  return (q, out) => {
-    if (q >= 0) inner(q, out);
-    else closed(q, out);
-  };
-}
-
-/**
- * Differential-pressure bypass valve: shut below its opening Δp, then passing
- * flow while Δp rises only by its Kvs loss above the opening:
- *   shut:  h = CLOSED_R·q;   open: h = ±opening + Δp_Kvs(q), flow one way.
- * Handled like EPANET's pressure-regulating valves (Rossman, EPANET 2.2 manual
- * §12.2, valve status checks): the law keeps a status for this one solve and
- * switches it from the iterate — a shut valve whose leak flow implies
- * |Δp| > opening opens in that direction; an open one whose flow reverses
- * shuts. After a few switches the status is frozen so it cannot cycle.
- * Symmetric, so the drawn direction does not matter. Build one per solve.
- */
-export function bypassLaw(openingKpa: number, kvs: number, densityKgM3: number): Evaluate {
-  const c = kvPressureDropPa(1, kvs, densityKgM3) / 1000;
-  let dir = 0; // 0 shut, ±1 open in that direction
-  let switches = 0;
-  return (q, out) => {
-    if (switches < 8) {
-      if (dir === 0 && Math.abs(q) * CLOSED_R > openingKpa) {
+  /**
+   * Differential-pressure bypass valve: shut below its opening Δp, then
+   * passing flow while Δp rises only by its Kvs loss:
+   *   shut: h = CLOSED_R·q;   open: h = ±opening + c·q|q|, one way.
+   * Handled like EPANET's valve status checks (Rossman, EPANET 2.2 manual
+   * §12.2): a shut valve whose leak implies |Δp| > opening opens that way; an
+   * open one whose flow reverses shuts; after 8 switches the status is frozen
+   * so it cannot cycle. Symmetric, so the drawn direction does not matter.
+   * The status lives in this table, which is built afresh for each solve.
+   */
+  private bypass(k: number, q: number, out: Float64Array): void {
+    const opening = this.opening[k]!;
+    let dir = this.dir[k]!;
+    if (this.switches[k]! < 8) {
+      if (dir === 0 && Math.abs(q) * CLOSED_R > opening) {
         dir = Math.sign(q);
-        switches++;
+        this.switches[k]!++;
       } else if (dir !== 0 && q * dir < 0) {
         dir = 0;
-        switches++;
+        this.switches[k]!++;
       }
+      this.dir[k] = dir;
     }
     if (dir === 0) {
       out[0] = CLOSED_R * q;
       out[1] = CLOSED_R;
       return;
     }
+    const c = this.c[k]!;
     const a = Math.abs(q);
-    out[0] = dir * openingKpa + c * q * a + OPEN_R * q;
+    out[0] = dir * opening + c * q * a;
     out[1] = 2 * c * a + OPEN_R;
-  };
+  }
 }

@@ -6,22 +6,16 @@
  */
 import { partRegistry } from "@/lib/schematic/parts";
 import type { Part, Schematic } from "@/lib/schematic/schema";
-import type { NetworkModel } from "./model";
+import { adjacency, type Adjacency, type NetworkModel } from "./model";
 
 /** Links at each node, leaving out pipes that only lead to a no-flow accessory or vessel. */
-export function flowAdjacency(doc: Schematic, model: NetworkModel): number[][] {
+export function flowAdjacency(doc: Schematic, model: NetworkModel): Adjacency {
   const dead = new Set<number>();
   for (const part of doc.parts) {
     const role = partRegistry[part.type].role;
     if (role === "accessory" || role === "vessel") dead.add(model.portNode.get(`${part.id}.connection`)!);
   }
-  const adj: number[][] = Array.from({ length: model.nodeCount }, () => []);
-  model.links.forEach((l, k) => {
-    if (dead.has(l.from) || dead.has(l.to)) return;
-    adj[l.from]!.push(k);
-    adj[l.to]!.push(k);
-  });
-  return adj;
+  return adjacency(model.nodeCount, model.links, (k) => !dead.has(model.links[k]!.from) && !dead.has(model.links[k]!.to));
 }
 
 export interface Chain {
@@ -30,14 +24,19 @@ export interface Chain {
   end: number;
 }
 
-export function walkChain(model: NetworkModel, adj: number[][], start: number, cameFrom: number): Chain {
+export function walkChain(model: NetworkModel, adj: Adjacency, start: number, cameFrom: number): Chain {
   const parts: Part[] = [];
   let n = start;
   let prev = cameFrom;
   for (let guard = 0; guard < 500; guard++) {
-    const next = adj[n]!.filter((k) => k !== prev);
-    if (next.length !== 1) break;
-    const k = next[0]!;
+    let k = -1;
+    let count = 0;
+    for (let j = adj.start[n]!; j < adj.start[n + 1]!; j++) {
+      if (adj.list[j] === prev) continue;
+      k = adj.list[j]!;
+      count++;
+    }
+    if (count !== 1) break;
     const l = model.links[k]!;
     if (l.role === "load" || l.role.startsWith("header") || l.role.startsWith("diverter") || l.role === "heat-source") break;
     if (l.role !== "pipe") parts.push(model.partById.get(l.id)!);

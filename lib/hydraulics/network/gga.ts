@@ -15,6 +15,14 @@ import { symbolicFactor, type Symbolic } from "./ordering";
 /** Writes h (loss from→to) into out[0] and g = dh/dq > 0 into out[1]. */
 export type Evaluate = (q: number, out: Float64Array) => void;
 
+/** The links' laws, one call site for all (network/behaviour.ts LinkTable). */
+export interface LinkLaws {
+  evaluate(k: number, q: number, out: Float64Array): void;
+}
+
+/** Adapter for tests and small cases: one function per link. */
+export const lawsOf = (fns: readonly Evaluate[]): LinkLaws => ({ evaluate: (k, q, out) => fns[k]!(q, out) });
+
 export interface Topology {
   nodeCount: number;
   from: Int32Array;
@@ -70,7 +78,7 @@ export interface SolveResult {
 
 export function solveNetwork(
   prep: Prepared,
-  evaluate: readonly Evaluate[],
+  laws: LinkLaws,
   demand: Float64Array,
   q0: Float64Array,
   options: SolveOptions = {},
@@ -104,7 +112,7 @@ export function solveNetwork(
       if (u >= 0) rhs[u] = -demand[n]!;
     }
     for (let k = 0; k < L; k++) {
-      evaluate[k]!(q[k]!, out);
+      laws.evaluate(k, q[k]!, out);
       const g = out[1]! > gMin ? out[1]! : gMin;
       const pk = 1 / g;
       const yk = out[0]! * pk;

@@ -170,3 +170,33 @@ export function components(nodeCount: number, links: readonly { from: number; to
 }
 
 export { splitPortRef };
+
+/** Compressed adjacency (CSR): links at node n are list[start[n] .. start[n+1]). */
+export interface Adjacency {
+  start: Int32Array;
+  list: Int32Array;
+}
+
+export function adjacency(
+  nodeCount: number,
+  links: readonly { from: number; to: number }[],
+  include: (k: number) => boolean = () => true,
+): Adjacency {
+  const start = new Int32Array(nodeCount + 1);
+  const keep = new Uint8Array(links.length);
+  for (let k = 0; k < links.length; k++) {
+    if (!include(k)) continue;
+    keep[k] = 1;
+    start[links[k]!.from + 1]!++;
+    start[links[k]!.to + 1]!++;
+  }
+  for (let n = 0; n < nodeCount; n++) start[n + 1]! += start[n]!;
+  const fill = start.slice(0, nodeCount);
+  const list = new Int32Array(start[nodeCount]!);
+  for (let k = 0; k < links.length; k++) {
+    if (!keep[k]) continue;
+    list[fill[links[k]!.from]!++] = k;
+    list[fill[links[k]!.to]!++] = k;
+  }
+  return { start, list };
+}

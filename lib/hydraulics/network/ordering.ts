@@ -82,38 +82,68 @@ class Heap {
 }
 
 export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
-  const adj: Set<number>[] = Array.from({ length: m }, () => new Set<number>());
+  // Adjacency as plain arrays with lazy removal of eliminated nodes; a stamp
+  // array answers "already adjacent?" while forming the fill clique.
+  const adj: number[][] = Array.from({ length: m }, () => []);
+  const deg = new Int32Array(m);
+  const stamp = new Int32Array(m).fill(-1);
   for (let i = 0; i + 1 < pairs.length; i += 2) {
     const a = pairs[i]!;
     const b = pairs[i + 1]!;
     if (a === b) continue;
-    adj[a]!.add(b);
-    adj[b]!.add(a);
+    adj[a]!.push(b);
+    adj[b]!.push(a);
   }
+  // Merge parallel links: deduplicate each list once.
+  for (let v = 0; v < m; v++) {
+    const list = adj[v]!;
+    const uniq: number[] = [];
+    for (const u of list) {
+      if (stamp[u] === v) continue;
+      stamp[u] = v;
+      uniq.push(u);
+    }
+    adj[v] = uniq;
+    deg[v] = uniq.length;
+  }
+  stamp.fill(-1);
   const heap = new Heap();
-  for (let v = 0; v < m; v++) heap.push(adj[v]!.size, v);
+  for (let v = 0; v < m; v++) heap.push(deg[v]!, v);
   const done = new Uint8Array(m);
   const order = new Int32Array(m);
   const patterns: number[][] = new Array(m);
   let k = 0;
+  let tick = 0;
   while (heap.size > 0) {
-    const [deg, v] = heap.pop();
-    if (done[v] || deg !== adj[v]!.size) continue;
+    const [d, v] = heap.pop();
+    if (done[v] || d !== deg[v]) continue;
     done[v] = 1;
     order[k++] = v;
-    const nbrs = [...adj[v]!];
+    const nbrs = adj[v]!.filter((u) => !done[u]);
     patterns[v] = nbrs;
-    for (const u of nbrs) adj[u]!.delete(v);
-    for (let i = 0; i < nbrs.length; i++) {
-      const u = nbrs[i]!;
-      for (let j = i + 1; j < nbrs.length; j++) {
-        const w = nbrs[j]!;
-        adj[u]!.add(w);
-        adj[w]!.add(u);
+    for (const u of nbrs) {
+      // u loses v and gains every other neighbour of v it is not adjacent to
+      // yet; its list is compacted in place (no allocation per elimination).
+      const t = ++tick;
+      const list = adj[u]!;
+      let len = 0;
+      for (let i = 0; i < list.length; i++) {
+        const w = list[i]!;
+        if (done[w]) continue;
+        list[len++] = w;
+        stamp[w] = t;
       }
+      list.length = len;
+      for (const w of nbrs) {
+        if (w !== u && stamp[w] !== t) {
+          list.push(w);
+          stamp[w] = t;
+        }
+      }
+      deg[u] = list.length;
+      heap.push(list.length, u);
     }
-    for (const u of nbrs) heap.push(adj[u]!.size, u);
-    adj[v]!.clear();
+    adj[v] = [];
   }
   const pos = new Int32Array(m);
   for (let i = 0; i < m; i++) pos[order[i]!] = i;

@@ -60,6 +60,11 @@ describe("pipePressureDrop behaviour", () => {
     const zero = pipePressureDrop({ ...base, flowM3s: 0 });
     expect([zero.dpPa, zero.frictionDpPa, zero.fittingsDpPa, zero.reynolds, zero.frictionFactor]).toEqual([0, 0, 0, 0, 0]);
   });
+  it("a vanishing flow (Q = 1e-320 m³/s) gives finite, tiny results, not NaN", () => {
+    const out = pipePressureDrop({ ...base, flowM3s: 1e-320 });
+    for (const v of Object.values(out)) if (typeof v === "number") expect(Number.isFinite(v)).toBe(true);
+    expect(Math.abs(out.dpPa)).toBeLessThan(1e-300);
+  });
   it("laminar flow follows Hagen–Poiseuille Δp = 128·μ·L·Q/(π·D⁴)", () => {
     const q = 1e-6; // Re ≈ 114
     const out = pipePressureDrop({ ...base, flowM3s: q, sumK: 0 });

@@ -62,7 +62,12 @@ export function pipePressureDrop(input: PipePressureDropInput): PipePressureDrop
   const { f, regime } = darcyFrictionFactor(re, roughnessM / innerDiameterM);
   const dynamicPressurePa = (densityKgM3 * velocityMps * velocityMps) / 2;
   const sign = Math.sign(flowM3s);
-  const gradientPaPerM = (f * dynamicPressurePa) / innerDiameterM;
+  // Laminar: Hagen–Poiseuille R = 32·ρ·ν·|v|/D² — the same as f·ρv²/(2D) with f = 64/Re, but
+  // free of the Infinity·0 that 64/Re · v² would give for a vanishing flow.
+  const gradientPaPerM =
+    regime === "laminar"
+      ? (32 * densityKgM3 * kinematicViscosityM2s * Math.abs(velocityMps)) / (innerDiameterM * innerDiameterM)
+      : (f * dynamicPressurePa) / innerDiameterM;
   const frictionDpPa = sign * gradientPaPerM * lengthM;
   const fittingsDpPa = sign * sumK * dynamicPressurePa;
   return {

@@ -4,14 +4,14 @@
  * flow forced anywhere. Warm-started from the design flows (cut links from
  * zero), which is what keeps the many "only X open" scenarios cheap.
  */
-import { solveNetwork, type Evaluate } from "@/lib/hydraulics/network/gga";
-import { NO_FLOW_M3H } from "@/lib/hydraulics/network/behaviour";
+import { solveNetwork } from "@/lib/hydraulics/network/gga";
+import { NO_FLOW_M3H, type LinkTable } from "@/lib/hydraulics/network/behaviour";
 import type { EngineContext } from "@/lib/hydraulics/sizing/context";
-import { isCut, linkLaw, type NetworkState } from "@/lib/hydraulics/sizing/laws";
+import { buildLaws, isCut, type NetworkState } from "@/lib/hydraulics/sizing/laws";
 
 export interface Simulation {
   state: NetworkState;
-  laws: Evaluate[];
+  laws: LinkTable;
   q: Float64Array;
   head: Float64Array;
   converged: boolean;
@@ -20,7 +20,7 @@ export interface Simulation {
 
 export function simulate(ctx: EngineContext, state: NetworkState, warm: Float64Array | null): Simulation {
   const { model } = ctx;
-  const laws = model.links.map((l) => linkLaw(ctx, l, state));
+  const laws = buildLaws(ctx, state);
   const q0 = new Float64Array(model.links.length);
   model.links.forEach((l, k) => {
     if (isCut(ctx, l, state)) return;

@@ -25,21 +25,35 @@ export function thermal(ctx: EngineContext, q: Float64Array): Thermal {
   const fluid = ctx.fluid!;
   const n = model.nodeCount;
   const flowC = ctx.flowC;
-  const edges: number[] = [];
-  const inEdges: number[][] = Array.from({ length: n }, () => []);
-  const outEdges: number[][] = Array.from({ length: n }, () => []);
-  model.links.forEach((l, k) => {
-    if (Math.abs(q[k]!) < NO_FLOW_M3H) return;
-    const [u, d] = q[k]! > 0 ? [l.from, l.to] : [l.to, l.from];
-    edges.push(k);
-    inEdges[d]!.push(k);
-    outEdges[u]!.push(k);
-  });
+  // Flowing links grouped by downstream node (inflows) and upstream node (outflows), CSR.
+  const inStart = new Int32Array(n + 1);
+  const outStart = new Int32Array(n + 1);
+  const L = model.links.length;
+  for (let k = 0; k < L; k++) {
+    if (Math.abs(q[k]!) < NO_FLOW_M3H) continue;
+    const l = model.links[k]!;
+    inStart[(q[k]! > 0 ? l.to : l.from) + 1]!++;
+    outStart[(q[k]! > 0 ? l.from : l.to) + 1]!++;
+  }
+  for (let i = 0; i < n; i++) {
+    inStart[i + 1]! += inStart[i]!;
+    outStart[i + 1]! += outStart[i]!;
+  }
+  const inList = new Int32Array(inStart[n]!);
+  const outList = new Int32Array(outStart[n]!);
+  const inFill = inStart.slice(0, n);
+  const outFill = outStart.slice(0, n);
+  for (let k = 0; k < L; k++) {
+    if (Math.abs(q[k]!) < NO_FLOW_M3H) continue;
+    const l = model.links[k]!;
+    inList[inFill[q[k]! > 0 ? l.to : l.from]!++] = k;
+    outList[outFill[q[k]! > 0 ? l.from : l.to]!++] = k;
+  }
   const up = (k: number) => (q[k]! > 0 ? model.links[k]!.from : model.links[k]!.to);
   const down = (k: number) => (q[k]! > 0 ? model.links[k]!.to : model.links[k]!.from);
   // Kahn order; heat-source links do not create a dependency (fixed outlet).
   const indeg = new Int32Array(n);
-  for (const k of edges) if (model.links[k]!.role !== "heat-source") indeg[down(k)]!++;
+  for (let j = 0; j < inList.length; j++) if (model.links[inList[j]!]!.role !== "heat-source") indeg[down(inList[j]!)]!++;
   const order: number[] = [];
   const done = new Uint8Array(n);
   const queue: number[] = [];
@@ -55,7 +69,8 @@ export function thermal(ctx: EngineContext, q: Float64Array): Thermal {
     if (done[v]) continue;
     done[v] = 1;
     order.push(v);
-    for (const k of outEdges[v]!) {
+    for (let j = outStart[v]!; j < outStart[v + 1]!; j++) {
+      const k = outList[j]!;
       if (model.links[k]!.role === "heat-source") continue;
       const d = down(k);
       if (--indeg[d]! === 0 && !done[d]) queue.push(d);
@@ -102,11 +117,11 @@ export function thermal(ctx: EngineContext, q: Float64Array): Thermal {
   for (let pass = 0; pass < 60; pass++) {
     let change = 0;
     for (const v of order) {
-      const ins = inEdges[v]!;
-      if (ins.length === 0) continue;
+      if (inStart[v] === inStart[v + 1]) continue;
       let sw = 0;
       let st = 0;
-      for (const k of ins) {
+      for (let j = inStart[v]!; j < inStart[v + 1]!; j++) {
+        const k = inList[j]!;
         const w = Math.abs(q[k]!);
         sw += w;
         st += w * outlet(k, nodeC[up(k)]!);

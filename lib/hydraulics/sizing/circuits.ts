@@ -14,11 +14,11 @@
  * which is path-independent once the heads balance.
  */
 import { kvForPressureDrop } from "@/lib/hydraulics/losses";
-import { components, type ModelLink } from "@/lib/hydraulics/network/model";
+import { adjacency, components, type Adjacency, type ModelLink } from "@/lib/hydraulics/network/model";
 import type { Circuit } from "@/lib/schematic/results";
 import type { EngineContext } from "./context";
 import type { DesignSolution } from "./design";
-import { isCut, loadLaw } from "./laws";
+import { isCut } from "./laws";
 import type { DesignLoad } from "./loads";
 
 export interface TracedCircuit extends Circuit {
@@ -48,12 +48,13 @@ function isPumpLink(ctx: EngineContext, l: ModelLink): boolean {
 }
 
 /** BFS tree from `start` not using `skip`; parent link per node (−1 root, −2 unvisited). */
-function tree(start: number, skip: number, adj: number[][], links: readonly ModelLink[], parent: Int32Array) {
+function tree(start: number, skip: number, adj: Adjacency, links: readonly ModelLink[], parent: Int32Array) {
   parent[start] = -1;
   const queue = [start];
   for (let i = 0; i < queue.length; i++) {
     const n = queue[i]!;
-    for (const k of adj[n]!) {
+    for (let j = adj.start[n]!; j < adj.start[n + 1]!; j++) {
+      const k = adj.list[j]!;
       if (k === skip) continue;
       const l = links[k]!;
       const m = l.from === n ? l.to : l.from;
@@ -68,14 +69,9 @@ function tree(start: number, skip: number, adj: number[][], links: readonly Mode
 export function traceCircuits(ctx: EngineContext, sol: DesignSolution, watch: ReadonlySet<number>): CircuitAnalysis {
   const { model } = ctx;
   const links = model.links;
-  const sideLinks = links.filter((l) => !SIDE_EXCLUDED.has(l.role) && !isCut(ctx, l, sol.state));
-  const sideOf = components(model.nodeCount, sideLinks);
-  const adj: number[][] = Array.from({ length: model.nodeCount }, () => []);
-  links.forEach((l, k) => {
-    if (SIDE_EXCLUDED.has(l.role) || isCut(ctx, l, sol.state)) return;
-    adj[l.from]!.push(k);
-    adj[l.to]!.push(k);
-  });
+  const inSide = links.map((l) => !SIDE_EXCLUDED.has(l.role) && !isCut(ctx, l, sol.state));
+  const sideOf = components(model.nodeCount, links.filter((_, k) => inSide[k]));
+  const adj = adjacency(model.nodeCount, links, (k) => inSide[k]!);
   const pumpsOfSide = new Map<number, number[]>();
   links.forEach((l, k) => {
     if (!isPumpLink(ctx, l)) return;
@@ -130,7 +126,7 @@ function circuitOf(
   const out = new Float64Array(2);
   let dpLoad = 0;
   if (!load.header) {
-    loadLaw(ctx, ctx.model.partById.get(load.id)!)(load.flowM3h, out);
+    sol.laws.evaluateOwn(load.link, load.flowM3h, out);
     dpLoad = out[0]!;
   }
   const h = sol.head;

@@ -47,8 +47,9 @@ function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)
       return null;
     }
     let ok = true;
-    if (!(dMm > 0)) {
-      findings.error("input.pipe-diameter", `pipe ${pipe.id}: inner diameter ${dMm} mm is not positive`, [pipe.id]);
+    // Below 1 mm nothing is a heating pipe; it would only overflow the velocity.
+    if (!(dMm >= 1)) {
+      findings.error("input.pipe-diameter", `pipe ${pipe.id}: inner diameter ${dMm} mm is not a usable pipe bore (≥ 1 mm)`, [pipe.id]);
       ok = false;
     }
     if (!(pipe.lengthM >= 0)) {

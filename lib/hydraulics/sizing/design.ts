@@ -8,9 +8,10 @@
  * Heads of the solution give every circuit's pressure drop (circuits.ts).
  */
 import { components } from "@/lib/hydraulics/network/model";
-import { solveNetwork, type Evaluate } from "@/lib/hydraulics/network/gga";
+import type { LinkTable } from "@/lib/hydraulics/network/behaviour";
+import { solveNetwork } from "@/lib/hydraulics/network/gga";
 import type { EngineContext } from "./context";
-import { isCut, linkLaw, type NetworkState } from "./laws";
+import { buildLaws, isCut, type NetworkState } from "./laws";
 import { designLoads, type DesignLoad } from "./loads";
 import { baseState } from "./state";
 
@@ -20,7 +21,7 @@ export interface DesignSolution {
   loads: DesignLoad[];
   /** loads with a path from inlet back to outlet (the others get no flow) */
   served: DesignLoad[];
-  laws: Evaluate[];
+  laws: LinkTable;
   q: Float64Array;
   head: Float64Array;
   converged: boolean;
@@ -30,7 +31,7 @@ export interface DesignSolution {
 export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): DesignSolution {
   const { model } = ctx;
   const state = baseState(ctx, "design", mode);
-  const laws = model.links.map((l) => linkLaw(ctx, l, state));
+  const laws = buildLaws(ctx, state);
   const open = model.links.filter((l) => !isCut(ctx, l, state));
   const comp = components(model.nodeCount, open);
   const loads = designLoads(ctx, mode);

@@ -6,16 +6,7 @@
  * - simulate: pumps on their curves, loads as resistances, the dp-bypass at its
  *   opening pressure, closed valves as near-zero conductance.
  */
-import {
-  bypassLaw,
-  closed,
-  kvLaw,
-  oneWay,
-  pipeLaw,
-  pumpLaw,
-  zeroLoss,
-} from "@/lib/hydraulics/network/behaviour";
-import type { Evaluate } from "@/lib/hydraulics/network/gga";
+import { kvCoefficient, LAW, LinkTable, type Law } from "@/lib/hydraulics/network/behaviour";
 import type { ModelLink } from "@/lib/hydraulics/network/model";
 import { pumpCurveIssues, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 import type { Part, PartOf } from "@/lib/schematic/schema";
@@ -46,90 +37,117 @@ function isOpen(part: Part, state: NetworkState): boolean {
   return state.valveOpen.get(part.id) ?? drawn;
 }
 
-/** Law of a load's own resistance (used when simulating, and for its Δp at design flow). */
-export function loadLaw(ctx: EngineContext, part: Part): Evaluate {
+/** Set a load's own resistance (radiator valve, UFH loop pipe, coil Kv) on link k. */
+function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design: boolean): void {
   const rho = ctx.fluid!.densityKgM3;
+  const solver = design ? LAW.closed : undefined;
+  const kv = (v: number | null) => {
+    t.c[k] = kvCoefficient(v, rho);
+    t.set(k, solver ?? (v === null ? LAW.zero : LAW.kv), v === null ? LAW.zero : LAW.kv);
+  };
   switch (part.type) {
     case "radiator":
-      return kvLaw(part.props.valveKv, rho);
+      return kv(part.props.valveKv);
     case "ufh-loop": {
-      const p = (part as PartOf<"ufh-loop">).props;
-      return pipeLaw(
-        { innerDiameterM: p.innerDiameterMm / 1000, roughnessM: UFH_ROUGHNESS_MM / 1000, lengthM: p.loopLengthM, sumK: 0 },
-        rho,
-        ctx.fluid!.kinematicViscosityM2s,
-      );
+      const p = part.props;
+      const g = { innerDiameterM: p.innerDiameterMm / 1000, roughnessM: UFH_ROUGHNESS_MM / 1000, lengthM: p.loopLengthM, sumK: 0 };
+      return t.setPipe(k, g, solver ?? LAW.pipe);
     }
     case "fan-coil":
     case "heat-load":
-      return kvLaw(part.props.kv, rho);
+      return kv(part.props.kv);
     case "cylinder":
-      return kvLaw(part.props.coilKv, rho);
+      return kv(part.props.coilKv);
     default:
-      return zeroLoss;
+      t.set(k, solver ?? LAW.zero, LAW.zero);
   }
 }
 
-/** Law of a two-port valve/device part (role "link"). */
-function deviceLaw(part: Part, state: NetworkState, rho: number): Evaluate {
+/** Set a two-port valve/device part (role "link") on link k. */
+function setDevice(t: LinkTable, k: number, part: Part, state: NetworkState, rho: number): void {
+  const kvLaw = (v: number | null, check = false) => {
+    t.c[k] = kvCoefficient(v, rho);
+    t.set(k, check ? LAW.check : v === null ? LAW.zero : LAW.kv);
+  };
   switch (part.type) {
     case "zone-valve":
-      return isOpen(part, state) ? kvLaw(part.props.kvs, rho) : closed;
+      kvLaw(part.props.kvs);
+      if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
+      return;
     case "isolation-valve":
-      return isOpen(part, state) ? kvLaw(part.props.kv, rho) : closed;
+      kvLaw(part.props.kv);
+      if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
+      return;
     case "check-valve":
-      return oneWay(kvLaw(part.props.kv, rho));
+      return kvLaw(part.props.kv, true);
     case "balancing-valve":
     case "strainer":
     case "heat-meter":
-      return kvLaw(part.props.kv, rho);
+      return kvLaw(part.props.kv);
     default:
-      return zeroLoss;
+      t.set(k, LAW.zero);
   }
 }
 
-export function linkLaw(ctx: EngineContext, link: ModelLink, state: NetworkState): Evaluate {
-  const rho = ctx.fluid!.densityKgM3;
+/** The laws of every link for this state, as one LinkTable. */
+export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
+  const { fluid, model } = ctx;
+  const rho = fluid!.densityKgM3;
   const design = state.purpose === "design";
-  if (link.role === "pipe") {
-    const g = ctx.pipeGeom[link.index];
-    return g ? pipeLaw(g, rho, ctx.fluid!.kinematicViscosityM2s) : zeroLoss;
-  }
-  const part = ctx.doc.parts[link.index]!;
-  switch (link.role) {
-    case "heat-source": {
-      const p = (part as PartOf<"heat-pump">).props;
-      const hx = kvLaw(p.kv, rho);
-      const curve = usableCurve(p.pumpCurve);
-      return !design && curve ? pumpLaw(curve, hx) : hx;
+  const t = new LinkTable(model.links.length, rho, fluid!.kinematicViscosityM2s);
+  model.links.forEach((link, k) => {
+    if (link.role === "pipe") {
+      const g = ctx.pipeGeom[link.index];
+      if (g) t.setPipe(k, g);
+      else t.set(k, LAW.zero);
+      return;
     }
-    case "pump": {
-      const curve = usableCurve((part as PartOf<"pump">).props.curve);
-      return !design && curve ? pumpLaw(curve) : zeroLoss;
+    const part = ctx.doc.parts[link.index]!;
+    switch (link.role) {
+      case "heat-source": {
+        const p = (part as PartOf<"heat-pump">).props;
+        const c = kvCoefficient(p.kv, rho);
+        const curve = usableCurve(p.pumpCurve);
+        t.c[k] = c;
+        if (curve) t.setPump(k, curve, c, design ? LAW.kv : LAW.pump);
+        else t.set(k, LAW.kv);
+        if (design) t.own[k] = LAW.kv;
+        return;
+      }
+      case "pump": {
+        const curve = usableCurve((part as PartOf<"pump">).props.curve);
+        if (curve) t.setPump(k, curve, 0, design ? LAW.zero : LAW.pump);
+        else t.set(k, LAW.zero);
+        return;
+      }
+      case "link":
+        return setDevice(t, k, part, state, rho);
+      case "bypass": {
+        const opening = state.bypassOpeningKpa.get(part.id) ?? null;
+        t.c[k] = kvCoefficient((part as PartOf<"dp-bypass-valve">).props.kvs, rho);
+        t.opening[k] = opening ?? 0;
+        t.set(k, design || opening === null ? LAW.closed : LAW.bypass);
+        return;
+      }
+      case "diverter-a":
+      case "diverter-b": {
+        const side = link.role === "diverter-a" ? "a" : "b";
+        t.c[k] = kvCoefficient((part as PartOf<"diverter-valve">).props.kvs, rho);
+        t.set(k, state.diverter.get(part.id) === side ? LAW.kv : LAW.closed, LAW.kv);
+        return;
+      }
+      case "load":
+        return setLoad(ctx, t, k, part, design);
+      case "header-primary":
+        return t.set(k, design ? LAW.closed : LAW.zero, LAW.zero);
+      case "header-secondary":
+        return t.set(k, design ? LAW.zero : LAW.closed, LAW.zero);
+      case "header-top":
+      case "header-bottom":
+        return t.set(k, design ? LAW.closed : LAW.zero, LAW.zero);
     }
-    case "link":
-      return deviceLaw(part, state, rho);
-    case "bypass": {
-      const opening = state.bypassOpeningKpa.get(part.id) ?? null;
-      if (design || opening === null) return closed;
-      return bypassLaw(opening, (part as PartOf<"dp-bypass-valve">).props.kvs, rho);
-    }
-    case "diverter-a":
-    case "diverter-b": {
-      const side = link.role === "diverter-a" ? "a" : "b";
-      const kvs = (part as PartOf<"diverter-valve">).props.kvs;
-      return state.diverter.get(part.id) === side ? kvLaw(kvs, rho) : closed;
-    }
-    case "load":
-      return design ? closed : loadLaw(ctx, part);
-    case "header-primary":
-      return design ? closed : zeroLoss;
-    case "header-secondary":
-      return design ? zeroLoss : closed;
-    case "header-top":
-    case "header-bottom":
-      return design ? closed : zeroLoss;
-  }
+  });
+  return t;
 }
 
 /** True when the link is cut (no flow possible) in this state. */

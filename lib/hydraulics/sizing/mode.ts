@@ -20,8 +20,9 @@ export interface ModeRun {
 
 /** Where each dp-bypass branch leaves the main circuit: its ends walked back to the first branch. */
 export function bypassBranchPoints(ctx: EngineContext): Map<number, [number, number]> {
-  const adj = flowAdjacency(ctx.doc, ctx.model);
   const out = new Map<number, [number, number]>();
+  if (!ctx.model.links.some((l) => l.role === "bypass")) return out;
+  const adj = flowAdjacency(ctx.doc, ctx.model);
   ctx.model.links.forEach((l, k) => {
     if (l.role === "bypass") out.set(k, [walkChain(ctx.model, adj, l.from, k).end, walkChain(ctx.model, adj, l.to, k).end]);
   });
@@ -51,7 +52,7 @@ export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun
   );
   const result: ModeResult = {
     mode,
-    heatSourceFlowM3h: sourceFlow,
+    heatSourceFlowM3h: sourceFlow !== null && Number.isFinite(sourceFlow) ? sourceFlow : null,
     pipes: pipeResults(ctx, sol.q, mode),
     parts: partResults(ctx, sol.state, sol.laws, sol.q, sol.head),
     circuits,

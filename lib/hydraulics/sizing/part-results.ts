@@ -5,12 +5,11 @@
  * no stated drop. In a simulation the drop is simply the solved head
  * difference across the part, so a shut bypass shows the Δp it holds.
  */
-import { NO_FLOW_M3H } from "@/lib/hydraulics/network/behaviour";
-import type { Evaluate } from "@/lib/hydraulics/network/gga";
+import { NO_FLOW_M3H, type LinkTable } from "@/lib/hydraulics/network/behaviour";
 import { pumpHeadKpa } from "@/lib/hydraulics/pumps/curve";
 import type { PartResult } from "@/lib/schematic/results";
 import type { EngineContext } from "./context";
-import { isCut, loadLaw, usableCurve, type NetworkState } from "./laws";
+import { isCut, usableCurve, type NetworkState } from "./laws";
 
 const fin = (x: number): number | null => (Number.isFinite(x) ? x : null);
 const clean = (q: number) => (Math.abs(q) < NO_FLOW_M3H ? 0 : q);
@@ -32,7 +31,7 @@ export function pumpHeadAt(curve: Parameters<typeof pumpHeadKpa>[0] | null, q: n
 export function partResults(
   ctx: EngineContext,
   state: NetworkState,
-  laws: readonly Evaluate[],
+  laws: LinkTable,
   q: Float64Array,
   head: Float64Array,
 ): PartResult[] {
@@ -50,11 +49,11 @@ export function partResults(
       const h = pumpHeadAt((part.props as { curve: [number, number][] }).curve, flow);
       dp = h === null ? null : -h;
     } else if (link.role === "load") {
-      loadLaw(ctx, part)(flow, tmp);
+      laws.evaluateOwn(k, flow, tmp);
       dp = tmp[0]!;
     } else if (isCut(ctx, link, state) || link.role.startsWith("header")) dp = link.role.startsWith("header") ? 0 : null;
     else {
-      laws[k]!(flow, tmp);
+      laws.evaluate(k, flow, tmp);
       dp = tmp[0]!;
     }
     out.push({ id: part.id, flowM3h: fin(flow), pressureDropKpa: dp === null ? null : fin(dp) });

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
-import { DrawingBoard } from "@/components/drawing-board";
+import { DrawingBoard } from "@/components/drawing-board/board";
 import { CanvasOverlay } from "@/components/drawing-board/overlay/canvas-overlay";
 import { BoardSession } from "@/components/drawing-board/persistence/board-session";
 import { BoardToolbar } from "@/components/drawing-board/persistence/board-toolbar";

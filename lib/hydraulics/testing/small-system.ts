@@ -1,0 +1,62 @@
+/**
+ * A small, hand-checkable system for tests: heat pump → flow tee → two
+ * radiators in parallel → return tee → tee with expansion vessel and safety
+ * valve → pump → heat pump. Copper pipes, no fittings. Tests mutate a copy.
+ *
+ *   hp.flow ─p1─ tf ─p2─ r1 ─p4─ tr ─p6a─ te ─p6b─ ts ─p6c─ pump ─p7─ hp.return
+ *                  └p3─ r2 ─p5─┘        └pev─ ev    └psv─ sv
+ */
+export function smallSystem() {
+  const pipe = (id: string, from: string, to: string, size: string, lengthM: number) => ({
+    id,
+    from,
+    to,
+    material: "copper",
+    size,
+    lengthM,
+  });
+  return {
+    format: "loopwright/schematic",
+    version: 1,
+    name: "small test system",
+    fluid: { kind: "water" },
+    design: {
+      flowTemperatureC: 45,
+      returnTemperatureC: 40,
+      coldFillPressureBar: 1.2,
+      safetyValveBar: 3,
+      staticHeightM: 5,
+      maxVelocityMps: 1,
+      targetGradientPaPerM: 300,
+      minOutdoorTemperatureC: 5,
+    },
+    parts: [
+      { id: "hp", type: "heat-pump", props: { ratedOutputKw: 3, minFlowM3h: 0.1, kv: 4, waterVolumeL: 2 } },
+      { id: "pump", type: "pump", props: { curve: [[0, 40], [0.5, 35], [1, 25], [1.5, 10]] } },
+      { id: "tf", type: "tee" },
+      { id: "tr", type: "tee" },
+      { id: "te", type: "tee" },
+      { id: "ts", type: "tee" },
+      { id: "r1", type: "radiator", props: { outputAtDt50W: 3000, heatLoadW: 1000, valveKv: 1 } },
+      { id: "r2", type: "radiator", props: { outputAtDt50W: 1500, heatLoadW: 500, valveKv: 1 } },
+      { id: "ev", type: "expansion-vessel", props: { volumeL: 8 } },
+      { id: "sv", type: "safety-valve", props: { setBar: 3 } },
+    ] as { id: string; type: string; props?: Record<string, unknown> }[],
+    pipes: [
+      pipe("p1", "hp.flow", "tf.a", "22", 5),
+      pipe("p2", "tf.b", "r1.flow", "15", 3),
+      pipe("p3", "tf.c", "r2.flow", "15", 8),
+      pipe("p4", "r1.return", "tr.a", "15", 3),
+      pipe("p5", "r2.return", "tr.b", "15", 8),
+      pipe("p6a", "tr.c", "te.a", "22", 2),
+      pipe("p6b", "te.b", "ts.a", "22", 0.5),
+      pipe("p6c", "ts.b", "pump.in", "22", 0.5),
+      pipe("p7", "pump.out", "hp.return", "22", 5),
+      pipe("pev", "te.c", "ev.connection", "15", 0.5),
+      pipe("psv", "ts.c", "sv.connection", "15", 0.3),
+    ] as { id: string; from: string; to: string; material: string; size: string; lengthM: number; [k: string]: unknown }[],
+    scenarios: undefined as unknown,
+  };
+}
+
+export type SmallSystem = ReturnType<typeof smallSystem>;
