@@ -12,6 +12,12 @@ function fail(lines: string[]): never {
   process.exit(2);
 }
 
+// A closed pipe (`… | head`) is the reader's choice, not a failure.
+process.stdout.on("error", (e: NodeJS.ErrnoException) => {
+  if (e.code === "EPIPE") process.exit(0);
+  throw e;
+});
+
 function main(argv: string[]): void {
   const file = argv.find((a) => a !== "--");
   if (!file) fail(["usage: npm run --silent calc -- FILE.json"]);

@@ -43,6 +43,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   const edges = usePipeEdges();
   const [nodes, setNodes] = useState<PartNode[]>(derived);
   useEffect(() => setNodes(derived), [derived]);
+  // fit a drawing on open; an empty board starts at 100 % so dropped parts keep their size
+  const [fitOnOpen] = useState(() => derived.length > 0);
   const flow = useReactFlow();
   // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %, short-pipe labels until 140 %
   const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
@@ -117,7 +119,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
 
   return (
     <div className={`lw-canvas relative h-full w-full ${band}`} data-testid="board-canvas">
-      <ReactFlow<PartNode>
+      <ReactFlow<PartNode, PipeEdge>
         nodes={nodes}
         edges={edges}
         nodeTypes={nodeTypes}
@@ -134,8 +136,9 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         snapToGrid
         snapGrid={[GRID, GRID]}
         onlyRenderVisibleElements
-        fitView
-        fitViewOptions={{ padding: 0.1 }}
+        fitView={fitOnOpen}
+        fitViewOptions={{ padding: 0.1, maxZoom: 1.5 }}
+        defaultViewport={{ x: 40, y: 40, zoom: 1 }}
         minZoom={0.05}
         maxZoom={3}
         deleteKeyCode={null}

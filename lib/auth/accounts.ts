@@ -8,7 +8,7 @@ import { passwordResetMessage, sendMail } from "@/lib/mail";
 import { UserError } from "./errors";
 import { hashPassword, verifyPassword } from "./password";
 import { maybeSweep } from "./housekeeping";
-import { assertSignInAllowed, clearAccountCounter, recordFailedSignIn } from "./rate-limit";
+import { allowResetMail, assertSignInAllowed, clearAccountCounter, recordFailedSignIn } from "./rate-limit";
 import { requestIp } from "./request-context";
 import { endAllSessions, endSession, startSession, type SessionUser } from "./session";
 import { hashToken, newToken } from "./tokens";
@@ -100,6 +100,7 @@ export async function changePassword(user: SessionUser, input: { current: string
 
 /** Always answers the same way, so the form does not reveal which addresses have accounts. */
 export async function requestPasswordReset(email: string): Promise<void> {
+  if (!(await allowResetMail(email, await requestIp()))) return;
   const user = await db()("users").where({ email }).first("id", "name", "email");
   if (!user) return;
   const { token, hash } = newToken();

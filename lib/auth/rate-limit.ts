@@ -10,7 +10,10 @@ import { pgPool } from "./pg-pool";
 export const ACCOUNT_LIMIT = { points: 5, duration: 15 * 60, blockDuration: 15 * 60 };
 export const ADDRESS_LIMIT = { points: 30, duration: 15 * 60, blockDuration: 15 * 60 };
 
-type Limiters = { account: RateLimiterPostgres; address: RateLimiterPostgres };
+export const RESET_ACCOUNT_LIMIT = { points: 3, duration: 60 * 60 };
+export const RESET_ADDRESS_LIMIT = { points: 10, duration: 60 * 60 };
+
+type Limiters = { account: RateLimiterPostgres; address: RateLimiterPostgres; resetAccount: RateLimiterPostgres; resetAddress: RateLimiterPostgres };
 const g = globalThis as unknown as { __loopwrightLimiters?: Limiters };
 
 function limiters(): Limiters {
@@ -18,6 +21,8 @@ function limiters(): Limiters {
   g.__loopwrightLimiters ??= {
     account: new RateLimiterPostgres({ ...common, keyPrefix: "signin-account", ...ACCOUNT_LIMIT }),
     address: new RateLimiterPostgres({ ...common, keyPrefix: "signin-address", ...ADDRESS_LIMIT }),
+    resetAccount: new RateLimiterPostgres({ ...common, keyPrefix: "reset-account", ...RESET_ACCOUNT_LIMIT }),
+    resetAddress: new RateLimiterPostgres({ ...common, keyPrefix: "reset-address", ...RESET_ADDRESS_LIMIT }),
   };
   return g.__loopwrightLimiters;
 }
@@ -48,4 +53,29 @@ export async function recordFailedSignIn(email: string, ip: string | null): Prom
 
 export async function clearAccountCounter(email: string): Promise<void> {
   await limiters().account.delete(email.toLowerCase());
+}
+
+/**
+ * Password-reset e-mails: a clear 429 when one address asks too often; when one account
+ * is asked for too often, returns false so the caller quietly sends nothing (the answer
+ * must not reveal whether the account exists).
+ */
+export async function allowResetMail(email: string, ip: string | null): Promise<boolean> {
+  const { resetAccount, resetAddress } = limiters();
+  if (ip) {
+    try {
+      await resetAddress.consume(ip);
+    } catch (e) {
+      if (!(e instanceof RateLimiterRes)) throw e;
+      throw new UserError(429, `Too many password reset requests from your network. Try again in ${minutes(e.msBeforeNext)} minutes.`,
+        { "retry-after": String(Math.ceil(e.msBeforeNext / 1000)) });
+    }
+  }
+  try {
+    await resetAccount.consume(email.toLowerCase());
+    return true;
+  } catch (e) {
+    if (!(e instanceof RateLimiterRes)) throw e;
+    return false;
+  }
 }

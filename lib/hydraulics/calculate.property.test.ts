@@ -91,6 +91,7 @@ const mutated = fc.tuple(fc.nat({ max: bases.length - 1 }), fc.array(mutation, {
   // Junk last: the structural mutations need parts and pipes to still be arrays.
   ms.sort((a, b) => Number(a[0] === "junk") - Number(b[0] === "junk"));
   for (const [kind, i, j, value, type] of ms) {
+    if (!Array.isArray(doc.parts) || !Array.isArray(doc.pipes)) break; // a junk step already ran
     const part = doc.parts[i % Math.max(1, doc.parts.length)];
     const pipe = doc.pipes[i % Math.max(1, doc.pipes.length)];
     switch (kind) {

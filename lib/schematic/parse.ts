@@ -44,6 +44,8 @@ function referenceIssues(doc: Schematic): Issue[] {
   const issues: Issue[] = [];
   const parts = new Map<string, Schematic["parts"][number]>();
   const seen = new Set<string>();
+  // One port set per part: a manifold's port list grows with its outlets.
+  const portSets = new Map<string, Set<string>>();
   const dup = (path: string, id: string) => {
     if (seen.has(id)) issues.push({ path, message: `${path}: id '${id}' is used more than once` });
     seen.add(id);
@@ -62,11 +64,12 @@ function referenceIssues(doc: Schematic): Issue[] {
         issues.push({ path, message: `${path}: pipe '${pipe.id}' names part '${partId}', which does not exist` });
         continue;
       }
-      const ports = portsOf(part);
-      if (!ports.includes(port)) {
+      let ports = portSets.get(partId);
+      if (!ports) portSets.set(partId, (ports = new Set(portsOf(part))));
+      if (!ports.has(port)) {
         issues.push({
           path,
-          message: `${path}: '${port}' is not a port of ${part.type} '${partId}' (ports: ${ports.join(", ")})`,
+          message: `${path}: '${port}' is not a port of ${part.type} '${partId}' (ports: ${[...ports].join(", ")})`,
         });
       }
     }

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db";
 import { pgPool } from "@/lib/auth/pg-pool";
-import { ACCOUNT_LIMIT, ADDRESS_LIMIT, recordFailedSignIn } from "@/lib/auth/rate-limit";
+import { ACCOUNT_LIMIT, ADDRESS_LIMIT, RESET_ACCOUNT_LIMIT, RESET_ADDRESS_LIMIT, recordFailedSignIn } from "@/lib/auth/rate-limit";
 import * as auth from "@/app/(auth)/actions";
 import * as team from "@/app/(app)/projects/[projectId]/team/actions";
 import * as projects from "@/app/api/v1/projects/route";
@@ -296,5 +296,26 @@ describe("projects API input and deletion", () => {
     const [row] = await auditRows("project.deleted", f.projectId);
     expect(row.detail.name).toBe(f.projectName);
     expect(row.actor_id).toBe("demo-owner");
+  });
+});
+
+describe("password reset requests are limited", () => {
+  it("sends at most a few e-mails per account per hour, without saying so", async () => {
+    const addr = email("flood");
+    await callAction(() => auth.signUpAction(null, form({ name: "Flo", email: addr, password: "flood-password-1", firm: `Test firm ${uniq()}` })), null);
+    for (let i = 0; i < RESET_ACCOUNT_LIMIT.points + 2; i++) {
+      const out = await callAction(() => auth.forgotPasswordAction(null, form({ email: addr })), null, ip());
+      expect(out.status).toBe(200);
+    }
+    const n = await db()("password_resets").whereIn("user_id", db()("users").where({ email: addr }).select("id")).count<{ n: string }[]>("* as n").first();
+    expect(Number(n!.n)).toBe(RESET_ACCOUNT_LIMIT.points);
+  });
+
+  it("answers one address asking too often with a clear 429", async () => {
+    const from = ip();
+    let last = null as Awaited<ReturnType<typeof callAction>> | null;
+    for (let i = 0; i <= RESET_ADDRESS_LIMIT.points; i++) last = await callAction(() => auth.forgotPasswordAction(null, form({ email: email("nobody") })), null, from);
+    expect(last!.status).toBe(429);
+    expect(last!.body.error).toMatch(/Too many password reset requests/);
   });
 });

@@ -194,8 +194,17 @@ export const rows: Row[] = [
     call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ schematicId: f.practiceSchematicId, doc: f.doc }), cookie),
   },
 
+  {
+    // the conflict dialog's "Save mine as a variant": team variant for designers/owners, practice for trainees
+    name: "action saveAsVariant (of the team schematic)", kind: "action", expect: allow(["owner", "designer", "trainee"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).saveAsVariant({ schematicId: f.teamSchematicId, doc: f.doc, name: "Matrix variant" }), cookie),
+  },
+  {
+    name: "action saveUnitPreference", kind: "action", expect: allow(members),
+    call: async (_f, cookie) => callAction(async () => (await boardActions()).saveUnitPreference({ flow: "m3/h", pressure: "kPa" }), cookie),
+  },
+
   // ——— TODO: board routes not written yet; replace each with a real row ———
-  { name: "action saveUnitPreference", kind: "action", todo: "any signed-in person → 200, signed out → 401 (needs a valid units body)" },
   { name: "POST /api/v1/revisions/[id]/comments", kind: "route", todo: "expect allow(['owner','designer','reviewer'], 201)" },
   { name: "POST /api/v1/revisions/[id]/site-records", kind: "route", todo: "expect allow(['owner','installer'], 201) on an issued revision" },
 ];

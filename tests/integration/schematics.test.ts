@@ -148,6 +148,7 @@ describe("unit preference", () => {
     expect(await as("reviewer", () => actions.saveUnitPreference({ flow: "l/s", pressure: "bar" }))).toMatchObject({ ok: true });
     expect((await db()("users").where({ id: "demo-reviewer" }).first()).preferences).toEqual({ theme: "paper", units: { flow: "l/s", pressure: "bar" } });
     expect(await as("reviewer", () => actions.saveUnitPreference({ flow: "gallons" }))).toMatchObject({ ok: false, status: 400 });
+    await db()("users").where({ id: "demo-reviewer" }).update({ preferences: JSON.stringify({}) }); // browser tests expect SI defaults
   });
 });
 

@@ -53,7 +53,8 @@ export function describeField(name: string, schema: ZodLike): FieldInfo {
     kind,
     label: cap(head || words(name)),
     unit: unitOf(name),
-    help: comma > 0 ? text.slice(comma + 2) : "",
+    // the tail after the comma is often just the unit, already shown beside the input
+    help: comma > 0 && !["litres", unitOf(name), "W", "m"].includes(text.slice(comma + 2)) ? text.slice(comma + 2) : "",
     nullable,
     nullHint,
     integer: node?.isInt === true,

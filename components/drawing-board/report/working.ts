@@ -8,7 +8,7 @@
 import { EN442_NOMINAL_LMTD_K, lmtdK } from "@/lib/hydraulics/emitters";
 import { sumFittingsK } from "@/lib/hydraulics/losses";
 import { findPipeSize } from "@/lib/hydraulics/pipes/catalogue";
-import { en12828FinalPressureBar } from "@/lib/hydraulics/vessels";
+import { en12828Vessel } from "@/lib/hydraulics/vessels";
 import type { Part, Results, Schematic } from "@/lib/schematic";
 import { modeOf } from "../overlay/results-mode";
 
@@ -95,8 +95,17 @@ export function emitterWorking(doc: Schematic, results: Results, partId: string)
 export function vesselWorking(doc: Schematic, results: Results): Working | null {
   const v = results.expansionVessel;
   if (!v) return null;
-  const pe = en12828FinalPressureBar(doc.design.safetyValveBar);
-  const reserve = v.systemVolumeL === null ? null : Math.max(0.005 * v.systemVolumeL, 3);
+  // Re-run the engine's EN 12828 function on the engine's own volumes for the intermediate terms.
+  let steps: { waterReserveL: number; finalPressureBar: number } | null = null;
+  try {
+    if (v.systemVolumeL && v.expansionVolumeL !== null) {
+      steps = en12828Vessel({ systemVolumeL: v.systemVolumeL, expansionFraction: v.expansionVolumeL / v.systemVolumeL,
+        staticHeightM: doc.design.staticHeightM, coldFillPressureBar: doc.design.coldFillPressureBar,
+        safetyValveBar: doc.design.safetyValveBar, densityKgM3: results.fluid.densityKgM3 ?? undefined });
+    }
+  } catch { steps = null; }
+  const reserve = steps?.waterReserveL ?? null;
+  const pe = steps?.finalPressureBar ?? null;
   return {
     title: "Expansion vessel size",
     formula: "Vn = (Ve + Vwr) · (pe + 1) / (pe − p0),  Ve = e·Vs,  Vwr = max(0.5 %·Vs, 3 L)",

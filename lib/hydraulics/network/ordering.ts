@@ -148,10 +148,10 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   const pos = new Int32Array(m);
   for (let i = 0; i < m; i++) pos[order[i]!] = i;
 
-  // Slots for the filled structure, keyed by (earlier, later) in elimination order.
-  const slotMap = new Map<number, number>();
-  const key = (u: number, v: number) => (pos[u]! < pos[v]! ? u * m + v : v * m + u);
+  // Slots: column v's entries are consecutive, in elimination order of their
+  // rows; a pair (u, v) lives in the column of whichever was eliminated first.
   const colStart = new Int32Array(m);
+  const colEnd = new Int32Array(m);
   let total = 0;
   for (let i = 0; i < m; i++) {
     const v = order[i]!;
@@ -159,22 +159,23 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
     pat.sort((a, b) => pos[a]! - pos[b]!);
     colStart[v] = total;
     total += pat.length;
+    colEnd[v] = total;
   }
   const colRows = new Int32Array(total);
   const colSlots = new Int32Array(total);
-  const colEnd = new Int32Array(m);
-  let slot = 0;
   for (let v = 0; v < m; v++) {
     const pat = patterns[v] ?? [];
-    let at = colStart[v]!;
-    for (const u of pat) {
-      colRows[at] = u;
-      colSlots[at] = slot;
-      slotMap.set(key(v, u), slot++);
-      at++;
+    for (let i = 0; i < pat.length; i++) {
+      colRows[colStart[v]! + i] = pat[i]!;
+      colSlots[colStart[v]! + i] = colStart[v]! + i;
     }
-    colEnd[v] = at;
   }
+  const slotOf = (u: number, v: number): number => {
+    if (u === v) return -1;
+    const [a, b] = pos[u]! < pos[v]! ? [u, v] : [v, u];
+    for (let i = colStart[a]!; i < colEnd[a]!; i++) if (colRows[i] === b) return i;
+    return -1;
+  };
   let updCount = 0;
   for (let v = 0; v < m; v++) {
     const d = (patterns[v] ?? []).length;
@@ -191,11 +192,9 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
     const e = colEnd[v]!;
     for (let a = s; a < e; a++) {
       for (let b = a; b < e; b++) {
-        const ra = colRows[a]!;
-        const rb = colRows[b]!;
         updA[w] = a;
         updB[w] = b;
-        updTarget[w] = a === b ? -1 - ra : slotMap.get(key(ra, rb))!;
+        updTarget[w] = a === b ? -1 - colRows[a]! : slotOf(colRows[a]!, colRows[b]!);
         w++;
       }
     }
@@ -212,7 +211,7 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
     updA,
     updB,
     updTarget,
-    slotCount: slot,
-    slotOf: (u, v) => (u === v ? -1 : (slotMap.get(key(u, v)) ?? -1)),
+    slotCount: total,
+    slotOf,
   };
 }
