@@ -122,7 +122,7 @@ stop_started() {
 }
 
 build_if_stale() {
-  if [ -f .next/BUILD_ID ] && [ -z "$(find app components lib db public package-lock.json next.config.mjs tailwind.config.ts -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
+  if [ -f .next/BUILD_ID ] && [ -z "$(find app components lib db public proxy.ts package-lock.json next.config.mjs tailwind.config.ts -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
     step "Build is up to date"
   else
     step "Building the app (next build)"

@@ -4,7 +4,7 @@
  * the board with, without reaching into xyflow or the store's internals.
  */
 import { useMemo } from "react";
-import { useReactFlow } from "@xyflow/react";
+import { useReactFlow, type Viewport } from "@xyflow/react";
 import { splitPortRef, type Results, type Schematic } from "@/lib/schematic";
 import type { DispatchResult } from "./commands/types";
 import { useBoardStore, type BoardStore } from "./store";
@@ -21,7 +21,7 @@ export interface BoardApi {
   /** Called after every document change (command, undo, redo); returns unsubscribe. */
   onDocChange(cb: (doc: Schematic, revision: number) => void): () => void;
   /** View control (fit / zoom), e.g. for a "show on drawing" link or tests. */
-  view?: { fit(): void; zoomTo(zoom: number): void; panBy(dx: number, dy: number): void; get(): { x: number; y: number; zoom: number } };
+  view?: { fit(): void; zoomTo(zoom: number): void; panBy(dx: number, dy: number): void; get(): Viewport; set(v: Viewport): void };
 }
 
 export function makeBoardApi(store: BoardStore, focus?: (partIds: string[]) => void): BoardApi {
@@ -57,6 +57,7 @@ export function useBoardApi(): BoardApi {
         void flow.setViewport({ ...v, x: v.x + dx, y: v.y + dy });
       },
       get: () => flow.getViewport(),
+      set: (v) => void flow.setViewport(v),
     };
     return api;
   }, [store, flow]);

@@ -25,6 +25,7 @@ import { usePartNodes, usePipeEdges } from "./use-canvas-model";
 const nodeTypes = { part: PartNodeView };
 const edgeTypes = { pipe: PipeEdgeView };
 export const GRID = 20;
+const LARGE_BOARD = 300;
 export const PART_MIME = "application/x-loopwright-part";
 
 /** Apply xyflow's select/deselect changes to a list of selected ids. */
@@ -46,6 +47,10 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   // fit a drawing on open; an empty board starts at 100 % so dropped parts keep their size
   const [fitOnOpen] = useState(() => derived.length > 0);
   const flow = useReactFlow();
+  // Large boards (software-rendered in CI): no dot grid, and the minimap's parts are hidden
+  // while the view moves — repainting 1,000 minimap rects each frame cost more than the canvas.
+  const large = useBoard((s) => s.doc.parts.length > LARGE_BOARD);
+  const [moving, setMoving] = useState(false);
   // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %, short-pipe labels until 140 %
   const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
 
@@ -118,7 +123,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   useBoardKeys(onView);
 
   return (
-    <div className={`lw-canvas relative h-full w-full ${band}`} data-testid="board-canvas">
+    <div className={`lw-canvas relative h-full w-full ${band} ${large && moving ? "lw-moving" : ""}`} data-testid="board-canvas">
       <ReactFlow<PartNode, PipeEdge>
         nodes={nodes}
         edges={edges}
@@ -130,6 +135,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         onConnect={onConnect}
         isValidConnection={isValidConnection}
         onDragOver={onDragOver}
+        onMoveStart={large ? () => setMoving(true) : undefined}
+        onMoveEnd={large ? () => setMoving(false) : undefined}
         onDrop={onDrop}
         connectionMode={ConnectionMode.Loose}
         nodeOrigin={[0.5, 0.5]}
@@ -148,7 +155,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         elevateEdgesOnSelect
         connectionLineStyle={{ stroke: "#b4632b", strokeWidth: 2 }}
       >
-        <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#d9d1c4" />
+        {!large && <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#d9d1c4" />}
         <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />
         <Controls showInteractive={false} />
       </ReactFlow>

@@ -13,7 +13,7 @@ import { plantFindings } from "./findings/plant";
 import { topologyFindings } from "./findings/topology";
 import { runScenarios } from "./scenarios/run";
 import { scenarioList } from "./scenarios/list";
-import { simulate } from "./scenarios/simulate";
+import { simulate, type Simulation } from "./scenarios/simulate";
 import { scenarioState } from "./scenarios/run";
 import { sizeBypasses } from "./sizing/bypass";
 import { createContext, type EngineContext } from "./sizing/context";
@@ -28,7 +28,13 @@ export type CalculateResult = { ok: true; results: Results } | { ok: false; issu
 export function calculate(input: unknown): CalculateResult {
   const parsed = parseSchematic(input);
   if (!parsed.ok) return parsed;
-  return { ok: true, results: calculateSchematic(parsed.doc) };
+  try {
+    return { ok: true, results: calculateSchematic(parsed.doc) };
+  } catch (e) {
+    // A safety net for the route and the CLI: an engine fault is reported, not
+    // thrown. The property test fails on any answer that reaches this line.
+    return { ok: false, issues: [{ path: "", message: `internal engine error: ${(e as Error).message}` }] };
+  }
 }
 
 function minFlowCheck(ctx: EngineContext, flowM3h: number | null, when: string): boolean | null {
@@ -46,14 +52,22 @@ function minFlowCheck(ctx: EngineContext, flowM3h: number | null, when: string):
   return ok;
 }
 
-function bypassSection(ctx: EngineContext, heating: ModeRun | null, warm: Float64Array | null, openings: Map<string, number | null>, sizings: ReturnType<typeof sizeBypasses>): Results["bypass"] {
+function bypassSection(
+  ctx: EngineContext,
+  heating: ModeRun | null,
+  warm: Float64Array | null,
+  openings: Map<string, number | null>,
+  sizings: ReturnType<typeof sizeBypasses>,
+  shut: Simulation | undefined,
+): Results["bypass"] {
   const first = sizings[0];
   if (!first) return null;
   const zones = ctx.doc.parts.filter((p) => p.type === "zone-valve");
   let flow: number | null = null;
   if (heating && zones.length > 0) {
     const spec = { name: "all zones shut", mode: "heating" as const, valves: Object.fromEntries(zones.map((z) => [z.id, false])) };
-    const sim = simulate(ctx, scenarioState(ctx, spec, openings), warm);
+    // The default scenario list already simulated this state: reuse it.
+    const sim = shut ?? simulate(ctx, scenarioState(ctx, spec, openings), warm);
     flow = 0;
     ctx.model.links.forEach((l, k) => {
       if (l.role === "heat-source") flow! += Math.abs(sim.q[k]!);
@@ -82,8 +96,10 @@ export function calculateSchematic(doc: Schematic): Results {
   const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];
   const openings = new Map(sizings.map((s) => [s.id, s.openingKpa]));
   const warm = heating ? heating.solution.q : null;
-  const scenarios = hydraulic ? runScenarios(ctx, scenarioList(ctx), openings, warm).results : [];
-  const bypass = hydraulic ? bypassSection(ctx, heating, warm, openings, sizings) : null;
+  const specs = hydraulic ? scenarioList(ctx) : [];
+  const run = hydraulic ? runScenarios(ctx, specs, openings, warm) : null;
+  const ownShut = doc.scenarios && doc.scenarios.length > 0 ? undefined : run?.sims.get("all zones shut");
+  const bypass = hydraulic ? bypassSection(ctx, heating, warm, openings, sizings, ownShut) : null;
   const volumeL = systemVolumeL(ctx);
   const fluid = ctx.fluid;
   return {
@@ -102,6 +118,6 @@ export function calculateSchematic(doc: Schematic): Results {
     volume: volumeResult(ctx, volumeL),
     emitters: emitterResults(ctx),
     hotWater: hotWaterResult(ctx),
-    scenarios,
+    scenarios: run?.results ?? [],
   };
 }

@@ -15,7 +15,7 @@ const powerW = (what: string) => z.number().min(0).max(5_000_000).describe(`${wh
 const volumeL = (what: string) => z.number().min(0).max(1_000_000).describe(`${what}, litres`);
 const deltaTK = z
   .number()
-  .positive()
+  .min(0.5)
   .max(60)
   .nullable()
   .default(null)
@@ -101,7 +101,7 @@ export const partPropsSchemas = {
   "ufh-loop": z.object({
     heatLoadW: powerW("heat load").default(1000),
     loopLengthM: z.number().positive().max(1000).default(80).describe("loop length, m"),
-    innerDiameterMm: z.number().positive().max(100).default(12).describe("loop pipe inner diameter, mm"),
+    innerDiameterMm: z.number().min(4).max(100).default(12).describe("loop pipe inner diameter, mm"),
     deltaTK,
   }),
   "fan-coil": z.object({

@@ -38,4 +38,5 @@ test("the second save gets the conflict message; save mine as a variant keeps bo
   expect(count(original.draft, "air-vent")).toBe(count(variant.draft, "air-vent") + 1);
   expect(count(variant.draft, "drain-cock")).toBe(count(original.draft, "drain-cock") + 1);
   await expect(b.getByTestId("drawing-board")).toBeVisible();
+  await sql("delete from schematics where id = $1 or variant_of = $1", [id]);
 });

@@ -319,3 +319,25 @@ describe("password reset requests are limited", () => {
     expect(last!.body.error).toMatch(/Too many password reset requests/);
   });
 });
+
+describe("bad input on the account forms", () => {
+  it("sign-up names every wrong field; nothing is created", async () => {
+    const out = await callAction(() => auth.signUpAction(null, form({ name: "n".repeat(121), email: "user@@example", password: "short", firm: "" })), null);
+    expect(out.status).toBe(400);
+    expect(out.body.issues).toEqual([
+      { path: "name", message: "Name must be at most 120 characters." },
+      { path: "email", message: "E-mail address does not look right (expected something like name@example.com)." },
+      { path: "password", message: "Password must be at least 10 characters." },
+      { path: "firm", message: "Firm name must be at least 2 characters." },
+    ]);
+  });
+
+  it("sign-in with a malformed e-mail or a huge password is a 400, not a 500", async () => {
+    const a = await callAction(() => auth.signInAction(null, form({ email: "nope", password: "x" })), null, ip());
+    expect(a.status).toBe(400);
+    expect(a.body.issues[0].path).toBe("email");
+    const b = await callAction(() => auth.signInAction(null, form({ email: "owner@fernbank.example", password: "p".repeat(5000) })), null, ip());
+    expect(b.status).toBe(400);
+    expect(b.body.issues[0]).toEqual({ path: "password", message: "Password must be at most 200 characters." });
+  });
+});

@@ -7,7 +7,7 @@ import { dropFixtures, makeFixture, snapshot } from "./helpers/fixture";
 
 // Every API route and server action × every role and signed out, against the real
 // PostgreSQL (DATABASE_URL → loopwright_test, demo seed). Each cell gets a fresh fixture
-// project; a denial must answer 401/403/404 with a message and change nothing.
+// project; a denial must answer 401/403/404 (bad input 400) with a message and change nothing.
 
 const cookies = {} as Record<Who, string | null>;
 
@@ -34,9 +34,10 @@ describe.each(rows)("$name", (row) => {
       const before = await snapshot(f);
       const out = await row.call!(f, cookies[who], who);
       expect(out.status, JSON.stringify(out.body)).toBe(want);
-      if (want === 401 || want === 403 || want === 404) {
+      if (want >= 400) {
+        // a denial (401/403/404) or refused input (400/409): a message, and nothing changed
         const error = out.body?.error;
-        expect(typeof error === "string" && error.length > 10, `denial needs a message, got ${JSON.stringify(out.body)}`).toBe(true);
+        expect(typeof error === "string" && error.length > 10, `a refusal needs a message, got ${JSON.stringify(out.body)}`).toBe(true);
         expect(await snapshot(f)).toBe(before);
       }
     });

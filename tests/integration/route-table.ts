@@ -27,6 +27,8 @@ export type Row = {
 };
 
 const members: Who[] = ["owner", "designer", "reviewer", "installer", "trainee"];
+const same = (status: number): Expect => ({ owner: status, designer: status, reviewer: status, installer: status, trainee: status, anon: status });
+const randomIp = () => `10.8.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}`;
 
 export function allow(who: Who[], ok = 200): Expect {
   const e = {} as Expect;
@@ -202,6 +204,36 @@ export const rows: Row[] = [
   {
     name: "action saveUnitPreference", kind: "action", expect: allow(members),
     call: async (_f, cookie) => callAction(async () => (await boardActions()).saveUnitPreference({ flow: "m3/h", pressure: "kPa" }), cookie),
+  },
+
+  // ——— public account actions: the same answer whoever calls (no role involved) ———
+  {
+    name: "action signInAction (wrong password)", kind: "action", expect: same(400),
+    call: async (_f, cookie) => callAction(async () => (await authActions()).signInAction(null, form({ email: `nobody-${randomUUID().slice(0, 8)}@example.test`, password: "wrong" })), cookie, randomIp()),
+  },
+  {
+    name: "action signUpAction (invalid input)", kind: "action", expect: same(400),
+    call: async (_f, cookie) => callAction(async () => (await authActions()).signUpAction(null, form({ name: "", email: "bad", password: "x", firm: "" })), cookie),
+  },
+  {
+    name: "action forgotPasswordAction", kind: "action", expect: same(200),
+    call: async (_f, cookie) => callAction(async () => (await authActions()).forgotPasswordAction(null, form({ email: `nobody-${randomUUID().slice(0, 8)}@example.test` })), cookie, randomIp()),
+  },
+  {
+    name: "action resetPasswordAction (made-up token)", kind: "action", expect: same(400),
+    call: async (_f, cookie) => callAction(async () => (await authActions()).resetPasswordAction(null, form({ token: "made-up-token", password: "long-enough-pw" })), cookie),
+  },
+  {
+    name: "action inviteSignUpAction (made-up token)", kind: "action", expect: same(400),
+    call: async (_f, cookie) => callAction(async () => (await authActions()).inviteSignUpAction(null, form({ token: "made-up-token", name: "X", password: "long-enough-pw" })), cookie),
+  },
+  {
+    name: "action demoSignInAction (redirects to /projects)", kind: "action", expect: same(303),
+    call: async (_f, cookie) => callAction(async () => (await authActions()).demoSignInAction(form({ role: "reviewer" })), cookie),
+  },
+  {
+    name: "action signOutAction (redirects home)", kind: "action", expect: same(303),
+    call: async (_f, _cookie, who) => callAction(async () => (await authActions()).signOutAction(form({})), await cookieFor(who)),
   },
 
   // ——— TODO: board routes not written yet; replace each with a real row ———

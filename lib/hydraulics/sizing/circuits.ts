@@ -131,7 +131,13 @@ function circuitOf(
   }
   const h = sol.head;
   const r = links[root]!;
-  const dp = h[r.to]! - h[load.inNode]! + dpLoad + (h[load.outNode]! - h[r.from]!);
+  // A heat source that is its own pump: its exchanger's loss is part of every circuit it drives.
+  let dpRoot = 0;
+  if (r.role === "heat-source") {
+    sol.laws.evaluateOwn(root, sol.q[root]!, out);
+    dpRoot = out[0]!;
+  }
+  const dp = h[r.to]! - h[load.inNode]! + dpLoad + (h[load.outNode]! - h[r.from]!) + dpRoot;
   let path: string[] = [];
   if (flowLeg && returnLeg) {
     path = new Array<string>(flowLeg.length + 1 + returnLeg.length);

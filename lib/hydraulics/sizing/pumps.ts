@@ -27,6 +27,7 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
     const required = Math.max(...circuits.map((c) => c.pressureDropKpa!));
     const rootId = ctx.model.links[root]!.id;
     let available: number | null = 0;
+    let offCurve = false;
     for (const k of ca.pumpsOfSide.get(side) ?? []) {
       const id = ctx.model.links[k]!.id;
       const q = Math.abs(sol.q[k]!);
@@ -38,9 +39,11 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
           [id],
         );
         available = null;
+        offCurve = true;
       } else if (available !== null) available += h;
     }
-    const ok = available === null ? null : available >= required;
+    // Past the end of its curve a pump cannot deliver the design flow: not ok, head unknown.
+    const ok = offCurve ? false : available === null ? null : available >= required;
     if (ok === false) {
       ctx.findings.error(
         "pump.head-low",
