@@ -6,7 +6,7 @@
  */
 import "@xyflow/react/dist/style.css";
 import "./board.css";
-import { useCallback, useEffect, useState, type DragEvent } from "react";
+import { useCallback, useEffect, useRef, useState, type DragEvent } from "react";
 import {
   applyNodeChanges, Background, BackgroundVariant, ConnectionMode, Controls, MiniMap, ReactFlow, useReactFlow, useStore,
   type Connection, type Edge, type IsValidConnection, type OnEdgesChange, type OnNodesChange,
@@ -51,6 +51,16 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   // while the view moves — repainting 1,000 minimap rects each frame cost more than the canvas.
   const large = useBoard((s) => s.doc.parts.length > LARGE_BOARD);
   const [moving, setMoving] = useState(false);
+  // programmatic moves start and end within a frame: settle before showing the minimap again
+  const settle = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const onMoveStart = useCallback(() => {
+    clearTimeout(settle.current);
+    setMoving(true);
+  }, []);
+  const onMoveEnd = useCallback(() => {
+    clearTimeout(settle.current);
+    settle.current = setTimeout(() => setMoving(false), 150);
+  }, []);
   // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %, short-pipe labels until 140 %
   const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
 
@@ -135,8 +145,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         onConnect={onConnect}
         isValidConnection={isValidConnection}
         onDragOver={onDragOver}
-        onMoveStart={large ? () => setMoving(true) : undefined}
-        onMoveEnd={large ? () => setMoving(false) : undefined}
+        onMoveStart={large ? onMoveStart : undefined}
+        onMoveEnd={large ? onMoveEnd : undefined}
         onDrop={onDrop}
         connectionMode={ConnectionMode.Loose}
         nodeOrigin={[0.5, 0.5]}

@@ -100,6 +100,14 @@ export function traceCircuits(ctx: EngineContext, sol: DesignSolution, watch: Re
     return ids;
   };
   const circuits = sol.served.map((load) => circuitOf(ctx, sol, load, sideOf, rootOfSide, pf, pr, walk));
+  const unpumped = circuits.filter((c) => c.rootLink === null).map((c) => c.load);
+  if (unpumped.length > 0) {
+    ctx.findings.warning(
+      "circuit.no-pump",
+      `no pump drives the circuit of ${unpumped.join(", ")} in ${sol.mode} mode, so its pressure drop is not computed`,
+      unpumped,
+    );
+  }
   markIndex(ctx, circuits);
   return { circuits, rootOfSide, pumpsOfSide, sideOf };
 }

@@ -51,8 +51,14 @@ export function partResults(
     } else if (link.role === "load") {
       laws.evaluateOwn(k, flow, tmp);
       dp = tmp[0]!;
-    } else if (isCut(ctx, link, state) || link.role.startsWith("header")) dp = link.role.startsWith("header") ? 0 : null;
-    else {
+    } else if (link.role.startsWith("header")) dp = 0;
+    else if (link.role === "bypass") {
+      // Shut at design: the Δp it sees there is the head difference across it.
+      dp = head[link.from]! - head[link.to]!;
+    } else if (isCut(ctx, link, state)) {
+      dp = null;
+      ctx.findings.info("valve.shut", `${part.id} is drawn shut: no flow and no pressure drop through it at design`, [part.id]);
+    } else {
       laws.evaluate(k, flow, tmp);
       dp = tmp[0]!;
     }

@@ -44,7 +44,7 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
     }
     // Past the end of its curve a pump cannot deliver the design flow: not ok, head unknown.
     const ok = offCurve ? false : available === null ? null : available >= required;
-    if (ok === false) {
+    if (ok === false && available !== null) {
       ctx.findings.error(
         "pump.head-low",
         `${rootId}: needs ${required.toFixed(1)} kPa at ${Math.abs(sol.q[root]!).toFixed(3)} m³/h in ${sol.mode} mode but the curve gives ${available!.toFixed(1)} kPa`,
