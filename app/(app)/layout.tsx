@@ -1,5 +1,4 @@
-import { headers } from "next/headers";
-import { redirect } from "next/navigation";
+import { signInRedirect } from "@/lib/auth/page-guard";
 import { AppHeader } from "@/components/shell/app-header";
 import { UserMenu } from "@/components/shell/user-menu";
 import { getCurrentUser } from "@/lib/auth/session";
@@ -8,10 +7,7 @@ import { getCurrentUser } from "@/lib/auth/session";
 // each page and action through lib/auth/authorize.ts.
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const user = await getCurrentUser();
-  if (!user) {
-    const path = (await headers()).get("x-lw-path") ?? "/projects";
-    redirect(`/sign-in?next=${encodeURIComponent(path)}`);
-  }
+  if (!user) return signInRedirect();
   return (
     <div className="flex min-h-screen flex-col">
       <AppHeader right={<UserMenu name={user.name} email={user.email} />} />

@@ -4,7 +4,8 @@
  * the board with, without reaching into xyflow or the store's internals.
  */
 import { useMemo } from "react";
-import { useReactFlow, type Viewport } from "@xyflow/react";
+import { useReactFlow, useStoreApi, type Viewport } from "@xyflow/react";
+import { layoutOf } from "./parts";
 import { splitPortRef, type Results, type Schematic } from "@/lib/schematic";
 import type { DispatchResult } from "./commands/types";
 import { useBoardStore, type BoardStore } from "./store";
@@ -43,12 +44,32 @@ export function makeBoardApi(store: BoardStore, focus?: (partIds: string[]) => v
   };
 }
 
+/**
+ * Centre and zoom on some parts from their drawn positions. (xyflow's fitView waits for
+ * every node to be measured, which never happens for parts culled off-screen.)
+ */
+function focusOn(doc: Schematic, ids: string[], pane: { width: number; height: number }) {
+  const wanted = new Set(ids);
+  const boxes = doc.parts.filter((p) => wanted.has(p.id)).map((p) => ({ p, l: layoutOf(p.type, p.props) }));
+  if (boxes.length === 0 || pane.width === 0) return null;
+  const x0 = Math.min(...boxes.map(({ p, l }) => p.x - l.w / 2));
+  const x1 = Math.max(...boxes.map(({ p, l }) => p.x + l.w / 2));
+  const y0 = Math.min(...boxes.map(({ p, l }) => p.y - l.h / 2));
+  const y1 = Math.max(...boxes.map(({ p, l }) => p.y + l.h / 2));
+  const zoom = Math.min(1.2, pane.width / ((x1 - x0) * 1.3 + 200), pane.height / ((y1 - y0) * 1.3 + 200));
+  return { x: (x0 + x1) / 2, y: (y0 + y1) / 2, zoom };
+}
+
 /** The board API for components inside the board (toolbar and report slots). */
 export function useBoardApi(): BoardApi {
   const store = useBoardStore();
   const flow = useReactFlow();
+  const flowStore = useStoreApi();
   return useMemo(() => {
-    const api = makeBoardApi(store, (ids) => ids.length > 0 && void flow.fitView({ nodes: ids.map((id) => ({ id })), padding: 0.6, maxZoom: 1.2, duration: 300 }));
+    const api = makeBoardApi(store, (ids) => {
+      const at = focusOn(store.getState().doc, ids, flowStore.getState());
+      if (at) void flow.setCenter(at.x, at.y, { zoom: at.zoom, duration: 300 });
+    });
     api.view = {
       fit: () => void flow.fitView({ padding: 0.1 }),
       zoomTo: (zoom) => void flow.zoomTo(zoom),
@@ -60,5 +81,5 @@ export function useBoardApi(): BoardApi {
       set: (v) => void flow.setViewport(v),
     };
     return api;
-  }, [store, flow]);
+  }, [store, flow, flowStore]);
 }

@@ -103,6 +103,20 @@ export const partPropsSchemas = {
     loopLengthM: z.number().positive().max(1000).default(80).describe("loop length, m"),
     innerDiameterMm: z.number().min(4).max(100).default(12).describe("loop pipe inner diameter, mm"),
     deltaTK,
+    floorAreaM2: z
+      .number()
+      .positive()
+      .max(10_000)
+      .nullable()
+      .default(null)
+      .describe("heated floor area of the loop, m² (null: the EN 1264 floor check is skipped)"),
+    roomTemperatureC: z.number().min(-10).max(40).default(20).describe("room temperature, °C"),
+    maxSurfaceTemperatureC: z
+      .number()
+      .min(15)
+      .max(45)
+      .default(29)
+      .describe("floor surface limit, °C (EN 1264: 29 occupied zone, 35 perimeter, room + 9 K bathrooms)"),
   }),
   "fan-coil": z.object({
     heatLoadW: powerW("heat load").default(2000),

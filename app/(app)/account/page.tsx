@@ -1,11 +1,15 @@
 import type { Metadata } from "next";
 import { ChangePasswordForm } from "@/components/auth/forms";
 import { requireUser } from "@/lib/auth/authorize";
+import { pageAccess } from "@/lib/auth/page-guard";
+import { NotAllowed } from "@/components/ui/not-allowed";
 
 export const metadata: Metadata = { title: "Your account" };
 
 export default async function AccountPage() {
-  const user = await requireUser();
+  const access = await pageAccess(requireUser);
+  if (!access.ok) return <NotAllowed message={access.message} />;
+  const user = access.value;
   return (
     <main className="mx-auto max-w-2xl px-4 py-8">
       <h1 className="text-2xl font-semibold">Your account</h1>

@@ -2,15 +2,22 @@
  * Plant-room checks that need only the topology and the design data:
  * zones that can all shut with no other path for the heat source, strainer and
  * isolation valves at the heat source, frost protection, impossible pressures.
+ * Strainer and isolation are looked for on the chain from the heat source to
+ * the first real branch, where dead-end sub-trees (no circulating flow) are
+ * not branches (network/circulating.ts).
  */
 import { freezingPointC, type FluidSpec } from "@/lib/hydraulics/fluids";
-import { flowAdjacency, walkChain } from "@/lib/hydraulics/network/chains";
+import { walkChain } from "@/lib/hydraulics/network/chains";
+import { circulatingAdjacency } from "@/lib/hydraulics/network/circulating";
 import { components, type NetworkModel } from "@/lib/hydraulics/network/model";
 import type { Schematic } from "@/lib/schematic/schema";
 import type { Findings } from "./finding";
 
 export function plantFindings(doc: Schematic, model: NetworkModel, f: Findings): void {
-  const adj = flowAdjacency(doc, model);
+  // Walk the circulating network only: a tee whose branch leads only to
+  // accessories, vessels or drain cocks (however many tees deep) is not a
+  // branch, so the walk carries on to the strainer / isolation valve beyond it.
+  const adj = circulatingAdjacency(model);
   const zones = doc.parts.filter((p) => p.type === "zone-valve");
   for (const [k, l] of model.links.entries()) {
     if (l.role !== "heat-source") continue;

@@ -40,9 +40,19 @@ export function laminar(re: number): number {
  */
 export function colebrook(re: number, relRoughness: number): number {
   checkArgs(re, relRoughness);
+  return colebrookUnchecked(re, relRoughness);
+}
+
+/**
+ * colebrook() without the argument checks, for hot loops whose caller has
+ * already validated Re > 0 and 0 ≤ ε/D < 1 (same iteration, same result to
+ * the last bit). Haaland start (Haaland 1983) + Newton on x = 1/√f.
+ */
+export function colebrookUnchecked(re: number, relRoughness: number): number {
   const a = relRoughness / 3.7;
   const b = 2.51 / re;
-  let x = 1 / Math.sqrt(haaland(re, relRoughness));
+  const h = -1.8 * Math.log10((relRoughness / 3.7) ** 1.11 + 6.9 / re); // Haaland, as haaland()
+  let x = 1 / Math.sqrt(1 / (h * h));
   for (let k = 0; k < 50; k++) {
     const arg = a + b * x;
     const g = x + 2 * Math.log10(arg);

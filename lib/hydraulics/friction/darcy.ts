@@ -1,4 +1,4 @@
-import { colebrook, laminar } from "./colebrook";
+import { colebrook, colebrookUnchecked, laminar } from "./colebrook";
 
 export type FlowRegime = "laminar" | "transition" | "turbulent";
 
@@ -38,4 +38,28 @@ export function darcyFrictionFactor(re: number, relRoughness: number): { f: numb
     return { f: fLam + w * (fTurb - fLam), regime: "transition" };
   }
   return { f: colebrook(re, relRoughness), regime: "turbulent" };
+}
+
+/**
+ * darcyFrictionFactor's f as a plain number, without argument checks or an
+ * object per call — for solvers that call it per link per iteration. The
+ * caller guarantees 0 ≤ Re finite and 0 ≤ ε/D < 1; the regime follows from Re
+ * alone (flowRegimeOf). Same rule and the same arithmetic as
+ * darcyFrictionFactor, so the same value to the last bit.
+ */
+export function darcyF(re: number, relRoughness: number): number {
+  if (re < RE_NO_FLOW) return 0;
+  if (re < RE_LAMINAR_MAX) return 64 / re;
+  if (re < RE_TURBULENT_MIN) {
+    const fLam = 64 / RE_LAMINAR_MAX;
+    const fTurb = colebrookUnchecked(RE_TURBULENT_MIN, relRoughness);
+    const w = (re - RE_LAMINAR_MAX) / (RE_TURBULENT_MIN - RE_LAMINAR_MAX);
+    return fLam + w * (fTurb - fLam);
+  }
+  return colebrookUnchecked(re, relRoughness);
+}
+
+/** The regime darcyFrictionFactor reports for this Re (Re ≥ 0). */
+export function flowRegimeOf(re: number): FlowRegime {
+  return re < RE_LAMINAR_MAX ? "laminar" : re < RE_TURBULENT_MIN ? "transition" : "turbulent";
 }

@@ -12,7 +12,8 @@
  * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { pipePressureDrop } from "@/lib/hydraulics/pipes";
+import { RE_LAMINAR_MAX, RE_TURBULENT_MIN } from "@/lib/hydraulics/friction/darcy";
+import { PIPE_DROP_SLOTS, pipeDropInto, pipePressureDrop } from "@/lib/hydraulics/pipes";
 import { maxFlowM3h, pumpHeadKpa, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 
 /**
@@ -66,15 +67,14 @@ export class LinkTable {
   private readonly lastH: Float64Array;
   private readonly lastG: Float64Array;
   private readonly pumps = new Map<number, PumpData>();
-  private readonly input = {
-    flowM3s: 0,
-    innerDiameterM: 1,
-    lengthM: 0,
-    roughnessM: 0,
-    densityKgM3: 1000,
-    kinematicViscosityM2s: 1e-6,
-    sumK: 0,
-  };
+  /** per-pipe constants, filled by setPipe: cross-section πD²/4 and relative roughness ε/D */
+  private readonly area: Float64Array;
+  private readonly relRough: Float64Array;
+  /** 1 where the geometry fails pipePressureDrop's checks: evaluated the checked way, so it throws as before */
+  private readonly badPipe: Uint8Array;
+  private readonly drop = new Float64Array(PIPE_DROP_SLOTS);
+  private readonly rho: number;
+  private readonly nu: number;
 
   constructor(
     readonly count: number,
@@ -94,8 +94,11 @@ export class LinkTable {
     this.lastA = new Float64Array(count).fill(-1);
     this.lastH = new Float64Array(count);
     this.lastG = new Float64Array(count);
-    this.input.densityKgM3 = densityKgM3;
-    this.input.kinematicViscosityM2s = kinematicViscosityM2s;
+    this.area = new Float64Array(count);
+    this.relRough = new Float64Array(count);
+    this.badPipe = new Uint8Array(count);
+    this.rho = densityKgM3;
+    this.nu = kinematicViscosityM2s;
   }
 
   set(k: number, law: Law, own: Law = law): void {
@@ -107,6 +110,14 @@ export class LinkTable {
     this.eps[k] = g.roughnessM;
     this.len[k] = g.lengthM;
     this.sumK[k] = g.sumK;
+    this.area[k] = (Math.PI * g.innerDiameterM * g.innerDiameterM) / 4;
+    this.relRough[k] = g.roughnessM / g.innerDiameterM;
+    const ok = (x: number, zero: boolean) => Number.isFinite(x) && (zero ? x >= 0 : x > 0);
+    this.badPipe[k] =
+      ok(g.innerDiameterM, false) && ok(g.lengthM, true) && ok(g.roughnessM, true) && ok(this.rho, false) &&
+      ok(this.nu, false) && ok(g.sumK, true) && g.roughnessM < g.innerDiameterM
+        ? 0
+        : 1;
     this.set(k, law, LAW.pipe);
   }
   /** A pump on its curve (pumps/curve.ts, linear between points), with a Kv device in series (coefficient c). */
@@ -186,16 +197,27 @@ export class LinkTable {
     const qTiny = 1e-6;
     const a = Math.max(Math.abs(q), qTiny);
     if (a !== this.lastA[k]) {
-      const input = this.input;
-      input.flowM3s = a / 3600;
-      input.innerDiameterM = this.d[k]!;
-      input.roughnessM = this.eps[k]!;
-      input.lengthM = this.len[k]!;
-      input.sumK = this.sumK[k]!;
-      const r = pipePressureDrop(input);
-      const fr = r.frictionDpPa / 1000;
-      const fit = r.fittingsDpPa / 1000;
-      const n = r.regime === "laminar" ? 1 : r.regime === "turbulent" ? 1.9 : 2;
+      // pipeDropInto is pipePressureDrop's arithmetic without its checks: the
+      // geometry was validated once (sizing/context.ts); the flow is checked here.
+      if (!Number.isFinite(a) || this.badPipe[k]) {
+        // throws the RangeError naming the field, as every evaluation used to
+        pipePressureDrop({
+          flowM3s: a / 3600,
+          innerDiameterM: this.d[k]!,
+          roughnessM: this.eps[k]!,
+          lengthM: this.len[k]!,
+          sumK: this.sumK[k]!,
+          densityKgM3: this.rho,
+          kinematicViscosityM2s: this.nu,
+        });
+      }
+      const r = this.drop;
+      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r);
+      const re = r[2]!;
+      if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
+      const fr = r[0]! / 1000;
+      const fit = r[1]! / 1000;
+      const n = re < RE_LAMINAR_MAX ? 1 : re >= RE_TURBULENT_MIN ? 1.9 : 2;
       this.lastA[k] = a;
       this.lastH[k] = fr + fit;
       this.lastG[k] = (n * fr + 2 * fit) / a + OPEN_R;

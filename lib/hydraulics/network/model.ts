@@ -109,6 +109,8 @@ export function buildModel(doc: Schematic): NetworkModel {
   const links: ModelLink[] = [];
   const linksOfPart = new Map<string, number[]>();
   doc.parts.forEach((part, index) => {
+    const info = partRegistry[part.type];
+    if (info.role === "junction" || info.role === "vessel") return; // no through-links (partLinks' default)
     const node = (port: string) => portNode.get(`${part.id}.${port}`)!;
     const ids: number[] = [];
     for (const [role, from, to] of partLinks(part, node)) ids.push(links.push({ id: part.id, role, from, to, index }) - 1);
@@ -116,14 +118,16 @@ export function buildModel(doc: Schematic): NetworkModel {
   });
   const linkOfPipe = new Map<string, number>();
   const pipesAtPort = new Map<string, string[]>();
+  const atPort = (end: string, id: string) => {
+    const list = pipesAtPort.get(end);
+    if (list) list.push(id);
+    else pipesAtPort.set(end, [id]);
+  };
   doc.pipes.forEach((pipe, index) => {
     const from = portNode.get(pipe.from);
     const to = portNode.get(pipe.to);
-    for (const end of [pipe.from, pipe.to]) {
-      const list = pipesAtPort.get(end) ?? [];
-      list.push(pipe.id);
-      pipesAtPort.set(end, list);
-    }
+    atPort(pipe.from, pipe.id);
+    atPort(pipe.to, pipe.id);
     if (from === undefined || to === undefined) return; // parse has rejected this already
     linkOfPipe.set(pipe.id, links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1);
   });

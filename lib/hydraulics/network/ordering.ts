@@ -55,10 +55,14 @@ class Heap {
     k[i] = key;
     n[i] = node;
   }
-  pop(): [number, number] {
+  /** key of the entry the last pop() returned */
+  topKey = 0;
+  /** removes the smallest entry: returns its node, its key in topKey (no tuple per pop) */
+  pop(): number {
     const k = this.keys;
     const n = this.nodes;
-    const top: [number, number] = [k[0]!, n[0]!];
+    this.topKey = k[0]!;
+    const top = n[0]!;
     const lastK = k.pop()!;
     const lastN = n.pop()!;
     const len = k.length;
@@ -115,11 +119,12 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   let k = 0;
   let tick = 0;
   while (heap.size > 0) {
-    const [d, v] = heap.pop();
-    if (done[v] || d !== deg[v]) continue;
+    const v = heap.pop();
+    if (done[v] || heap.topKey !== deg[v]) continue;
     done[v] = 1;
     order[k++] = v;
-    const nbrs = adj[v]!.filter((u) => !done[u]);
+    const nbrs: number[] = [];
+    for (const u of adj[v]!) if (!done[u]) nbrs.push(u);
     patterns[v] = nbrs;
     for (const u of nbrs) {
       // u loses v and gains every other neighbour of v it is not adjacent to
@@ -156,7 +161,7 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   for (let i = 0; i < m; i++) {
     const v = order[i]!;
     const pat = patterns[v]!;
-    pat.sort((a, b) => pos[a]! - pos[b]!);
+    if (pat.length > 1) pat.sort((a, b) => pos[a]! - pos[b]!);
     colStart[v] = total;
     total += pat.length;
     colEnd[v] = total;
@@ -172,8 +177,9 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   }
   const slotOf = (u: number, v: number): number => {
     if (u === v) return -1;
-    const [a, b] = pos[u]! < pos[v]! ? [u, v] : [v, u];
-    for (let i = colStart[a]!; i < colEnd[a]!; i++) if (colRows[i] === b) return i;
+    const a = pos[u]! < pos[v]! ? u : v;
+    const b = a === u ? v : u;
+    for (let i = colStart[a]!, e = colEnd[a]!; i < e; i++) if (colRows[i] === b) return i;
     return -1;
   };
   let updCount = 0;

@@ -1,4 +1,4 @@
-import { darcyFrictionFactor, type FlowRegime } from "../friction/darcy";
+import { darcyF, flowRegimeOf, RE_LAMINAR_MAX, type FlowRegime } from "../friction/darcy";
 
 export interface PipePressureDropInput {
   /** Volume flow Q, m³/s; sign = direction (from → to). */
@@ -56,30 +56,68 @@ export function pipePressureDrop(input: PipePressureDropInput): PipePressureDrop
   positive("kinematicViscosityM2s", kinematicViscosityM2s, false);
   positive("sumK", sumK, true);
   if (!(roughnessM < innerDiameterM)) throw new RangeError(`roughnessM ${roughnessM} must be below innerDiameterM ${innerDiameterM}`);
-  const area = (Math.PI * innerDiameterM * innerDiameterM) / 4;
-  const velocityMps = flowM3s / area;
+  const out = dropScratch; // filled and read before returning: no state survives the call
+  pipeDropInto(flowM3s, innerDiameterM, (Math.PI * innerDiameterM * innerDiameterM) / 4, lengthM, roughnessM / innerDiameterM, densityKgM3, kinematicViscosityM2s, sumK, out);
+  // As darcyFrictionFactor: Re must be finite (a flow near the float limit overflows it).
+  if (!Number.isFinite(out[2]!)) throw new RangeError(`re must be ≥ 0 and finite, got ${out[2]}`);
+  const frictionDpPa = out[0]!;
+  const fittingsDpPa = out[1]!;
+  return {
+    velocityMps: out[4]!,
+    reynolds: out[2]!,
+    frictionFactor: out[3]!,
+    regime: flowRegimeOf(out[2]!),
+    frictionDpPa,
+    fittingsDpPa,
+    dpPa: frictionDpPa + fittingsDpPa,
+    gradientPaPerM: out[5]!,
+  };
+}
+
+/** Length of the array pipeDropInto writes. */
+export const PIPE_DROP_SLOTS = 6;
+const dropScratch = new Float64Array(PIPE_DROP_SLOTS);
+
+/**
+ * The arithmetic of pipePressureDrop without its argument checks and without
+ * allocating: for the network solver and the per-pipe results, which validate
+ * each pipe's geometry once per calculation (sizing/context.ts) and call this
+ * per link per iteration. Writes into out:
+ *   [0] frictionDpPa, [1] fittingsDpPa, [2] Re, [3] f, [4] velocity m/s, [5] gradient Pa/m
+ * (regime = flowRegimeOf(Re)). Same formulas, same operation order as
+ * pipePressureDrop — Darcy–Weisbach Δp = (f·L/D + ΣK)·ρ·v²/2, v = Q/A,
+ * Re = |v|·D/ν, laminar R = 32·ρ·ν·|v|/D² (Hagen–Poiseuille) — so the same
+ * numbers to the last bit. areaM2 = πD²/4 and relRoughness = ε/D are the
+ * caller's per-pipe constants.
+ */
+export function pipeDropInto(
+  flowM3s: number,
+  innerDiameterM: number,
+  areaM2: number,
+  lengthM: number,
+  relRoughness: number,
+  densityKgM3: number,
+  kinematicViscosityM2s: number,
+  sumK: number,
+  out: Float64Array,
+): void {
+  const velocityMps = flowM3s / areaM2;
   const re = (Math.abs(velocityMps) * innerDiameterM) / kinematicViscosityM2s;
-  const { f, regime } = darcyFrictionFactor(re, roughnessM / innerDiameterM);
+  const f = darcyF(re, relRoughness);
   const dynamicPressurePa = (densityKgM3 * velocityMps * velocityMps) / 2;
   const sign = Math.sign(flowM3s);
   // Laminar: Hagen–Poiseuille R = 32·ρ·ν·|v|/D² — the same as f·ρv²/(2D) with f = 64/Re, but
   // free of the Infinity·0 that 64/Re · v² would give for a vanishing flow.
   const gradientPaPerM =
-    regime === "laminar"
+    re < RE_LAMINAR_MAX
       ? (32 * densityKgM3 * kinematicViscosityM2s * Math.abs(velocityMps)) / (innerDiameterM * innerDiameterM)
       : (f * dynamicPressurePa) / innerDiameterM;
-  const frictionDpPa = sign * gradientPaPerM * lengthM;
-  const fittingsDpPa = sign * sumK * dynamicPressurePa;
-  return {
-    velocityMps,
-    reynolds: re,
-    frictionFactor: f,
-    regime,
-    frictionDpPa,
-    fittingsDpPa,
-    dpPa: frictionDpPa + fittingsDpPa,
-    gradientPaPerM,
-  };
+  out[0] = sign * gradientPaPerM * lengthM;
+  out[1] = sign * sumK * dynamicPressurePa;
+  out[2] = re;
+  out[3] = f;
+  out[4] = velocityMps;
+  out[5] = gradientPaPerM;
 }
 
 /**

@@ -1,7 +1,7 @@
 /**
  * Runs the scenarios: simulate the valve state, then temperatures, and report
- * flows, drops, heat-source flow and return temperature, and each radiator's
- * flow, output and return temperature.
+ * flows, drops, heat-source flow and return temperature, and each emitter's
+ * (radiator, UFH loop, fan coil, heat load) flow, output and return temperature.
  */
 import { NO_FLOW_M3H } from "@/lib/hydraulics/network/behaviour";
 import type { EngineContext } from "@/lib/hydraulics/sizing/context";
@@ -52,7 +52,8 @@ export function scenarioResult(ctx: EngineContext, spec: ScenarioSpec, sim: Simu
   });
   const emitters: ScenarioResult["emitters"] = [];
   model.links.forEach((l, k) => {
-    if (l.role !== "load" || doc.parts[l.index]!.type !== "radiator") return;
+    // Every emitter and load (radiator, UFH loop, fan coil, heat load); the cylinder coil is reported in hotWater.
+    if (l.role !== "load" || doc.parts[l.index]!.type === "cylinder") return;
     const flowing = Math.abs(sim.q[k]!) >= NO_FLOW_M3H;
     emitters.push({
       id: l.id,

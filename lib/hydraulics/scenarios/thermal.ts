@@ -2,8 +2,11 @@
  * Temperatures in a simulated state, by steady mixing along the solved flows:
  * every heat source delivers the design flow temperature; an emitter's outlet
  * follows from its EN 442 characteristic at its flow (emitters/emitterAtFlow);
- * a cylinder coil gives up at most its rated output; other loads their design
- * heat; a junction mixes its inflows by flow (Σq·T/Σq, constant ρ·cp — the
+ * a cylinder coil gives up at most its rated output; other loads (UFH loops,
+ * fan coils, heat loads) ṁ·cp·ΔT at their design ΔT, capped by their heat
+ * load and never cooling the water below the room (a fixed load with a fixed
+ * ΔT: less flow, proportionally less heat — on the safe side for a starved
+ * loop); a junction mixes its inflows by flow (Σq·T/Σq, constant ρ·cp — the
  * first-law balance). Links are visited in topological order of the flow
  * direction (Kahn 1962); loops that bypass the heat source (a buffer's
  * secondary) are closed by repeating that order until temperatures settle.
@@ -103,10 +106,16 @@ export function thermal(ctx: EngineContext, q: Float64Array): Thermal {
       });
       w = r.outputW;
       tout = r.returnC;
+    } else if (part.type === "cylinder") {
+      w = Math.max(0, Math.min(part.props.coilOutputKw * 1000, cap * (tin - part.props.coldWaterC)));
+      tout = tin - w / cap;
     } else {
-      const floorC = part.type === "cylinder" ? part.props.coldWaterC : Math.min(tin, 20);
-      const rated = part.type === "cylinder" ? part.props.coilOutputKw * 1000 : (part.props as { heatLoadW: number }).heatLoadW;
-      w = Math.max(0, Math.min(rated, cap * (tin - floorC)));
+      // Fixed loads (ufh-loop, fan-coil, heat-load): ṁ·cp·ΔT at their design ΔT,
+      // capped by the heat load, and never cooling the water below the room.
+      const p = part.props as { heatLoadW: number; deltaTK?: number | null; roomTemperatureC?: number };
+      const dT = p.deltaTK ?? ctx.deltaTK ?? 0;
+      const roomC = Math.min(tin, p.roomTemperatureC ?? 20);
+      w = Math.max(0, Math.min(p.heatLoadW, cap * dT, cap * (tin - roomC)));
       tout = tin - w / cap;
     }
     loadOutputW.set(k, w);

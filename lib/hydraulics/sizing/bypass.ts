@@ -2,11 +2,18 @@
  * Differential-pressure bypass: the opening it should be set to and what the
  * heat source still gets when every zone valve is shut.
  *
- * Recommended opening = the largest zone-side Δp between the bypass ends at
- * design flow (over the circuits whose flow leg passes one end and return leg
- * the other) plus a margin of max(10 %, 2 kPa), so the bypass stays shut while
- * zones are open. The margin is common practice, not a standard value.
+ * Recommended opening = the larger of
+ *  - the largest zone-side Δp between the bypass ends at design flow (over the
+ *    circuits whose flow leg passes one end and return leg the other), and
+ *  - the Δp the pumps really put across the bypass ends with every zone open
+ *    and the bypass shut (simulated: pumps on their curves, no flow forced) —
+ *    a pump on its curve usually delivers more than the design flow, and a
+ *    valve set to the design Δp alone would then pass flow all the time,
+ * plus a margin of max(10 %, 2 kPa), so the bypass stays shut while zones are
+ * open. The margin is common practice, not a standard value.
  */
+import { scenarioState } from "@/lib/hydraulics/scenarios/run";
+import { simulate } from "@/lib/hydraulics/scenarios/simulate";
 import type { EngineContext } from "./context";
 import { bypassBranchPoints, type ModeRun } from "./mode";
 
@@ -15,15 +22,28 @@ export const BYPASS_MARGIN_MIN_KPA = 2;
 
 export interface BypassSizing {
   id: string;
+  /** largest zone-side Δp across the bypass ends at design flow, kPa */
   zonesDpKpa: number | null;
+  /** Δp across the bypass ends with every zone open and the bypass shut (simulated), kPa */
+  openZonesDpKpa: number | null;
   recommendedOpeningKpa: number | null;
   /** opening used when simulating: the drawn one, else the recommended one */
   openingKpa: number | null;
 }
 
+/** Heads with every zone valve open and every dp-bypass shut, pumps on their curves; null if it did not converge. */
+function allZonesOpenHeads(ctx: EngineContext, heating: ModeRun): Float64Array | null {
+  const zones = ctx.doc.parts.filter((p) => p.type === "zone-valve").map((p) => p.id);
+  const spec = { name: "all zones open", mode: "heating" as const, valves: Object.fromEntries(zones.map((z) => [z, true])) };
+  // No opening given to any bypass: simulated as shut (laws.ts), so the heads are the Δp it must hold.
+  const sim = simulate(ctx, scenarioState(ctx, spec, new Map()), heating.solution.q);
+  return sim.converged ? sim.head : null;
+}
+
 export function sizeBypasses(ctx: EngineContext, heating: ModeRun | null): BypassSizing[] {
   const out: BypassSizing[] = [];
   const branch = bypassBranchPoints(ctx);
+  let open: Float64Array | null | undefined;
   for (const [k, link] of ctx.model.links.entries()) {
     if (link.role !== "bypass") continue;
     const [endA, endB] = branch.get(k)!;
@@ -53,15 +73,33 @@ export function sizeBypasses(ctx: EngineContext, heating: ModeRun | null): Bypas
         [part.id],
       );
     }
-    const recommended = zones === null ? null : Math.max(zones * (1 + BYPASS_MARGIN_FRACTION), zones + BYPASS_MARGIN_MIN_KPA);
-    if (drawn !== null && zones !== null && drawn < zones) {
+    let openDp: number | null = null;
+    if (zones !== null && heating) {
+      if (open === undefined) open = allZonesOpenHeads(ctx, heating);
+      const dp = open === null ? NaN : Math.abs(open[endA]! - open[endB]!);
+      if (Number.isFinite(dp)) openDp = dp;
+      else {
+        ctx.findings.info(
+          "bypass.open-dp-unknown",
+          `${part.id}: the all-zones-open simulation did not converge, so the opening is recommended from the design Δp alone`,
+          [part.id],
+        );
+      }
+    }
+    const need = zones === null ? null : Math.max(zones, openDp ?? -Infinity);
+    const recommended = need === null ? null : Math.max(need * (1 + BYPASS_MARGIN_FRACTION), need + BYPASS_MARGIN_MIN_KPA);
+    if (drawn !== null && need !== null && drawn < need) {
+      const why =
+        openDp !== null && openDp > zones!
+          ? `the ${openDp.toFixed(1)} kPa the pump puts across its ends with every zone open`
+          : `the zones' ${zones!.toFixed(1)} kPa at design flow`;
       ctx.findings.warning(
         "bypass.opening-low",
-        `${part.id}: opens at ${drawn} kPa, below the zones' ${zones.toFixed(1)} kPa at design flow, so it passes flow with every zone open`,
+        `${part.id}: opens at ${drawn} kPa, below ${why}, so it passes flow with every zone open`,
         [part.id],
       );
     }
-    out.push({ id: part.id, zonesDpKpa: zones, recommendedOpeningKpa: recommended, openingKpa: drawn ?? recommended });
+    out.push({ id: part.id, zonesDpKpa: zones, openZonesDpKpa: openDp, recommendedOpeningKpa: recommended, openingKpa: drawn ?? recommended });
   }
   return out;
 }

@@ -148,10 +148,13 @@ function circuitOf(
   const dp = h[r.to]! - h[load.inNode]! + dpLoad + (h[load.outNode]! - h[r.from]!) + dpRoot;
   let path: string[] = [];
   if (flowLeg && returnLeg) {
-    path = new Array<string>(flowLeg.length + 1 + returnLeg.length);
-    for (let i = 0; i < flowLeg.length; i++) path[i] = flowLeg[flowLeg.length - 1 - i]!;
-    path[flowLeg.length] = load.id;
-    for (let i = 0; i < returnLeg.length; i++) path[flowLeg.length + 1 + i] = returnLeg[i]!;
+    // A heat source that is its own pump is part of the circuit (its exchanger loss is in dp): list it first.
+    const lead = r.role === "heat-source" ? 1 : 0;
+    path = new Array<string>(lead + flowLeg.length + 1 + returnLeg.length);
+    if (lead) path[0] = r.id;
+    for (let i = 0; i < flowLeg.length; i++) path[lead + i] = flowLeg[flowLeg.length - 1 - i]!;
+    path[lead + flowLeg.length] = load.id;
+    for (let i = 0; i < returnLeg.length; i++) path[lead + flowLeg.length + 1 + i] = returnLeg[i]!;
   }
   return { ...base, pump: r.id, path, pressureDropKpa: Number.isFinite(dp) ? dp : null };
 }

@@ -2,7 +2,8 @@
  * One design mode (heating or hot-water) end to end: design flows, pipe and
  * part results, circuits with index and balancing, pump duties.
  */
-import { flowAdjacency, walkChain } from "@/lib/hydraulics/network/chains";
+import { walkChain } from "@/lib/hydraulics/network/chains";
+import { circulatingAdjacency } from "@/lib/hydraulics/network/circulating";
 import type { Circuit, ModeResult } from "@/lib/schematic/results";
 import { traceCircuits, type CircuitAnalysis } from "./circuits";
 import type { EngineContext } from "./context";
@@ -22,7 +23,8 @@ export interface ModeRun {
 export function bypassBranchPoints(ctx: EngineContext): Map<number, [number, number]> {
   const out = new Map<number, [number, number]>();
   if (!ctx.model.links.some((l) => l.role === "bypass")) return out;
-  const adj = flowAdjacency(ctx.doc, ctx.model);
+  // Dead-end sub-trees (vessels, accessories) are not branches (network/circulating.ts).
+  const adj = circulatingAdjacency(ctx.model);
   ctx.model.links.forEach((l, k) => {
     if (l.role === "bypass") out.set(k, [walkChain(ctx.model, adj, l.from, k).end, walkChain(ctx.model, adj, l.to, k).end]);
   });

@@ -4,6 +4,13 @@
  * and the suggested size: the smallest catalogue size of the same material
  * whose velocity ≤ design.maxVelocityMps and friction gradient ≤
  * design.targetGradientPaPerM (CIBSE Guide B-style limits, references.md §9).
+ *
+ * No flow: a design flow with |q| < PIPE_NO_FLOW_M3H is solver round-off (a
+ * leg to a vessel or accessory solves to ±1e-13 m³/h, not to 0) and is
+ * reported as exactly 0. Such a pipe has no Reynolds number or friction factor
+ * (f = 64/Re is meaningless at Re → 0): both are null, its velocity, drop and
+ * gradient are 0, no size is suggested (null, not the smallest size), and one
+ * info finding `pipe.no-flow` per mode names all of them.
  */
 import { pipeCatalogue, pipePressureDrop } from "@/lib/hydraulics/pipes";
 import type { PipeResult } from "@/lib/schematic/results";
@@ -11,11 +18,14 @@ import type { EngineContext } from "./context";
 
 const fin = (x: number): number | null => (Number.isFinite(x) ? x : null);
 
+/** Below this |flow| (m³/h) a design pipe flow is solver round-off and is reported as 0. */
+export const PIPE_NO_FLOW_M3H = 1e-9;
+
 export function suggestSize(ctx: EngineContext, pipeIndex: number, flowM3h: number): string | null {
   const pipe = ctx.doc.pipes[pipeIndex]!;
   const fluid = ctx.fluid!;
   const geom = ctx.pipeGeom[pipeIndex];
-  if (Math.abs(flowM3h) < 1e-9) return null;
+  if (!(Math.abs(flowM3h) >= PIPE_NO_FLOW_M3H)) return null;
   const qM3s = Math.abs(flowM3h) / 3600;
   for (const row of pipeCatalogue[pipe.material]) {
     // Velocity first: it needs no friction factor and rules out most small sizes.
@@ -40,11 +50,18 @@ export function suggestSize(ctx: EngineContext, pipeIndex: number, flowM3h: numb
 export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): PipeResult[] {
   const fluid = ctx.fluid!;
   const { design } = ctx.doc;
-  return ctx.doc.pipes.map((pipe, i) => {
+  const noFlow: string[] = [];
+  const out = ctx.doc.pipes.map((pipe, i) => {
     const k = ctx.model.linkOfPipe.get(pipe.id)!;
-    const flowM3h = q[k]!;
+    const raw = q[k]!;
+    const flowM3h = Math.abs(raw) < PIPE_NO_FLOW_M3H ? 0 : raw;
     const geom = ctx.pipeGeom[i];
     const flow = fin(flowM3h);
+    if (flowM3h === 0) {
+      noFlow.push(pipe.id);
+      const zero = geom ? 0 : null;
+      return { id: pipe.id, flowM3h: 0, velocityMps: zero, reynolds: null, frictionFactor: null, pressureDropKpa: zero, gradientPaPerM: zero, suggestedSize: null };
+    }
     if (!geom) {
       return { id: pipe.id, flowM3h: flow, velocityMps: null, reynolds: null, frictionFactor: null, pressureDropKpa: null, gradientPaPerM: null, suggestedSize: flow === null ? null : suggestSize(ctx, i, flowM3h) };
     }
@@ -82,4 +99,12 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
       suggestedSize: suggested,
     };
   });
+  if (noFlow.length > 0) {
+    ctx.findings.info(
+      "pipe.no-flow",
+      `${noFlow.length} pipe${noFlow.length > 1 ? "s carry" : " carries"} no flow in ${mode} mode (|q| < ${PIPE_NO_FLOW_M3H} m³/h: vessel and accessory legs, shut or unused branches), so no Reynolds number, friction factor or suggested size is given for ${noFlow.length > 1 ? "them" : "it"}`,
+      noFlow,
+    );
+  }
+  return out;
 }

@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { AuthError, can, requireProjectRole } from "@/lib/auth/authorize";
+import { can, requireProjectRole } from "@/lib/auth/authorize";
+import { pageAccess } from "@/lib/auth/page-guard";
+import { NotAllowed } from "@/components/ui/not-allowed";
 import { getProjectHead } from "@/db/queries/project-admin";
 import { listProjectSchematics } from "@/db/queries/schematics";
 import { NewSchematicForm } from "@/components/projects/new-schematic-form";
@@ -12,14 +14,9 @@ export const dynamic = "force-dynamic";
 
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { projectId } = await params;
-  let access;
-  try {
-    access = await requireProjectRole(projectId, "project.read");
-  } catch (e) {
-    if (e instanceof AuthError && e.status === 404) notFound();
-    throw e;
-  }
-  const { user, role } = access;
+  const access = await pageAccess(() => requireProjectRole(projectId, "project.read"));
+  if (!access.ok) return <NotAllowed message={access.message} />;
+  const { user, role } = access.value;
   const [project, schematics] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id)]);
   if (!project) notFound();
   // Variants are listed under the schematic they were made from; orphans stand on their own.

@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Fragment } from "react";
 import { notFound } from "next/navigation";
-import { AuthError, can, requireProjectRole } from "@/lib/auth/authorize";
+import { can, requireProjectRole } from "@/lib/auth/authorize";
+import { pageAccess } from "@/lib/auth/page-guard";
+import { NotAllowed } from "@/components/ui/not-allowed";
 import { getProjectHead } from "@/db/queries/project-admin";
 import { listMembers } from "@/lib/team/members";
 import { listPendingInvitations } from "@/lib/team/invitations";
@@ -22,14 +24,9 @@ const roleNote: Record<string, string> = {
 export default async function TeamPage({ params, searchParams }: { params: Promise<{ projectId: string }>; searchParams: Promise<{ joined?: string }> }) {
   const { projectId } = await params;
   const { joined } = await searchParams;
-  let access;
-  try {
-    access = await requireProjectRole(projectId, "project.read");
-  } catch (e) {
-    if (e instanceof AuthError && e.status === 404) notFound();
-    throw e;
-  }
-  const { user, role } = access;
+  const access = await pageAccess(() => requireProjectRole(projectId, "project.read"));
+  if (!access.ok) return <NotAllowed message={access.message} />;
+  const { user, role } = access.value;
   const manage = can(role, "members.manage");
   const [project, members, invitations] = await Promise.all([
     getProjectHead(projectId), listMembers(projectId), manage ? listPendingInvitations(projectId) : Promise.resolve([]),

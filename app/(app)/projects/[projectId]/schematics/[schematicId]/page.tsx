@@ -5,7 +5,9 @@ import { CanvasOverlay } from "@/components/drawing-board/overlay/canvas-overlay
 import { BoardSession } from "@/components/drawing-board/persistence/board-session";
 import { BoardToolbar } from "@/components/drawing-board/persistence/board-toolbar";
 import { SizingReport } from "@/components/drawing-board/report/sizing-report";
-import { AuthError, requireSchematicAccess } from "@/lib/auth/authorize";
+import { requireSchematicAccess } from "@/lib/auth/authorize";
+import { pageAccess } from "@/lib/auth/page-guard";
+import { NotAllowed } from "@/components/ui/not-allowed";
 import { mayDo, schematicView } from "@/lib/persistence/schematic-view";
 import { unitPrefsFrom } from "@/lib/units/display";
 
@@ -16,16 +18,9 @@ type Params = { params: Promise<{ projectId: string; schematicId: string }> };
 
 export default async function BoardPage({ params }: Params) {
   const { projectId, schematicId } = await params;
-  let access;
-  try {
-    access = await requireSchematicAccess(schematicId, "read");
-  } catch (e) {
-    if (e instanceof AuthError && e.status !== 401) {
-      if (e.status === 404) notFound();
-      return <p role="alert" className="mx-auto max-w-xl px-4 py-10 text-ink-soft">{e.message}</p>;
-    }
-    throw e;
-  }
+  const checked = await pageAccess(() => requireSchematicAccess(schematicId, "read"));
+  if (!checked.ok) return <NotAllowed message={checked.message} />;
+  const access = checked.value;
   if (access.schematic.projectId !== projectId) redirect(`/projects/${access.schematic.projectId}/schematics/${schematicId}`);
   const [view, canSize] = await Promise.all([schematicView(access), mayDo(schematicId, "size")]);
   if (!view) notFound();

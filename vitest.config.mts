@@ -6,9 +6,9 @@ import path from "node:path";
 export default defineConfig({
   resolve: {
     alias: {
-      "@": path.resolve(__dirname),
+      "@": path.resolve(import.meta.dirname),
       // the marker package throws outside React Server Components; tests run server code directly
-      "server-only": path.resolve(__dirname, "node_modules/server-only/empty.js"),
+      "server-only": path.resolve(import.meta.dirname, "node_modules/server-only/empty.js"),
     },
   },
   test: {
