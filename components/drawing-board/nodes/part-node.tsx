@@ -5,12 +5,14 @@
  * that changed, so a drag or an edit elsewhere does not repaint it.
  */
 import { memo } from "react";
-import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
+import { Handle, Position, useStore, type Node, type NodeProps } from "@xyflow/react";
 import { partRegistry, type Part } from "@/lib/schematic";
 import { useBoard } from "../store";
 import { layoutOf, symbols } from "../parts";
 import { orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
 import type { PortSpot } from "../parts/layout";
+
+const TINY_ZOOM = 0.25;
 
 export type PartNodeData = { part: Part; orientation: Orientation; readOnly: boolean };
 export type PartNode = Node<PartNodeData, "part">;
@@ -53,15 +55,21 @@ export const PartNodeView = memo(function PartNodeView({ id, data, selected }: N
   const base = layoutOf(part.type, part.props);
   const layout = orientedLayout(base, orientation);
   const Symbol = symbols[part.type];
+  // below 25 % a symbol is a dozen pixels: draw a plain outline (1,000-part overviews repaint fast)
+  const tiny = useStore((s) => s.transform[2] < TINY_ZOOM);
   const ports = Object.entries(layout.ports);
   const title = part.label ? `${part.label} (${id})` : `${partRegistry[part.type].label} ${id}`;
   return (
     <div className={`lw-part ${selected ? "lw-part-selected" : ""}`} style={{ width: layout.w, height: layout.h }} title={title} data-part-type={part.type}>
-      <svg width={layout.w} height={layout.h} className="lw-symbol" aria-hidden>
-        <g transform={svgTransform(base, orientation)}>
-          <Symbol w={base.w} h={base.h} props={part.props as Record<string, unknown>} />
-        </g>
-      </svg>
+      {tiny ? (
+        <div className="lw-part-box" />
+      ) : (
+        <svg width={layout.w} height={layout.h} className="lw-symbol" aria-hidden>
+          <g transform={svgTransform(base, orientation)}>
+            <Symbol w={base.w} h={base.h} props={part.props as Record<string, unknown>} />
+          </g>
+        </svg>
+      )}
       {ports.map(([name, spot]) => (
         // a lone "connection" port needs no name
         <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} labelled={ports.length > 1} />

@@ -36,7 +36,7 @@ export function emitterAtFlow(input: EmitterAtFlowInput): { outputW: number; ret
   }
   if (massFlowKgs === 0) return { outputW: 0, returnC: roomC };
   const capacity = massFlowKgs * specificHeatJkgK;
-  // g(t2) = Φ(t1, t2) − ṁcp(t1 − t2) rises with t2. Newton on t2, kept inside
+  // g(t2) = Φ(t1, t2) − ṁcp(t1 − t2) rises with t2. Newton (on ln(t2 − t_r)), kept inside
   // the bracket [lo, hi] that holds the root (bisection whenever a Newton step
   // would leave it), so it converges whatever the start; Φ50 and n are checked
   // once (en442Output's RangeErrors). Same root as plain bisection, ~5 steps.
@@ -59,7 +59,10 @@ export function emitterAtFlow(input: EmitterAtFlowInput): { outputW: number; ret
     // dΦ/dt2 = n·Φ/ΔT_ln · dΔT_ln/db, dΔT_ln/db = (ΔT_ln/b − 1)/ln(a/b) (½ in the limit)
     const dDt = near ? 0.5 : (dt / b - 1) / ln;
     const slope = (dt > 0 ? (exponentN * phi * dDt) / dt : 0) + capacity;
-    let next = t - gv / slope;
+    // Below the root (g < 0) plain Newton on t2 goes straight in; above it,
+    // towards t_r, g turns steep in b (ΔT_ln → 0 like 1/ln(a/b)) but stays
+    // smooth in ln b, so the step is taken on ln b there (b stays > 0).
+    let next = gv > 0 ? roomC + b * Math.exp(-gv / (slope * b)) : t - gv / slope;
     if (!(next > lo && next < hi)) next = (lo + hi) / 2;
     const step = Math.abs(next - t);
     t = next;

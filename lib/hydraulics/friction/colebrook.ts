@@ -46,13 +46,21 @@ export function colebrook(re: number, relRoughness: number): number {
 /**
  * colebrook() without the argument checks, for hot loops whose caller has
  * already validated Re > 0 and 0 ≤ ε/D < 1 (same iteration, same result to
- * the last bit). Haaland start (Haaland 1983) + Newton on x = 1/√f.
+ * the last bit). Haaland start (Haaland 1983) + Newton on x = 1/√f, or
+ * Newton from guessX (> 0) when the caller has a better start.
  */
-export function colebrookUnchecked(re: number, relRoughness: number): number {
+export function colebrookUnchecked(re: number, relRoughness: number, guessX = 0): number {
   const a = relRoughness / 3.7;
   const b = 2.51 / re;
-  const h = -1.8 * Math.log10((relRoughness / 3.7) ** 1.11 + 6.9 / re); // Haaland, as haaland()
-  let x = 1 / Math.sqrt(1 / (h * h));
+  let x: number;
+  if (guessX > 0) {
+    // Warm start: a network solver passes the x = 1/√f this pipe had at its
+    // previous flow; Newton then needs one or two steps to the same 1e-10.
+    x = guessX;
+  } else {
+    const h = -1.8 * Math.log10((relRoughness / 3.7) ** 1.11 + 6.9 / re); // Haaland, as haaland()
+    x = 1 / Math.sqrt(1 / (h * h));
+  }
   for (let k = 0; k < 50; k++) {
     const arg = a + b * x;
     const g = x + 2 * Math.log10(arg);

@@ -45,9 +45,11 @@ export function darcyFrictionFactor(re: number, relRoughness: number): { f: numb
  * object per call — for solvers that call it per link per iteration. The
  * caller guarantees 0 ≤ Re finite and 0 ≤ ε/D < 1; the regime follows from Re
  * alone (flowRegimeOf). Same rule and the same arithmetic as
- * darcyFrictionFactor, so the same value to the last bit.
+ * darcyFrictionFactor, so the same value to the last bit — or, given guessX
+ * (1/√f of a nearby turbulent point), Colebrook's Newton started there: the
+ * same root to ~1e-15.
  */
-export function darcyF(re: number, relRoughness: number): number {
+export function darcyF(re: number, relRoughness: number, guessX = 0): number {
   if (re < RE_NO_FLOW) return 0;
   if (re < RE_LAMINAR_MAX) return 64 / re;
   if (re < RE_TURBULENT_MIN) {
@@ -56,7 +58,7 @@ export function darcyF(re: number, relRoughness: number): number {
     const w = (re - RE_LAMINAR_MAX) / (RE_TURBULENT_MIN - RE_LAMINAR_MAX);
     return fLam + w * (fTurb - fLam);
   }
-  return colebrookUnchecked(re, relRoughness);
+  return colebrookUnchecked(re, relRoughness, guessX);
 }
 
 /** The regime darcyFrictionFactor reports for this Re (Re ≥ 0). */

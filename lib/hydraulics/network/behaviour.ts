@@ -14,7 +14,7 @@
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
 import { RE_LAMINAR_MAX, RE_TURBULENT_MIN } from "@/lib/hydraulics/friction/darcy";
 import { PIPE_DROP_SLOTS, pipeDropInto, pipePressureDrop } from "@/lib/hydraulics/pipes";
-import { maxFlowM3h, pumpHeadKpa, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
+import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 
 /**
  * Resistance of an open "loss-free" link, kPa per m³/h: 1e-4 kPa at 1 m³/h,
@@ -66,6 +66,8 @@ export class LinkTable {
   private readonly lastA: Float64Array;
   private readonly lastH: Float64Array;
   private readonly lastG: Float64Array;
+  /** 1/√f at the last turbulent evaluation: Colebrook's warm start (0: none yet) */
+  private readonly lastX: Float64Array;
   private readonly pumps = new Map<number, PumpData>();
   /** per-pipe constants, filled by setPipe: cross-section πD²/4 and relative roughness ε/D */
   private readonly area: Float64Array;
@@ -94,6 +96,7 @@ export class LinkTable {
     this.lastA = new Float64Array(count).fill(-1);
     this.lastH = new Float64Array(count);
     this.lastG = new Float64Array(count);
+    this.lastX = new Float64Array(count);
     this.area = new Float64Array(count);
     this.relRough = new Float64Array(count);
     this.badPipe = new Uint8Array(count);
@@ -212,8 +215,9 @@ export class LinkTable {
         });
       }
       const r = this.drop;
-      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r);
+      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, this.lastX[k]!);
       const re = r[2]!;
+      if (re >= RE_TURBULENT_MIN) this.lastX[k] = 1 / Math.sqrt(r[3]!);
       if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
       const fr = r[0]! / 1000;
       const fit = r[1]! / 1000;
@@ -243,10 +247,12 @@ export class LinkTable {
       head = p.hMax - p.steep * (q - p.qMax);
       slope = -p.steep;
     } else {
-      head = pumpHeadKpa(p.curve, q) ?? 0;
+      // The curve was checked in setPump (maxFlowM3h, pumpHeadKpa); a NaN flow throws as before.
+      if (!Number.isFinite(q)) pumpHeadKpa(p.curve, q);
+      head = pumpHeadKpaUnchecked(p.curve, q) ?? 0;
       const lo = Math.max(0, q - p.delta);
       const hi = Math.min(p.qMax, q + p.delta);
-      slope = hi > lo ? ((pumpHeadKpa(p.curve, hi) ?? 0) - (pumpHeadKpa(p.curve, lo) ?? 0)) / (hi - lo) : 0;
+      slope = hi > lo ? ((pumpHeadKpaUnchecked(p.curve, hi) ?? 0) - (pumpHeadKpaUnchecked(p.curve, lo) ?? 0)) / (hi - lo) : 0;
     }
     const c = this.c[k]!;
     const a = Math.abs(q);

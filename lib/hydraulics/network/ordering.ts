@@ -101,14 +101,15 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   // Merge parallel links: deduplicate each list once.
   for (let v = 0; v < m; v++) {
     const list = adj[v]!;
-    const uniq: number[] = [];
-    for (const u of list) {
+    let len = 0;
+    for (let i = 0; i < list.length; i++) {
+      const u = list[i]!;
       if (stamp[u] === v) continue;
       stamp[u] = v;
-      uniq.push(u);
+      list[len++] = u; // compacted in place, first occurrence kept (same order as before)
     }
-    adj[v] = uniq;
-    deg[v] = uniq.length;
+    list.length = len;
+    deg[v] = len;
   }
   stamp.fill(-1);
   const heap = new Heap();
@@ -161,7 +162,18 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   for (let i = 0; i < m; i++) {
     const v = order[i]!;
     const pat = patterns[v]!;
-    if (pat.length > 1) pat.sort((a, b) => pos[a]! - pos[b]!);
+    // Insertion sort by elimination position: patterns are a handful of entries
+    // on near-tree networks, and Array#sort allocates a work array per call.
+    for (let i = 1; i < pat.length; i++) {
+      const x = pat[i]!;
+      const px = pos[x]!;
+      let j = i - 1;
+      while (j >= 0 && pos[pat[j]!]! > px) {
+        pat[j + 1] = pat[j]!;
+        j--;
+      }
+      pat[j + 1] = x;
+    }
     colStart[v] = total;
     total += pat.length;
     colEnd[v] = total;

@@ -40,6 +40,15 @@ function assertUsable(curve: PumpCurve): void {
 export function pumpHeadKpa(curve: PumpCurve, flowM3h: number): number | null {
   assertUsable(curve);
   if (!Number.isFinite(flowM3h)) throw new RangeError(`flowM3h must be finite, got ${flowM3h}`);
+  return pumpHeadKpaUnchecked(curve, flowM3h);
+}
+
+/**
+ * pumpHeadKpa without the curve check, for the network solver, which checks
+ * each curve once (sizing/laws.ts usableCurve) and then reads it per
+ * iteration. Same interpolation, same value; flowM3h must be finite.
+ */
+export function pumpHeadKpaUnchecked(curve: PumpCurve, flowM3h: number): number | null {
   if (flowM3h < 0) return null;
   const first = curve[0]!;
   if (flowM3h <= first[0]) return first[1];

@@ -1,0 +1,30 @@
+import { parseSchematic } from "@/lib/schematic/parse";
+import { Findings } from "@/lib/hydraulics/findings/finding";
+import { createContext } from "@/lib/hydraulics/sizing/context";
+import { buildModel } from "@/lib/hydraulics/network/model";
+import { prepare } from "@/lib/hydraulics/network/gga";
+import { solveDesign } from "@/lib/hydraulics/sizing/design";
+import { traceCircuits } from "@/lib/hydraulics/sizing/circuits";
+import { pumpDuties } from "@/lib/hydraulics/sizing/pumps";
+import { pipeResults } from "@/lib/hydraulics/sizing/pipe-results";
+import { partResults } from "@/lib/hydraulics/sizing/part-results";
+import { bypassBranchPoints } from "@/lib/hydraulics/sizing/mode";
+import { generateBuildingWithPipes } from "@/lib/schematic/generate-building";
+const input = generateBuildingWithPipes(Number(process.argv[2] ?? 20000));
+const p = parseSchematic(input); if (!p.ok) throw 0;
+const doc = p.doc;
+const cpu = () => { const c = process.cpuUsage(); return (c.user + c.system) / 1000; };
+const acc: Record<string, number[]> = {};
+const time = <T,>(k: string, f: () => T): T => { const t = cpu(); const r = f(); (acc[k] ??= []).push(cpu() - t); return r; };
+for (let i = 0; i < Number(process.argv[3] ?? 6); i++) {
+  const model = time("buildModel", () => buildModel(doc));
+  time("prepare", () => prepare({ nodeCount: model.nodeCount, from: Int32Array.from(model.links, (l) => l.from), to: Int32Array.from(model.links, (l) => l.to), fixed: model.fixed }));
+  const ctx = time("createContext", () => createContext(doc, new Findings()));
+  const sol = time("solveDesign", () => solveDesign(ctx, "heating"));
+  const bp = time("bypassBranch", () => new Set([...bypassBranchPoints(ctx).values()].flat()));
+  const ca = time("traceCircuits", () => traceCircuits(ctx, sol, bp));
+  time("pumpDuties", () => pumpDuties(ctx, sol, ca));
+  time("pipeResults", () => pipeResults(ctx, sol.q, "heating"));
+  time("partResults", () => partResults(ctx, sol.state, sol.laws, sol.q, sol.head));
+}
+for (const k in acc) console.log(k.padEnd(14), acc[k]!.slice(2).sort((a, b) => a - b).map((x) => x.toFixed(1)).join(" "));
