@@ -79,7 +79,7 @@ export function plantFindings(doc: Schematic, model: NetworkModel, f: Findings):
     } else if (doc.fluid.kind === "water" && tMin === null) {
       f.info(
         "fluid.frost-protection",
-        "plain water in a heat-pump circuit: the outdoor pipes need frost protection (glycol or anti-freeze valves); set design.minOutdoorTemperatureC to check",
+        "plain water in a heat-pump circuit: the outdoor pipes need frost protection (glycol or anti-freeze valves); give the design's minimum outdoor temperature (design.minOutdoorTemperatureC) to have it checked",
         ids,
       );
     }

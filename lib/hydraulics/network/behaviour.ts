@@ -49,6 +49,11 @@ interface PumpData {
 export const kvCoefficient = (kv: number | null, densityKgM3: number): number =>
   kv === null ? 0 : kvPressureDropPa(1, kv, densityKgM3) / 1000;
 
+/** pipePressureDrop's argument check: finite and > 0 (≥ 0 where zero is allowed). */
+function usable(x: number, zeroOk: boolean): boolean {
+  return Number.isFinite(x) && (zeroOk ? x >= 0 : x > 0);
+}
+
 export class LinkTable {
   /** law used by the solver */
   readonly law: Uint8Array;
@@ -115,10 +120,9 @@ export class LinkTable {
     this.sumK[k] = g.sumK;
     this.area[k] = (Math.PI * g.innerDiameterM * g.innerDiameterM) / 4;
     this.relRough[k] = g.roughnessM / g.innerDiameterM;
-    const ok = (x: number, zero: boolean) => Number.isFinite(x) && (zero ? x >= 0 : x > 0);
     this.badPipe[k] =
-      ok(g.innerDiameterM, false) && ok(g.lengthM, true) && ok(g.roughnessM, true) && ok(this.rho, false) &&
-      ok(this.nu, false) && ok(g.sumK, true) && g.roughnessM < g.innerDiameterM
+      usable(g.innerDiameterM, false) && usable(g.lengthM, true) && usable(g.roughnessM, true) && usable(this.rho, false) &&
+      usable(this.nu, false) && usable(g.sumK, true) && g.roughnessM < g.innerDiameterM
         ? 0
         : 1;
     this.set(k, law, LAW.pipe);

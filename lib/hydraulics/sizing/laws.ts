@@ -38,16 +38,18 @@ function isOpen(part: Part, state: NetworkState): boolean {
 }
 
 /** Set a load's own resistance (radiator valve, UFH loop pipe, coil Kv) on link k. */
+/** A load's Kv device on link k: own law Kv (or zero for "no Kv"), cut (closed) in design. No closure per call. */
+function setLoadKv(t: LinkTable, k: number, v: number | null, rho: number, solver: Law | undefined): void {
+  t.c[k] = kvCoefficient(v, rho);
+  t.set(k, solver ?? (v === null ? LAW.zero : LAW.kv), v === null ? LAW.zero : LAW.kv);
+}
+
 function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design: boolean): void {
   const rho = ctx.fluid!.densityKgM3;
   const solver = design ? LAW.closed : undefined;
-  const kv = (v: number | null) => {
-    t.c[k] = kvCoefficient(v, rho);
-    t.set(k, solver ?? (v === null ? LAW.zero : LAW.kv), v === null ? LAW.zero : LAW.kv);
-  };
   switch (part.type) {
     case "radiator":
-      return kv(part.props.valveKv);
+      return setLoadKv(t, k, part.props.valveKv, rho, solver);
     case "ufh-loop": {
       const p = part.props;
       const g = { innerDiameterM: p.innerDiameterMm / 1000, roughnessM: UFH_ROUGHNESS_MM / 1000, lengthM: p.loopLengthM, sumK: 0 };
@@ -55,35 +57,37 @@ function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design
     }
     case "fan-coil":
     case "heat-load":
-      return kv(part.props.kv);
+      return setLoadKv(t, k, part.props.kv, rho, solver);
     case "cylinder":
-      return kv(part.props.coilKv);
+      return setLoadKv(t, k, part.props.coilKv, rho, solver);
     default:
       t.set(k, solver ?? LAW.zero, LAW.zero);
   }
 }
 
+/** A two-port device's Kv law on link k (check valve: one way). */
+function setDeviceKv(t: LinkTable, k: number, v: number | null, rho: number, check: boolean): void {
+  t.c[k] = kvCoefficient(v, rho);
+  t.set(k, check ? LAW.check : v === null ? LAW.zero : LAW.kv);
+}
+
 /** Set a two-port valve/device part (role "link") on link k. */
 function setDevice(t: LinkTable, k: number, part: Part, state: NetworkState, rho: number): void {
-  const kvLaw = (v: number | null, check = false) => {
-    t.c[k] = kvCoefficient(v, rho);
-    t.set(k, check ? LAW.check : v === null ? LAW.zero : LAW.kv);
-  };
   switch (part.type) {
     case "zone-valve":
-      kvLaw(part.props.kvs);
+      setDeviceKv(t, k, part.props.kvs, rho, false);
       if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
       return;
     case "isolation-valve":
-      kvLaw(part.props.kv);
+      setDeviceKv(t, k, part.props.kv, rho, false);
       if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
       return;
     case "check-valve":
-      return kvLaw(part.props.kv, true);
+      return setDeviceKv(t, k, part.props.kv, rho, true);
     case "balancing-valve":
     case "strainer":
     case "heat-meter":
-      return kvLaw(part.props.kv);
+      return setDeviceKv(t, k, part.props.kv, rho, false);
     default:
       t.set(k, LAW.zero);
   }

@@ -102,7 +102,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
   if (noFlow.length > 0) {
     ctx.findings.info(
       "pipe.no-flow",
-      `${noFlow.length} pipe${noFlow.length > 1 ? "s carry" : " carries"} no flow in ${mode} mode (|q| < ${PIPE_NO_FLOW_M3H} m³/h: vessel and accessory legs, shut or unused branches), so no Reynolds number, friction factor or suggested size is given for ${noFlow.length > 1 ? "them" : "it"}`,
+      `${noFlow.length} pipe${noFlow.length > 1 ? "s carry" : " carries"} no flow in ${mode} mode (legs to vessels and accessories, shut valves, circuits this mode does not serve): Reynolds number, friction factor and suggested size are left blank`,
       noFlow,
     );
   }
