@@ -46,20 +46,32 @@ function referenceIssues(doc: Schematic): Issue[] {
   const seen = new Set<string>();
   // One port set per part: a manifold's port list grows with its outlets.
   const portSets = new Map<string, Set<string>>();
-  const dup = (path: string, id: string) => {
-    if (seen.has(id)) issues.push({ path, message: `${path}: id '${id}' is used more than once` });
+  // Paths are formatted only for an issue: a valid 20,000-pipe document would
+  // otherwise build 60,000 path strings here for nothing.
+  const dup = (list: "parts" | "pipes", i: number, id: string) => {
+    if (seen.has(id)) {
+      const path = `${list}[${i}].id`;
+      issues.push({ path, message: `${path}: id '${id}' is used more than once` });
+    }
     seen.add(id);
   };
   doc.parts.forEach((part, i) => {
-    dup(`parts[${i}].id`, part.id);
+    dup("parts", i, part.id);
     parts.set(part.id, part);
   });
   doc.pipes.forEach((pipe, i) => {
-    dup(`pipes[${i}].id`, pipe.id);
+    dup("pipes", i, pipe.id);
     for (const end of ["from", "to"] as const) {
+      const ref = pipe[end];
+      const dot = ref.lastIndexOf(".");
+      const part = parts.get(ref.slice(0, dot));
+      if (part) {
+        let ports = portSets.get(part.id);
+        if (!ports) portSets.set(part.id, (ports = new Set(portsOf(part))));
+        if (ports.has(ref.slice(dot + 1))) continue; // the common case: nothing to report
+      }
       const path = `pipes[${i}].${end}`;
-      const { partId, port } = splitPortRef(pipe[end]);
-      const part = parts.get(partId);
+      const { partId, port } = splitPortRef(ref);
       if (!part) {
         issues.push({ path, message: `${path}: pipe '${pipe.id}' names part '${partId}', which does not exist` });
         continue;

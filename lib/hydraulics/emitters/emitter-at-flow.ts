@@ -68,7 +68,9 @@ export function emitterAtFlow(input: EmitterAtFlowInput): { outputW: number; ret
     t = next;
     if (step < 1e-11) break;
   }
-  const returnC = t;
+  // A trickle can put the root within rounding of t_r: t then lands on t_r
+  // itself, and hi (> t_r, within 1e-9 K of the root) is the answer.
+  const returnC = t > roomC ? t : hi;
   return { outputW: capacity * (flowC - returnC), returnC };
 }
 

@@ -94,24 +94,39 @@ export function buildModel(doc: Schematic): NetworkModel {
   const nodeLabel: string[] = [];
   const partById = new Map<string, Part>();
   const vesselNodes: number[] = [];
-  for (const part of doc.parts) {
+  // A part's ports get consecutive nodes in portsOf order (a junction: one node),
+  // so its links find their nodes by port index, without rebuilding and
+  // re-hashing "part.port" keys (ids are unique: parse checks that).
+  const firstNode = new Int32Array(doc.parts.length);
+  const portLists: string[][] = new Array(doc.parts.length);
+  doc.parts.forEach((part, index) => {
     partById.set(part.id, part);
     const role = partRegistry[part.type].role;
     const ports = portsOf(part);
+    portLists[index] = ports;
+    firstNode[index] = nodeLabel.length;
     if (role === "junction") {
       const n = nodeLabel.push(part.id) - 1;
       for (const port of ports) portNode.set(`${part.id}.${port}`, n);
     } else {
-      for (const port of ports) portNode.set(`${part.id}.${port}`, nodeLabel.push(`${part.id}.${port}`) - 1);
+      for (const port of ports) {
+        const key = `${part.id}.${port}`;
+        portNode.set(key, nodeLabel.push(key) - 1);
+      }
     }
     if (role === "vessel") vesselNodes.push(portNode.get(`${part.id}.connection`)!);
-  }
+  });
   const links: ModelLink[] = [];
   const linksOfPart = new Map<string, number[]>();
   doc.parts.forEach((part, index) => {
     const info = partRegistry[part.type];
     if (info.role === "junction" || info.role === "vessel") return; // no through-links (partLinks' default)
-    const node = (port: string) => portNode.get(`${part.id}.${port}`)!;
+    const ports = portLists[index]!;
+    const base = firstNode[index]!;
+    const node = (port: string) => {
+      const j = ports.indexOf(port);
+      return (j < 0 ? undefined : base + j)!;
+    };
     const ids: number[] = [];
     for (const [role, from, to] of partLinks(part, node)) ids.push(links.push({ id: part.id, role, from, to, index }) - 1);
     if (ids.length) linksOfPart.set(part.id, ids);
