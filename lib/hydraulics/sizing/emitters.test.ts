@@ -29,8 +29,27 @@ const millbrook = () =>
     parts: { id: string; type: string; props: Record<string, unknown> }[];
   };
 
+/** The demo hall with its UFH loops' floor areas removed: the "not checked" path. */
+function millbrookWithoutFloorAreas() {
+  const doc = millbrook();
+  for (const p of doc.parts) if (p.type === "ufh-loop") delete p.props.floorAreaM2;
+  return doc;
+}
+
+describe("UFH loops in the Millbrook demo with the seeded 11 m² floors", () => {
+  it("each floor can give its 800 W (EN 1264-2: 11 m² × 8.92·9^1.1 ≈ 1100 W at the 29 °C limit)", () => {
+    const r = run(millbrook());
+    for (const id of ["ufh1", "ufh2", "ufh3", "ufh4"]) {
+      const e = r.emitters.find((x) => x.id === id)!;
+      expect(e.outputAtDesignW).toBeCloseTo(800, 6);
+      expect(e.ok).toBe(true);
+    }
+    expect(r.findings.some((f) => f.code === "emitter.ufh-not-checked")).toBe(false);
+  });
+});
+
 describe("UFH loops in the Millbrook demo (no floor area given)", () => {
-  const r = run(millbrook());
+  const r = run(millbrookWithoutFloorAreas());
   const ufh = ["ufh1", "ufh2", "ufh3", "ufh4"];
 
   it("design emitters list every loop: output = heat its design flow carries at ΔT (= 800 W), ok not checked", () => {
