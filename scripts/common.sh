@@ -129,3 +129,18 @@ build_if_stale() {
     npx next build >.run/build.log 2>&1 || { tail -40 .run/build.log >&2; fail "next build failed (full log: .run/build.log)."; }
   fi
 }
+
+# The app's own environment and every set-up step before serving (npm start, npm run dev).
+prepare_app() {
+  export PORT="${PORT:-3000}"
+  export DATABASE_URL="${DATABASE_URL:-postgres://$PGUSER@127.0.0.1:$PGPORT/loopwright}"
+  export SMTP_PORT="${SMTP_PORT:-1025}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}" S3_PORT="${S3_PORT:-4569}"
+  export MAIL_WEB_URL="${MAIL_WEB_URL:-http://127.0.0.1:$MAIL_WEB_PORT}" S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_PORT}"
+  export APP_URL="${APP_URL:-http://localhost:$PORT}"
+  ensure_node_modules
+  ensure_postgres
+  ensure_database loopwright
+  migrate_and_seed
+  start_services
+  trap stop_started EXIT
+}
