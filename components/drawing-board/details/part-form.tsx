@@ -7,9 +7,15 @@
 import { partPropsSchemas, partRegistry, type Part } from "@/lib/schematic";
 import { useBoard } from "../store";
 import { NumberField } from "./number-field";
-import { PumpCurveEditor } from "./pump-curve-editor";
 import { fieldsOf, issueMessage, type FieldInfo } from "./schema-fields";
 import { TextField } from "./text-field";
+import dynamic from "next/dynamic";
+
+// The curve editor brings the charting library: load it when a pump is selected, not with the board.
+const PumpCurveEditor = dynamic(() => import("./pump-curve-editor").then((m) => m.PumpCurveEditor), {
+  ssr: false,
+  loading: () => <p className="text-xs text-ink-faint">Loading the curve…</p>,
+});
 
 const STARTING_CURVE: [number, number][] = [[0, 60], [1.5, 45], [3, 0]];
 

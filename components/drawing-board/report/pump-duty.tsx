@@ -2,7 +2,13 @@
 
 import type { ModeResult, PumpDuty as Duty, Results, Schematic } from "@/lib/schematic";
 import { convertFlow, convertPressure, showFlow, showPressure, unitLabels, type UnitPrefs } from "@/lib/units/display";
-import { PumpCurveChart } from "./pump-curve-chart";
+import dynamic from "next/dynamic";
+
+// The charting library loads only when the report shows a pump, not with the board.
+const PumpCurveChart = dynamic(() => import("./pump-curve-chart").then((m) => m.PumpCurveChart), {
+  ssr: false,
+  loading: () => <div className="h-48 animate-pulse rounded bg-paper-dark" />,
+});
 
 /** The curve a pump part or a heat source's built-in pump carries in the document. */
 function curveOf(doc: Schematic, id: string): [number, number][] {
