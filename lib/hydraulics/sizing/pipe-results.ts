@@ -13,7 +13,9 @@
  * info finding `pipe.no-flow` per mode names all of them.
  */
 import { pipeCatalogue, pipePressureDrop } from "@/lib/hydraulics/pipes";
+import { PIPE_DROP_SLOTS, pipeDropInto } from "@/lib/hydraulics/pipes/pressure-drop";
 import type { PipeResult } from "@/lib/schematic/results";
+import type { PipeGeometry } from "@/lib/hydraulics/network/behaviour";
 import type { EngineContext } from "./context";
 
 const fin = (x: number): number | null => (Number.isFinite(x) ? x : null);
@@ -21,30 +23,87 @@ const fin = (x: number): number | null => (Number.isFinite(x) ? x : null);
 /** Below this |flow| (m³/h) a design pipe flow is solver round-off and is reported as 0. */
 export const PIPE_NO_FLOW_M3H = 1e-9;
 
+/** One material's catalogue as the per-candidate constants of pipeDropInto, built once per material. */
+interface CatalogueColumns {
+  size: string[];
+  dM: Float64Array;
+  areaM2: Float64Array;
+  relRoughness: Float64Array;
+}
+const columnsByMaterial = new Map<string, CatalogueColumns>();
+function catalogueColumns(material: keyof typeof pipeCatalogue): CatalogueColumns {
+  let c = columnsByMaterial.get(material);
+  if (c) return c;
+  const rows = pipeCatalogue[material];
+  c = { size: [], dM: new Float64Array(rows.length), areaM2: new Float64Array(rows.length), relRoughness: new Float64Array(rows.length) };
+  rows.forEach((row, j) => {
+    // The same expressions, in the same order, as pipePressureDrop on this row: the same bits.
+    const dM = row.innerDiameterMm / 1000;
+    c!.size.push(row.size);
+    c!.dM[j] = dM;
+    c!.areaM2[j] = (Math.PI * dM * dM) / 4;
+    c!.relRoughness[j] = row.roughnessMm / 1000 / dM;
+  });
+  columnsByMaterial.set(material, c);
+  return c;
+}
+const suggestScratch = new Float64Array(PIPE_DROP_SLOTS);
+
 export function suggestSize(ctx: EngineContext, pipeIndex: number, flowM3h: number): string | null {
   const pipe = ctx.doc.pipes[pipeIndex]!;
   const fluid = ctx.fluid!;
-  const geom = ctx.pipeGeom[pipeIndex];
   if (!(Math.abs(flowM3h) >= PIPE_NO_FLOW_M3H)) return null;
+  const { maxVelocityMps, targetGradientPaPerM } = ctx.doc.design;
+  const { densityKgM3, kinematicViscosityM2s } = fluid;
+  // pipePressureDrop's own argument checks on the fluid (catalogue rows are valid by construction;
+  // length does not enter velocity or gradient).
+  if (!(Number.isFinite(densityKgM3) && densityKgM3 > 0)) throw new RangeError(`densityKgM3 must be > 0 and finite, got ${densityKgM3}`);
+  if (!(Number.isFinite(kinematicViscosityM2s) && kinematicViscosityM2s > 0)) {
+    throw new RangeError(`kinematicViscosityM2s must be > 0 and finite, got ${kinematicViscosityM2s}`);
+  }
   const qM3s = Math.abs(flowM3h) / 3600;
-  for (const row of pipeCatalogue[pipe.material]) {
+  const cat = catalogueColumns(pipe.material);
+  const out = suggestScratch;
+  for (let j = 0; j < cat.size.length; j++) {
     // Velocity first: it needs no friction factor and rules out most small sizes.
-    const dM = row.innerDiameterMm / 1000;
-    if (qM3s / ((Math.PI * dM * dM) / 4) > ctx.doc.design.maxVelocityMps) continue;
-    const r = pipePressureDrop({
-      flowM3s: Math.abs(flowM3h) / 3600,
-      innerDiameterM: row.innerDiameterMm / 1000,
-      roughnessM: row.roughnessMm / 1000,
-      lengthM: geom?.lengthM ?? 1,
-      densityKgM3: fluid.densityKgM3,
-      kinematicViscosityM2s: fluid.kinematicViscosityM2s,
-      sumK: 0,
-    });
-    if (Math.abs(r.velocityMps) <= ctx.doc.design.maxVelocityMps && r.gradientPaPerM <= ctx.doc.design.targetGradientPaPerM) {
-      return row.size;
-    }
+    if (qM3s / cat.areaM2[j]! > maxVelocityMps) continue;
+    // Darcy–Weisbach at this size without a result object (pipes/pressure-drop.ts, pipeDropInto).
+    pipeDropInto(qM3s, cat.dM[j]!, cat.areaM2[j]!, 1, cat.relRoughness[j]!, densityKgM3, kinematicViscosityM2s, 0, out);
+    if (!Number.isFinite(out[2]!)) throw new RangeError(`re must be ≥ 0 and finite, got ${out[2]}`);
+    if (Math.abs(out[4]!) <= maxVelocityMps && out[5]! <= targetGradientPaPerM) return cat.size[j]!;
   }
   return null;
+}
+
+const resultScratch = new Float64Array(PIPE_DROP_SLOTS);
+const positiveFinite = (x: number) => Number.isFinite(x) && x > 0;
+const nonNegativeFinite = (x: number) => Number.isFinite(x) && x >= 0;
+
+/**
+ * The numbers of pipePressureDrop (Darcy–Weisbach, pipes/pressure-drop.ts) for one pipe at its
+ * design flow, without the input and result objects when every argument passes pipePressureDrop's
+ * checks (pipeDropInto: same formulas, same bits); otherwise pipePressureDrop itself, which throws
+ * its RangeError naming the field.
+ */
+function pipeDrop(geom: PipeGeometry, flowM3s: number, densityKgM3: number, kinematicViscosityM2s: number) {
+  const { innerDiameterM, roughnessM, lengthM, sumK } = geom;
+  if (
+    !Number.isFinite(flowM3s) ||
+    !positiveFinite(innerDiameterM) ||
+    !nonNegativeFinite(lengthM) ||
+    !nonNegativeFinite(roughnessM) ||
+    !positiveFinite(densityKgM3) ||
+    !positiveFinite(kinematicViscosityM2s) ||
+    !nonNegativeFinite(sumK) ||
+    !(roughnessM < innerDiameterM)
+  ) {
+    const r = pipePressureDrop({ ...geom, flowM3s, densityKgM3, kinematicViscosityM2s });
+    return { velocityMps: r.velocityMps, reynolds: r.reynolds, frictionFactor: r.frictionFactor, dpPa: r.dpPa, gradientPaPerM: r.gradientPaPerM };
+  }
+  const out = resultScratch;
+  pipeDropInto(flowM3s, innerDiameterM, (Math.PI * innerDiameterM * innerDiameterM) / 4, lengthM, roughnessM / innerDiameterM, densityKgM3, kinematicViscosityM2s, sumK, out);
+  if (!Number.isFinite(out[2]!)) throw new RangeError(`re must be ≥ 0 and finite, got ${out[2]}`);
+  return { velocityMps: out[4]!, reynolds: out[2]!, frictionFactor: out[3]!, dpPa: out[0]! + out[1]!, gradientPaPerM: out[5]! };
 }
 
 export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): PipeResult[] {
@@ -65,7 +124,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
     if (!geom) {
       return { id: pipe.id, flowM3h: flow, velocityMps: null, reynolds: null, frictionFactor: null, pressureDropKpa: null, gradientPaPerM: null, suggestedSize: flow === null ? null : suggestSize(ctx, i, flowM3h) };
     }
-    const r = pipePressureDrop({ ...geom, flowM3s: flowM3h / 3600, densityKgM3: fluid.densityKgM3, kinematicViscosityM2s: fluid.kinematicViscosityM2s });
+    const r = pipeDrop(geom, flowM3h / 3600, fluid.densityKgM3, fluid.kinematicViscosityM2s);
     const suggested = suggestSize(ctx, i, flowM3h);
     if (Math.abs(r.velocityMps) > design.maxVelocityMps) {
       ctx.findings.warning(
