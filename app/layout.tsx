@@ -5,6 +5,7 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Loopwright", template: "%s · Loopwright" },
   description: "Draw, check and size wet heating plant rooms — from schematic to handover.",
+  icons: { icon: "/favicon.svg" },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#b4632b" };
