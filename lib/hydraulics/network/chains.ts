@@ -1,22 +1,11 @@
 /**
  * Walking chains: from a port, follow pipes and two-port parts until the
  * first branch (a node with more than two flow links), a load, a header, a
- * diverter or a heat source. Pipes that only lead to a no-flow accessory or to
- * the expansion vessel do not count as branches.
+ * diverter or a heat source. Callers pass the circulating adjacency
+ * (./circulating.ts), so dead-end legs to accessories and vessels never count as branches.
  */
-import { partRegistry } from "@/lib/schematic/parts";
-import type { Part, Schematic } from "@/lib/schematic/schema";
-import { adjacency, type Adjacency, type NetworkModel } from "./model";
-
-/** Links at each node, leaving out pipes that only lead to a no-flow accessory or vessel. */
-export function flowAdjacency(doc: Schematic, model: NetworkModel): Adjacency {
-  const dead = new Set<number>();
-  for (const part of doc.parts) {
-    const role = partRegistry[part.type].role;
-    if (role === "accessory" || role === "vessel") dead.add(model.portNode.get(`${part.id}.connection`)!);
-  }
-  return adjacency(model.nodeCount, model.links, (k) => !dead.has(model.links[k]!.from) && !dead.has(model.links[k]!.to));
-}
+import type { Part } from "@/lib/schematic/schema";
+import type { Adjacency, NetworkModel } from "./model";
 
 export interface Chain {
   parts: Part[];
