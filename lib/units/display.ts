@@ -12,6 +12,7 @@
  */
 import { unit, divide, multiply, type Unit } from "mathjs";
 import { z } from "zod";
+import { STANDARD_GRAVITY_MPS2 } from "@/lib/hydraulics/units";
 
 export const flowUnits = ["m3/h", "l/s", "l/min"] as const;
 export const pressureUnits = ["kPa", "bar", "m"] as const;
@@ -31,7 +32,6 @@ export const unitLabels: Record<FlowUnit | PressureUnit, string> = {
 };
 
 const mathjsFlow: Record<FlowUnit, string> = { "m3/h": "m^3/h", "l/s": "L/s", "l/min": "L/min" };
-export const STANDARD_GRAVITY = 9.80665; // m/s², gn (see header)
 const CONVENTIONAL_WATER_DENSITY = 1000; // kg/m³
 
 export function convertFlow(flowM3h: number, to: FlowUnit): number {
@@ -41,7 +41,7 @@ export function convertFlow(flowM3h: number, to: FlowUnit): number {
 export function convertPressure(pressureKpa: number, to: PressureUnit, densityKgM3?: number | null): number {
   if (to !== "m") return unit(pressureKpa, "kPa").toNumber(to);
   const rho = unit(densityKgM3 ?? CONVENTIONAL_WATER_DENSITY, "kg/m^3");
-  const weight = multiply(rho, unit(STANDARD_GRAVITY, "m/s^2"));
+  const weight = multiply(rho, unit(STANDARD_GRAVITY_MPS2, "m/s^2"));
   return (divide(unit(pressureKpa, "kPa"), weight) as unknown as Unit).toNumber("m");
 }
 

@@ -5,6 +5,7 @@
  * Pressures are bar gauge; "+1" converts to absolute (1 bar atmosphere, as the
  * Annex does).
  */
+import { headMToPa, paToBar } from "../units";
 
 export interface En12828Input {
   /** System water content V_s, L (> 0). */
@@ -79,7 +80,7 @@ export function en12828Vessel(input: En12828Input): En12828Result {
   check("prechargeMarginBar", margin, 0, false);
   if (input.densityKgM3 !== undefined) check("densityKgM3", input.densityKgM3, 0, true);
   const staticPressureBar =
-    input.densityKgM3 === undefined ? staticHeightM / 10 : (input.densityKgM3 * 9.80665 * staticHeightM) / 1e5;
+    input.densityKgM3 === undefined ? staticHeightM / 10 : paToBar(headMToPa(staticHeightM, input.densityKgM3));
   const floor = input.minimumPrechargeBar ?? 0;
   check("minimumPrechargeBar", floor, 0, false);
   const prechargeBar = Math.max(staticPressureBar + margin, floor);
