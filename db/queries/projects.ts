@@ -6,17 +6,17 @@ export type ProjectSummary = {
   name: string;
   client: string;
   site: string;
-  role: string | null;
+  role: string;
   schematicCount: number;
   latestStatus: string | null;
   updatedAt: string;
 };
 
 // Projects the user is a member of, with their role and the newest revision's status.
-export async function listProjectsForUser(userId: string | null): Promise<ProjectSummary[]> {
+export async function listProjectsForUser(userId: string): Promise<ProjectSummary[]> {
   const q = db()("projects as p")
-    .leftJoin("project_members as m", function () {
-      this.on("m.project_id", "p.id").andOn("m.user_id", db().raw("?", [userId ?? ""]));
+    .join("project_members as m", function () {
+      this.on("m.project_id", "p.id").andOn("m.user_id", db().raw("?", [userId]));
     })
     .select(
       "p.id", "p.name", "p.client", "p.site", "p.updated_at", "m.role",
@@ -25,10 +25,9 @@ export async function listProjectsForUser(userId: string | null): Promise<Projec
                  where s.project_id = p.id order by r.created_at desc limit 1) as latest_status`),
     )
     .orderBy("p.name");
-  if (userId) q.whereNotNull("m.role");
   const rows = await q;
   return rows.map((r) => ({
-    id: r.id, name: r.name, client: r.client, site: r.site, role: r.role ?? null,
+    id: r.id, name: r.name, client: r.client, site: r.site, role: r.role,
     schematicCount: r.schematic_count, latestStatus: r.latest_status ?? null,
     updatedAt: new Date(r.updated_at).toISOString(),
   }));
