@@ -153,19 +153,41 @@ async function benchApi() {
     console.log(`  probe answered HTTP ${first.status}: check the route — skipped.`);
     return "fail" as const;
   }
-  // warm-up, so that the measured seconds do not include JIT and route compilation
-  for (let i = 0; i < 20; i++) await probe(url, headers, body);
   const requireCjs = createRequire(path.resolve("package.json"));
   const autocannon = requireCjs("autocannon") as Autocannon;
   const duration = Number(process.env.BENCH_SECONDS ?? 10);
-  const r = await autocannon({ url, method: "POST", headers, body, connections: 10, duration });
-  const rps = r.requests.average, p99 = r.latency.p99;
-  console.log(`  10 connections, ${duration} s: ${r.non2xx} non-2xx, ${r.errors} errors, ${r.timeouts} timeouts\n`);
-  console.log(`  ${"metric".padEnd(14)} ${pad("value", 8)}  target     ok`);
-  console.log(`  ${"requests/s".padEnd(14)} ${pad(rps.toFixed(0), 8)}  ≥ 200      ${passFail(rps >= 200)}`);
-  console.log(`  ${"p99 latency".padEnd(14)} ${pad(`${p99} ms`, 8)}  < 50 ms    ${passFail(p99 < 50)}`);
-  console.log(`  ${"mean latency".padEnd(14)} ${pad(`${r.latency.average.toFixed(1)} ms`, 8)}`);
-  return rps >= 200 && p99 < 50 && r.non2xx === 0 ? ("pass" as const) : ("fail" as const);
+  // Warm-up, not counted: a freshly started server runs its first seconds unoptimised (JIT).
+  await autocannon({ url, method: "POST", headers, body, connections: 10, duration: 3 });
+  // (1) the demo hall as the issue states it: the same document again and again, as a
+  // board sized twice or an issued revision opened by a site team — answered from the
+  // results cache after the first request (lib/persistence/size.ts).
+  const same = await autocannon({ url, method: "POST", headers, body, connections: 10, duration });
+  // (2) no cache: every request a different document (the first pipe 1 mm longer each
+  // time), so every answer is computed by the engine.
+  const doc = JSON.parse(body) as { pipes: { lengthM: number }[] };
+  const baseLength = doc.pipes[0]!.lengthM;
+  let n = 0;
+  const distinct = await autocannon({
+    url,
+    connections: 10,
+    duration,
+    requests: [{ method: "POST", headers, setupRequest: (req: Record<string, unknown>) => {
+      doc.pipes[0]!.lengthM = baseLength + ++n / 1000;
+      return { ...req, body: JSON.stringify(doc) };
+    } }],
+  });
+  console.log(`  10 connections, ${duration} s each, after a 3 s warm-up\n`);
+  console.log(`  ${"".padEnd(34)} ${pad("req/s", 7)} ${pad("p99", 8)} ${pad("mean", 9)} ${pad("non-2xx", 8)}  target ≥ 200 req/s, p99 < 50 ms`);
+  const row = (label: string, r: CannonResult, judged: boolean) => {
+    const ok = r.requests.average >= 200 && r.latency.p99 < 50 && r.non2xx === 0 && r.errors === 0;
+    console.log(
+      `  ${label.padEnd(34)} ${pad(r.requests.average.toFixed(0), 7)} ${pad(`${r.latency.p99} ms`, 8)} ${pad(`${r.latency.average.toFixed(1)} ms`, 9)} ${pad(r.non2xx + r.errors + r.timeouts, 8)}  ${judged ? passFail(ok) : "(no target)"}`,
+    );
+    return ok;
+  };
+  const ok = row("demo hall, same document (cached)", same, true);
+  row("a new document every request", distinct, false);
+  return ok ? ("pass" as const) : ("fail" as const);
 }
 
 async function main() {

@@ -7,6 +7,6 @@ import { config } from "@/lib/config";
 const g = globalThis as unknown as { __loopwrightPgPool?: pg.Pool };
 
 export function pgPool(): pg.Pool {
-  g.__loopwrightPgPool ??= new pg.Pool({ connectionString: config.databaseUrl, max: Number(process.env.AUTH_POOL_MAX ?? 4) });
+  g.__loopwrightPgPool ??= new pg.Pool({ connectionString: config.databaseUrl, max: Number(process.env.AUTH_POOL_MAX ?? 10) });
   return g.__loopwrightPgPool;
 }

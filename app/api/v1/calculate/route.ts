@@ -1,7 +1,7 @@
 import { apiHandler, requireUser } from "@/lib/auth/authorize";
-import { readJsonBody } from "@/lib/persistence/json-body";
-import { invalidDocument, refusedResponse } from "@/lib/persistence/outcome";
-import { size } from "@/lib/persistence/size";
+import { parseJsonBytes, readBodyBytes } from "@/lib/persistence/json-body";
+import { refusedResponse } from "@/lib/persistence/outcome";
+import { Answer, sizeToAnswer } from "@/lib/persistence/size";
 
 export const dynamic = "force-dynamic";
 
@@ -9,11 +9,12 @@ export const dynamic = "force-dynamic";
 // 413 above 2 MB. An engine fault is answered 422 and logged: the contract promises no 500s.
 export const POST = apiHandler(async (req: Request) => {
   await requireUser();
-  const body = await readJsonBody(req);
+  const body = await readBodyBytes(req);
   if (!body.ok) return refusedResponse(body);
   try {
-    const r = size(body.value);
-    return r.ok ? Response.json(r.results) : refusedResponse(invalidDocument(r.issues));
+    const r = sizeToAnswer(body.bytes, () => parseJsonBytes(body.bytes));
+    // Compression (gzip for clients that ask) is Next's own, applied to every response.
+    return r instanceof Answer ? new Response(r.json, { headers: { "content-type": "application/json" } }) : refusedResponse(r);
   } catch (err) {
     console.error("[loopwright] engine fault in /api/v1/calculate", err);
     return Response.json({ error: "The engine could not calculate this schematic; the fault has been logged." }, { status: 422 });

@@ -8,7 +8,7 @@ import * as q from "@/db/queries/schematics";
 import { saveUserUnits } from "@/db/queries/user-preferences";
 import { parseSchematic } from "@/lib/schematic";
 import { invalidDocument, refusal, Refused, runChecked } from "@/lib/persistence/outcome";
-import { size } from "@/lib/persistence/size";
+import { Answer, sizeToAnswer } from "@/lib/persistence/size";
 import { makeVariant } from "@/lib/persistence/variants";
 import { findTransition, revisionStatuses } from "@/lib/revisions/transitions";
 import { unitPrefsSchema } from "@/lib/units/display";
@@ -83,8 +83,8 @@ export async function sizeSchematic(input: { schematicId?: string; doc: unknown 
     const i = z.object({ schematicId: uuid.optional(), doc: z.unknown() }).parse(input);
     if (i.schematicId) await requireSchematicAccess(i.schematicId, "size");
     else await requireUser();
-    const r = size(i.doc);
-    return r.ok ? r.results : invalidDocument(r.issues);
+    const r = sizeToAnswer(JSON.stringify(i.doc ?? null), () => ({ ok: true, value: i.doc }));
+    return r instanceof Answer ? r.results() : r;
   });
 }
 
