@@ -26,33 +26,20 @@
  * EPANET's head loss uses g = 32.2 ft/s² (9.81456 m/s²) in R = L/(2gDA²), so a
  * head loss h (m) is turned back into Δp = ρ·9.81456·h, undoing its own g.
  */
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
-import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { Workspace } from "epanet-js/slim";
-import { EpanetEngine } from "epanet-js/engines/v2.2";
+import type { Workspace } from "epanet-js/slim";
 import { FlowUnits, HeadLossType, LinkProperty, LinkType, NodeProperty, NodeType, Option, Project } from "epanet-js";
-import { calculate } from "@/lib/hydraulics/calculate";
 import { findPipeSize, type PipeMaterial } from "@/lib/hydraulics/pipes/catalogue";
 import { sumFittingsK } from "@/lib/hydraulics/losses/fittings";
-import { parseSchematic, type Schematic } from "@/lib/schematic";
+import type { Schematic } from "@/lib/schematic";
+import { sized } from "./helpers/sized";
+import { G_EPANET, loadEpanet, NU_REF_EPANET, swameeJain, TCV_REF_DIAMETER_MM } from "./helpers/epanet";
 
-const G_EPANET = 32.2 * 0.3048; // m/s², EPANET's g in its D-W resistance
-const NU_REF_EPANET = 1.1e-5 * 0.3048 ** 2; // m²/s, EPANET's VISCOS for SpViscos = 1
-const TCV_REF_DIAMETER_MM = 25;
 
 let workspace: Workspace;
 beforeAll(async () => {
-  const require = createRequire(path.resolve("package.json"));
-  const wasm = path.join(path.dirname(require.resolve("epanet-js/engines/v2.2")), "EpanetEngine.wasm");
-  workspace = new Workspace();
-  // The engine's own file-URL fetch fails under Node; hand it the bytes (setup-notes.md).
-  await workspace.loadModuleVersion(() => EpanetEngine({ wasmBinary: readFileSync(wasm) }) as never);
+  workspace = await loadEpanet();
 });
-
-/** Swamee & Jain (1976), as in EPANET 2.2 frictionFactor for Re ≥ 4000. */
-const swameeJain = (re: number, relRough: number) => 0.25 / Math.log10(relRough / 3.7 + 5.74 / re ** 0.9) ** 2;
 
 type Element =
   | { kind: "pipe"; id: string; from: string; to: string }
@@ -109,14 +96,6 @@ function runEpanet(doc: Schematic, viscosityM2s: number, elements: Element[], st
   }
   p.close();
   return out;
-}
-
-function sized(doc: unknown) {
-  const parsed = parseSchematic(doc);
-  if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
-  const res = calculate(parsed.doc);
-  if (!res.ok) throw new Error(JSON.stringify(res.issues));
-  return { doc: parsed.doc, results: res.results };
 }
 
 const fit = (f: Record<string, number> = {}) => f;
