@@ -10,7 +10,7 @@ import type { Results } from "@/lib/schematic/results";
 import type { Schematic } from "@/lib/schematic/schema";
 import { Findings } from "./findings/finding";
 import { plantFindings } from "./findings/plant";
-import { topologyFindings } from "./findings/topology";
+import { topologyFindings, unheatedLoads } from "./findings/topology";
 import { runScenarios } from "./scenarios/run";
 import { scenarioList } from "./scenarios/list";
 import { simulate, type Simulation } from "./scenarios/simulate";
@@ -88,6 +88,7 @@ export function calculateSchematic(doc: Schematic): Results {
   const ctx = createContext(doc, findings);
   topologyFindings(doc, ctx.model, findings);
   plantFindings(doc, ctx.model, findings);
+  const unheated = unheatedLoads(ctx.model, findings);
   const hydraulic = ctx.fluid !== null && ctx.deltaTK !== null;
   const heating = hydraulic ? runMode(ctx, "heating") : null;
   const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
@@ -116,7 +117,7 @@ export function calculateSchematic(doc: Schematic): Results {
     bypass,
     expansionVessel: vesselResult(ctx, volumeL),
     volume: volumeResult(ctx, volumeL),
-    emitters: emitterResults(ctx),
+    emitters: emitterResults(ctx, unheated),
     hotWater: hotWaterResult(ctx),
     scenarios: run?.results ?? [],
   };

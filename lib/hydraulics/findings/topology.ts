@@ -6,7 +6,7 @@
 import { partRegistry, portsOf } from "@/lib/schematic/parts";
 import { pumpCurveIssues } from "@/lib/hydraulics/pumps/curve";
 import type { Schematic } from "@/lib/schematic/schema";
-import type { NetworkModel } from "@/lib/hydraulics/network/model";
+import { components, type NetworkModel } from "@/lib/hydraulics/network/model";
 import type { Findings } from "./finding";
 
 export function topologyFindings(doc: Schematic, model: NetworkModel, f: Findings): void {
@@ -45,4 +45,34 @@ export function topologyFindings(doc: Schematic, model: NetworkModel, f: Finding
   if (of("safety-valve").length === 0 && doc.parts.length > 0) {
     f.warning("system.no-safety-valve", "no safety valve: a sealed system needs one at the heat source (EN 12828)");
   }
+}
+
+/**
+ * Loads in a piece of the drawing that no heat source reaches (a pumped loop
+ * joined to nothing that heats it): hydraulically sized as drawn, but they give
+ * no heat. Physical connectivity, valves as drawn or not: a shut valve does not
+ * make a circuit unheated, a missing pipe does. One error per such piece.
+ */
+export function unheatedLoads(model: NetworkModel, f: Findings): Set<string> {
+  const out = new Set<string>();
+  if (!model.links.some((l) => l.role === "heat-source")) return out; // system.no-heat-source says it once
+  const comp = components(model.nodeCount, model.links);
+  const heated = new Set(model.links.filter((l) => l.role === "heat-source").map((l) => comp[l.from]!));
+  const pieces = new Map<number, { loads: string[]; pumps: string[] }>();
+  for (const l of model.links) {
+    if ((l.role !== "load" && l.role !== "pump") || heated.has(comp[l.from]!)) continue;
+    const piece = pieces.get(comp[l.from]!) ?? { loads: [], pumps: [] };
+    pieces.set(comp[l.from]!, piece);
+    (l.role === "load" ? piece.loads : piece.pumps).push(l.id);
+  }
+  for (const { loads, pumps } of pieces.values()) {
+    if (loads.length === 0) continue;
+    f.error(
+      "circuit.no-heat-source",
+      `${loads.join(", ")}: no pipe path joins ${loads.length > 1 ? "them" : "it"} to a heat pump or boiler, so ${loads.length > 1 ? "they give" : "it gives"} no heat (output 0)`,
+      [...loads, ...pumps],
+    );
+    for (const id of loads) out.add(id);
+  }
+  return out;
 }

@@ -66,6 +66,12 @@ export class LinkTable {
   readonly len: Float64Array;
   readonly sumK: Float64Array;
   readonly opening: Float64Array;
+  /**
+   * Head a pump link adds at its design duty, kPa, in the direction from → to
+   * (negative: to → from); the solver's law is h(q) − gain. Design only
+   * (sizing/design.ts); the own law (evaluateOwn) never includes it.
+   */
+  readonly gain: Float64Array;
   private readonly dir: Int8Array;
   private readonly switches: Uint8Array;
   private readonly lastA: Float64Array;
@@ -96,6 +102,7 @@ export class LinkTable {
     this.len = new Float64Array(count);
     this.sumK = new Float64Array(count);
     this.opening = new Float64Array(count);
+    this.gain = new Float64Array(count);
     this.dir = new Int8Array(count);
     this.switches = new Uint8Array(count);
     this.lastA = new Float64Array(count).fill(-1);
@@ -145,6 +152,7 @@ export class LinkTable {
 
   evaluate(k: number, q: number, out: Float64Array): void {
     this.evaluateAs(this.law[k]!, k, q, out);
+    out[0] = out[0]! - this.gain[k]!;
   }
   evaluateOwn(k: number, q: number, out: Float64Array): void {
     this.evaluateAs(this.own[k]!, k, q, out);

@@ -41,7 +41,7 @@ export interface CircuitAnalysis {
 
 const SIDE_EXCLUDED = new Set(["load", "header-primary", "header-top", "header-bottom", "bypass"]);
 
-function isPumpLink(ctx: EngineContext, l: ModelLink): boolean {
+export function isPumpLink(ctx: EngineContext, l: ModelLink): boolean {
   if (l.role === "pump") return true;
   if (l.role !== "heat-source") return false;
   return (ctx.doc.parts[l.index]!.props as { pumpCurve: unknown }).pumpCurve != null;
@@ -100,16 +100,19 @@ export function traceCircuits(ctx: EngineContext, sol: DesignSolution, watch: Re
     return ids;
   };
   const circuits = sol.served.map((load) => circuitOf(ctx, sol, load, sideOf, rootOfSide, pf, pr, walk));
-  const unpumped = circuits.filter((c) => c.rootLink === null).map((c) => c.load);
-  if (unpumped.length > 0) {
-    ctx.findings.warning(
-      "circuit.no-pump",
-      `no pump drives the circuit of ${unpumped.join(", ")} in ${sol.mode} mode, so its pressure drop is not computed`,
-      unpumped,
-    );
-  }
   markIndex(ctx, circuits);
   return { circuits, rootOfSide, pumpsOfSide, sideOf };
+}
+
+/** Head each side's root pump must give: its index circuit's pressure drop (0 when none is known). */
+export function requiredHeads(ca: CircuitAnalysis): Map<number, number> {
+  const out = new Map<number, number>();
+  for (const root of ca.rootOfSide.values()) out.set(root, 0);
+  for (const c of ca.circuits) {
+    if (c.rootLink === null || c.pressureDropKpa === null) continue;
+    out.set(c.rootLink, Math.max(out.get(c.rootLink) ?? 0, c.pressureDropKpa));
+  }
+  return out;
 }
 
 function circuitOf(

@@ -34,6 +34,16 @@ export interface EngineContext {
 }
 
 function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)[] {
+  // A zero length is computed (two ports joined directly: fittings only, no
+  // friction) but is usually a length not yet typed in: a warning, said once.
+  const zero = doc.pipes.filter((p) => p.lengthM === 0).map((p) => p.id);
+  if (zero.length > 0) {
+    findings.warning(
+      "input.pipe-length",
+      `${zero.length === 1 ? `pipe ${zero[0]}: length` : `pipes ${zero.slice(0, 5).join(", ")}${zero.length > 5 ? ` and ${zero.length - 5} more` : ""}: lengths`} 0 m — treated as a direct joint (fittings only, no pipe friction); type the length if it has one`,
+      zero,
+    );
+  }
   return doc.pipes.map((pipe) => {
     const row = findPipeSize(pipe.material, pipe.size);
     const dMm = pipe.innerDiameterMm ?? row?.innerDiameterMm;

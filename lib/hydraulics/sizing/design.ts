@@ -11,6 +11,7 @@ import { components } from "@/lib/hydraulics/network/model";
 import type { LinkTable } from "@/lib/hydraulics/network/behaviour";
 import { solveNetwork } from "@/lib/hydraulics/network/gga";
 import type { EngineContext } from "./context";
+import { isPumpLink, requiredHeads, traceCircuits } from "./circuits";
 import { buildLaws, isCut, type NetworkState } from "./laws";
 import { designLoads, type DesignLoad } from "./loads";
 import { baseState } from "./state";
@@ -26,6 +27,25 @@ export interface DesignSolution {
   head: Float64Array;
   converged: boolean;
   iterations: number;
+}
+
+const NO_WATCH: ReadonlySet<number> = new Set();
+
+/**
+ * Pump links (pumps, heat sources with a curve) that lie on a loop of links open
+ * in this state: only their head can move flow. A pump on no loop (the usual
+ * case: every loop through it passes a load, which design cuts) is a bridge.
+ */
+function pumpsOnLoops(ctx: EngineContext, state: NetworkState): number[] {
+  const { links, nodeCount } = ctx.model;
+  const open = links.map((l) => !isCut(ctx, l, state));
+  const out: number[] = [];
+  links.forEach((l, k) => {
+    if (!open[k] || !isPumpLink(ctx, l)) return;
+    const comp = components(nodeCount, links.filter((_, j) => j !== k && open[j]));
+    if (comp[l.from] === comp[l.to]) out.push(k);
+  });
+  return out;
 }
 
 export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): DesignSolution {
@@ -60,9 +80,31 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
     demand[load.outNode] = demand[load.outNode]! - load.flowM3h;
     q0[load.link] = load.flowM3h;
   }
-  const r = solveNetwork(ctx.prep, laws, demand, q0, { maxIterations: 40 });
+  let r = solveNetwork(ctx.prep, laws, demand, q0, { maxIterations: 40 });
   // The load links were cut (near-zero conductance): put their design flow back.
   for (const load of served) r.q[load.link] = load.flowM3h;
+  const looped = pumpsOnLoops(ctx, state);
+  if (looped.length > 0) {
+    // A passive path beside a pump (a fixed bypass, a short circuit, a check
+    // valve between flow and return) carries what the pump's head drives
+    // through it, from the pump's outlet side to its inlet side; with the pumps
+    // loss-free it would share the return flow backwards instead. So each such
+    // pump gives its required head (its index circuit's pressure drop, which
+    // depends on that flow in turn): a fixed point, reached in a few rounds.
+    for (let round = 0; round < 30; round++) {
+      const sol = { mode, state, loads, served, laws, q: r.q, head: r.head, converged: r.converged, iterations: r.iterations };
+      const heads = requiredHeads(traceCircuits(ctx, sol, NO_WATCH));
+      let change = 0;
+      for (const k of looped) {
+        const gain = (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1);
+        change = Math.max(change, Math.abs(gain - laws.gain[k]!));
+        laws.gain[k] = gain;
+      }
+      if (change < 1e-7) break;
+      r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: 40 });
+      for (const load of served) r.q[load.link] = load.flowM3h;
+    }
+  }
   if (!r.converged) {
     ctx.findings.warning(
       "design.not-converged",

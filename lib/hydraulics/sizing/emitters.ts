@@ -56,7 +56,8 @@ function ufhRow(ctx: EngineContext, part: Part & { type: "ufh-loop" }, dT: numbe
   return { id: part.id, outputAtDesignW: Number.isFinite(capacity) ? Math.min(load, capacity) : null, heatLoadW: load, ok };
 }
 
-export function emitterResults(ctx: EngineContext): Results["emitters"] {
+/** `unheated`: loads no heat source reaches (findings/topology.ts unheatedLoads): output 0, not ok. */
+export function emitterResults(ctx: EngineContext, unheated: ReadonlySet<string> = new Set()): Results["emitters"] {
   const out: Results["emitters"] = [];
   const unchecked: string[] = [];
   for (const part of ctx.doc.parts) {
@@ -91,6 +92,11 @@ export function emitterResults(ctx: EngineContext): Results["emitters"] {
     }
     out.push({ id: part.id, outputAtDesignW: output, heatLoadW: load, ok });
   }
+  for (const row of out) {
+    if (!unheated.has(row.id)) continue;
+    row.outputAtDesignW = 0;
+    row.ok = row.heatLoadW === null ? null : row.heatLoadW <= 0;
+  }
   if (unchecked.length > 0) {
     ctx.findings.info(
       "emitter.ufh-not-checked",
@@ -107,15 +113,27 @@ export function hotWaterResult(ctx: EngineContext): Results["hotWater"] {
   const source = ratedSourceW(ctx) / 1000;
   const coil = source > 0 ? Math.min(cyl.props.coilOutputKw, source) : cyl.props.coilOutputKw;
   let minutes: number | null = null;
-  try {
-    minutes = cylinderReheatMinutes({
-      volumeL: cyl.props.volumeL,
-      coldWaterC: cyl.props.coldWaterC,
-      storeTemperatureC: cyl.props.storeTemperatureC,
-      coilOutputKw: coil,
-    });
-  } catch (e) {
-    ctx.findings.warning("hot-water.no-reheat", `${cyl.id}: reheat time not computed (${(e as Error).message})`, [cyl.id]);
+  // A heat source usually runs hotter for hot water than for heating, so the
+  // heating flow temperature says nothing here; a stated highest flow
+  // temperature does: water at that temperature cannot bring the store above it.
+  const hottestC = ctx.doc.design.maxFlowTemperatureC;
+  if (hottestC !== null && hottestC !== undefined && cyl.props.storeTemperatureC >= hottestC) {
+    ctx.findings.warning(
+      "hot-water.flow-too-cool",
+      `${cyl.id}: store set to ${cyl.props.storeTemperatureC} °C but the hottest flow (design.maxFlowTemperatureC) is ${hottestC} °C, so the coil cannot reheat it (no reheat time); raise that flow temperature or lower the store setting`,
+      [cyl.id],
+    );
+  } else {
+    try {
+      minutes = cylinderReheatMinutes({
+        volumeL: cyl.props.volumeL,
+        coldWaterC: cyl.props.coldWaterC,
+        storeTemperatureC: cyl.props.storeTemperatureC,
+        coilOutputKw: coil,
+      });
+    } catch (e) {
+      ctx.findings.warning("hot-water.no-reheat", `${cyl.id}: reheat time not computed (${(e as Error).message})`, [cyl.id]);
+    }
   }
   if (cyl.props.storeTemperatureC < 60) {
     ctx.findings.warning(

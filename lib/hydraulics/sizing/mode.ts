@@ -31,9 +31,43 @@ export function bypassBranchPoints(ctx: EngineContext): Map<number, [number, num
   return out;
 }
 
+/**
+ * A header or buffer whose secondary side draws more than the primary brings
+ * mixes secondary return water into the secondary flow, which then leaves
+ * cooler than designed: T = (Qp·T_flow + (Qs − Qp)·T_return)/Qs (mixing by
+ * flow, first-law balance). Usual design keeps Qp ≥ Qs (common practice, no
+ * single published source).
+ */
+function headerFlowCheck(ctx: EngineContext, sol: DesignSolution): void {
+  for (const load of sol.served) {
+    if (!load.header) continue;
+    const secondary = (ctx.model.linksOfPart.get(load.id) ?? []).find((k) => ctx.model.links[k]!.role === "header-secondary");
+    if (secondary === undefined) continue;
+    const qs = Math.abs(sol.q[secondary]!);
+    const qp = load.flowM3h;
+    if (!(qs > qp * 1.001) || !Number.isFinite(qs)) continue;
+    const mixedC = (qp * ctx.flowC + (qs - qp) * ctx.returnC) / qs;
+    const sources = ctx.model.links.filter((l) => l.role === "heat-source").map((l) => l.id);
+    ctx.findings.warning(
+      "header.primary-low",
+      `${load.id}: the secondary side draws ${qs.toFixed(3)} m³/h but the primary brings ${qp.toFixed(3)} m³/h in ${sol.mode} mode, so secondary return mixes into the flow: about ${mixedC.toFixed(1)} °C instead of ${ctx.flowC} °C (raise the primary flow or lower the secondary)`,
+      [load.id, ...sources],
+    );
+  }
+}
+
 export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun {
   const sol = solveDesign(ctx, mode);
+  headerFlowCheck(ctx, sol);
   const ca = traceCircuits(ctx, sol, new Set([...bypassBranchPoints(ctx).values()].flat()));
+  const unpumped = ca.circuits.filter((c) => c.rootLink === null).map((c) => c.load);
+  if (unpumped.length > 0) {
+    ctx.findings.warning(
+      "circuit.no-pump",
+      `no pump drives the circuit of ${unpumped.join(", ")} in ${mode} mode, so its pressure drop is not computed`,
+      unpumped,
+    );
+  }
   const pumps = pumpDuties(ctx, sol, ca);
   let sourceFlow: number | null = null;
   ctx.model.links.forEach((l, k) => {

@@ -116,3 +116,56 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
     expect(r1.outputW!).toBeCloseTo(mdot * water.specificHeatJkgK * (45 - r1.returnTemperatureC!), 3);
   });
 });
+
+describe("design sizing with a fixed bypass beside the radiator (hand-checked)", () => {
+  // hp.flow ─p1─ ta ─p2─ rad ─p3─ tb ─p4─ hp.return, and ta ─x1─ bv (Kv 0.5) ─x2─ tb.
+  // At design the radiator takes its design flow; the bypass takes what the
+  // radiator branch's Δp between the tees drives through it, from ta to tb; the
+  // heat source (its own pump) carries both and must give the index circuit's Δp.
+  const part = (id: string, type: string, props: Record<string, unknown> = {}) => ({ id, type, props });
+  const cu = (id: string, from: string, to: string, lengthM: number) => ({ id, from, to, material: "copper", size: "22", lengthM });
+  const doc = {
+    ...smallSystem(),
+    design: { ...smallSystem().design, flowTemperatureC: 45, returnTemperatureC: 35 },
+    parts: [
+      part("hp", "heat-pump", { ratedOutputKw: 5, minFlowM3h: 0, kv: 4, waterVolumeL: 2, pumpCurve: [[0, 30], [1, 22], [2, 8], [3, 0]] }),
+      part("ta", "tee"),
+      part("tb", "tee"),
+      part("rad", "radiator", { outputAtDt50W: 8000, heatLoadW: 2000, valveKv: 1.5 }),
+      part("bv", "balancing-valve", { kv: 0.5 }),
+    ],
+    pipes: [cu("p1", "hp.flow", "ta.a", 2), cu("p2", "ta.b", "rad.flow", 5), cu("p3", "rad.return", "tb.a", 5), cu("p4", "tb.b", "hp.return", 2), cu("x1", "ta.c", "bv.a", 0.5), cu("x2", "bv.b", "tb.c", 0.5)],
+  };
+  const w40 = fluidProperties({ kind: "water" }, 40);
+  const kv40 = (q: number, kv: number) => kvPressureDropPa(q, kv, w40.densityKgM3) / 1000;
+  const cu22 = (q: number, lengthM: number) => {
+    const row = findPipeSize("copper", "22")!;
+    return pipePressureDrop({ flowM3s: q / 3600, innerDiameterM: row.innerDiameterMm / 1000, lengthM, roughnessM: row.roughnessMm / 1000, densityKgM3: w40.densityKgM3, kinematicViscosityM2s: w40.kinematicViscosityM2s, sumK: 0 }).dpPa / 1000;
+  };
+  const qRad = (2000 / (w40.densityKgM3 * w40.specificHeatJkgK * 10)) * 3600;
+  const dpTees = cu22(qRad, 10) + kv40(qRad, 1.5);
+  // bypass flow: the q with cu22(q, 1 m) + Kv-drop(q, 0.5) = dpTees, by bisection
+  let lo = 0, hi = 2;
+  for (let i = 0; i < 100; i++) {
+    const mid = (lo + hi) / 2;
+    if (cu22(mid, 1) + kv40(mid, 0.5) < dpTees) lo = mid;
+    else hi = mid;
+  }
+  const qBypass = lo;
+  const results = run(doc);
+  const heating = results.modes.find((m) => m.mode === "heating")!;
+  const pipe = (id: string) => heating.pipes.find((p) => p.id === id)!;
+
+  it("the bypass carries flow from the flow tee to the return tee, as the Δp across the radiator branch drives", () => {
+    expect(qBypass).toBeGreaterThan(0.05); // a material flow: a backwards or zero answer cannot pass
+    expect(pipe("x1").flowM3h).toBeCloseTo(qBypass, 4);
+    expect(pipe("p2").flowM3h).toBeCloseTo(qRad, 6);
+  });
+
+  it("the heat source carries radiator + bypass, and its required head is the index circuit with that flow", () => {
+    const total = qRad + qBypass;
+    expect(heating.heatSourceFlowM3h!).toBeCloseTo(total, 4);
+    const required = kv40(total, 4) + cu22(total, 4) + dpTees;
+    expect(heating.pump!.requiredHeadKpa!).toBeCloseTo(required, 3);
+  });
+});
