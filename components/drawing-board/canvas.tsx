@@ -19,6 +19,7 @@ import { CanvasHint } from "./canvas-hint";
 import { HelpOverlay } from "./help-overlay";
 import { useBoard, useBoardStore } from "./store";
 import { useBoardKeys } from "./use-board-keys";
+import { FarView, LOD_ZOOM, useFarViewFromZoom } from "./level-of-detail";
 import { usePartNodes, usePipeEdges } from "./use-canvas-model";
 
 // module scope: a new object per render would make xyflow remount every node
@@ -47,8 +48,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   // fit a drawing on open; an empty board starts at 100 % so dropped parts keep their size
   const [fitOnOpen] = useState(() => derived.length > 0);
   const flow = useReactFlow();
-  // Large boards (software-rendered in CI): no dot grid, and the minimap's parts are hidden
-  // while the view moves — repainting 1,000 minimap rects each frame cost more than the canvas.
+  // Large boards (software-rendered in CI): no dot grid, and the minimap is hidden while the
+  // view moves — its repaint each frame made the compositor re-layer the whole canvas.
   const large = useBoard((s) => s.doc.parts.length > LARGE_BOARD);
   const [moving, setMoving] = useState(false);
   // programmatic moves start and end within a frame: settle before showing the minimap again
@@ -61,8 +62,10 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
     clearTimeout(settle.current);
     settle.current = setTimeout(() => setMoving(false), 150);
   }, []);
-  // small print goes first when zoomed out: port names below 70 %, pipe labels below 45 %, short-pipe labels until 140 %
-  const band = useStore((s) => (s.transform[2] < 0.45 ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
+  // small print goes first when zoomed out: port names below 70 %, short-pipe labels until 140 %;
+  // below LOD_ZOOM parts and pipes draw plain (level-of-detail.ts)
+  const band = useStore((s) => (s.transform[2] < LOD_ZOOM ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
+  const far = useFarViewFromZoom();
 
   // Selection has one owner, the store: xyflow's select changes go there and come back as
   // node/edge flags. (Applying them locally as well made the two ping-pong.)
@@ -134,6 +137,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
 
   return (
     <div className={`lw-canvas relative h-full w-full ${band} ${large && moving ? "lw-moving" : ""}`} data-testid="board-canvas">
+      <FarView.Provider value={far}>
       <ReactFlow<PartNode, PipeEdge>
         nodes={nodes}
         edges={edges}
@@ -152,7 +156,9 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         nodeOrigin={[0.5, 0.5]}
         snapToGrid
         snapGrid={[GRID, GRID]}
-        onlyRenderVisibleElements
+        // Culling saves work close up; far out every part is cheap, and mounting the parts that
+        // scroll into view on each frame of a pan would cost more than drawing them all.
+        onlyRenderVisibleElements={!far}
         fitView={fitOnOpen}
         fitViewOptions={{ padding: 0.1, maxZoom: 1.5 }}
         defaultViewport={{ x: 40, y: 40, zoom: 1 }}
@@ -169,6 +175,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />
         <Controls showInteractive={false} />
       </ReactFlow>
+      </FarView.Provider>
       <CanvasHint />
       {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
     </div>

@@ -10,7 +10,9 @@
  *   (3rd CGPM 1901; SI Brochure 9th ed., 2019). Without a density we fall back to
  *   1000 kg/m³, the conventional water column (mathjs `cmH2O` = 98.0665 Pa).
  */
-import { unit, divide, multiply, type Unit } from "mathjs";
+// Only the unit machinery of mathjs (its factory API), not the whole library: this
+// module runs in the browser too, on every board and report.
+import { create, divideDependencies, multiplyDependencies, unitDependencies, type Unit } from "mathjs";
 import { z } from "zod";
 import { STANDARD_GRAVITY_MPS2 } from "@/lib/hydraulics/units";
 
@@ -30,6 +32,8 @@ export const defaultUnitPrefs: UnitPrefs = { flow: "m3/h", pressure: "kPa" };
 export const unitLabels: Record<FlowUnit | PressureUnit, string> = {
   "m3/h": "m³/h", "l/s": "l/s", "l/min": "l/min", kPa: "kPa", bar: "bar", m: "m head",
 };
+
+const { unit, divide, multiply } = create({ unitDependencies: unitDependencies!, multiplyDependencies: multiplyDependencies!, divideDependencies: divideDependencies! });
 
 const mathjsFlow: Record<FlowUnit, string> = { "m3/h": "m^3/h", "l/s": "L/s", "l/min": "L/min" };
 const CONVENTIONAL_WATER_DENSITY = 1000; // kg/m³

@@ -1,10 +1,39 @@
 import { expect, test, type Page } from "@playwright/test";
-import { signInAs } from "./helpers/board";
+import { MILLBROOK, signInAs, sql } from "./helpers/board";
 
 // Speed of the canvas with 1,000 parts and 1,200 pipes (generated in the page): median and
 // 95th-percentile frame time (requestAnimationFrame deltas) during a pan and a zoom driven by
-// real pointer input, and the time to open the Millbrook demo hall until its parts are on screen.
+// real pointer input, and the time a designer waits to open the Millbrook demo hall's real
+// board page until its parts are on screen and the canvas answers input.
 // Targets (16 ms median, 1.5 s open) are printed, not asserted: CI machines vary.
+// Chromium runs with its frame-rate cap off (no vsync): at 60 Hz a rAF delta can never be
+// below 16.7 ms, so capped deltas would only say "at least one frame"; uncapped, a delta is
+// what the frame really cost (script, style, layout, paint).
+test.use({
+  launchOptions: {
+    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+    args: ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run",
+      "--disable-gpu-vsync", "--disable-frame-rate-limit"],
+  },
+});
+
+/**
+ * Open a page and return the ms from its navigation start until the part `partId` is drawn on
+ * screen and hydrated (React has attached its handlers, so the canvas answers input). Polled
+ * on every animation frame in the page, so the number carries no test-runner overhead.
+ */
+async function openUntilInteractive(page: Page, url: string, partId: string): Promise<number> {
+  await page.goto(url, { waitUntil: "commit" });
+  const ms = await page.waitForFunction((id) => {
+    const el = document.querySelector(`.react-flow__node[data-id="${id}"]`);
+    if (!el) return false;
+    const r = el.getBoundingClientRect();
+    const onScreen = r.width > 0 && r.height > 0 && r.right > 0 && r.bottom > 0 && r.left < innerWidth && r.top < innerHeight;
+    const hydrated = Object.keys(el).some((k) => k.startsWith("__reactFiber"));
+    return onScreen && hydrated ? performance.now() : false;
+  }, partId, { polling: "raf", timeout: 60_000 });
+  return (await ms.jsonValue()) as number;
+}
 
 /** Record requestAnimationFrame deltas while `drive` runs real pointer input. */
 async function frameTimes(page: Page, drive: () => Promise<void>) {
@@ -79,12 +108,18 @@ const stats = (xs: number[]) => {
 test("1,000 parts / 1,200 pipes: frame time of pan and zoom, and demo hall open time", async ({ page }) => {
   test.setTimeout(180_000);
   await page.setViewportSize({ width: 1440, height: 900 });
-  await signInAs(page, "owner");
+  await signInAs(page, "designer");
 
-  const t0 = Date.now();
-  await page.goto("/board-preview?doc=millbrook-hall");
-  await expect(page.locator('.react-flow__node[data-id="hp"]')).toBeVisible({ timeout: 60_000 });
-  const openMs = Date.now() - t0;
+  // The Millbrook "Plant room" schematic as a designer opens it: one warm-up visit (first
+  // compile of the route, cold caches), then three measured visits.
+  const [hall] = await sql<{ id: string }>("select id from schematics where project_id = $1 and name = 'Plant room'", [MILLBROOK]);
+  const hallUrl = `/projects/${MILLBROOK}/schematics/${hall!.id}`;
+  await openUntilInteractive(page, hallUrl, "hp");
+  const opens: number[] = [];
+  for (let i = 0; i < 3; i++) opens.push(await openUntilInteractive(page, hallUrl, "hp"));
+  // interactive means it: a click on the heat pump selects it
+  await page.locator('.react-flow__node[data-id="hp"]').click();
+  await expect(page.locator('.react-flow__node[data-id="hp"] .lw-part-selected')).toBeVisible();
 
   await page.goto("/board-preview/perf");
   await expect(page.locator(".react-flow__node").first()).toBeVisible({ timeout: 60_000 });
@@ -124,7 +159,8 @@ test("1,000 parts / 1,200 pipes: frame time of pan and zoom, and demo hall open 
       line("zoom around 100 %", strictZoom100),
       line("pan fitted", strictPanAll),
       line("zoom fitted", strictZoomAll),
-      `[board-perf] Millbrook demo hall open → parts on screen: ${openMs} ms (target < 1500 ms)`,
+      `[board-perf] Millbrook demo hall board page, navigation → parts on screen and interactive (after a warm-up visit): ` +
+        `median ${stats(opens).median.toFixed(0)} ms of ${opens.map((o) => o.toFixed(0)).join(", ")} (target < 1500 ms)`,
     ].join("\n"),
   );
   await page.screenshot({ path: "test-results/screens/board-perf.png" });

@@ -3,12 +3,14 @@
  * A pipe: an orthogonal run between two ports, red for flow and blue for
  * return (flow-side.ts), labelled "size · length". After Size it, board-2's
  * overlay (data.overlay) recolours it by velocity band and adds the numbers.
+ * Zoomed far out (level-of-detail.ts) it is the coloured line alone.
  */
 import { memo } from "react";
 import { BaseEdge, getSmoothStepPath, type Edge, type EdgeProps } from "@xyflow/react";
 import type { Pipe } from "@/lib/schematic";
 import type { PipeLabel } from "../overlay/pipe-labels";
 import type { PipeSide } from "./flow-side";
+import { useFarView } from "../level-of-detail";
 
 export type PipeEdgeData = { pipe: Pipe; side: PipeSide; overlay: PipeLabel | null };
 export type PipeEdge = Edge<PipeEdgeData, "pipe">;
@@ -20,11 +22,19 @@ export const pipeCaption = (pipe: Pipe) => `${pipe.size} · ${metres(pipe.length
 
 export const PipeEdgeView = memo(function PipeEdgeView(props: EdgeProps<PipeEdge>) {
   const { id, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, data, selected } = props;
+  const far = useFarView();
   const [path, lx, ly] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 6, offset: 16 });
   if (!data) return null;
   const { pipe, side, overlay } = data;
   const colour = overlay ? overlay.color : sideColour[side];
   const width = (overlay?.onIndexCircuit ? 3.5 : 2) + (selected ? 1.5 : 0);
+  if (far) {
+    return (
+      <g data-side={side} className="lw-pipe">
+        <BaseEdge id={id} path={path} style={{ stroke: selected ? "#dc9a6a" : colour, strokeWidth: width + (selected ? 2 : 0) }} interactionWidth={0} />
+      </g>
+    );
+  }
   // a label wider than its pipe would sit on the ports: show it when zoomed in or selected
   const short = Math.abs(targetX - sourceX) + Math.abs(targetY - sourceY) < 90;
   const lines = overlay ? [pipeCaption(pipe), overlay.flow, `${overlay.velocity} · ${overlay.pressureDrop}`] : [pipeCaption(pipe)];

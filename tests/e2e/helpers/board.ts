@@ -2,6 +2,7 @@ import { expect, type Page } from "@playwright/test";
 
 // Shared steps for the drawing-board browser tests.
 export const ORCHARD_END = "6a0f3c1e-0000-4000-8000-000000000102";
+export const MILLBROOK = "6a0f3c1e-0000-4000-8000-000000000101";
 export const shots = "test-results/screens";
 
 export async function signInAs(page: Page, role: "designer" | "owner" | "reviewer" | "trainee") {

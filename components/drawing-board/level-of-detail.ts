@@ -1,0 +1,20 @@
+"use client";
+/**
+ * Level of detail. Below LOD_ZOOM a symbol is a few pixels wide and a pipe label
+ * unreadable, so parts draw as plain boxes and pipes without labels: an overview
+ * of 1,000 parts then pans and zooms at frame rate. Symbols stay whole from 50 %.
+ */
+import { createContext, useContext } from "react";
+import { useStore } from "@xyflow/react";
+
+export const LOD_ZOOM = 0.45;
+
+/**
+ * True while the view is zoomed out past LOD_ZOOM. The canvas reads the zoom once (a
+ * boolean selector: it re-renders only when the threshold is crossed) and hands the answer
+ * down by context, so 2,200 parts and pipes add no store listeners of their own per frame.
+ */
+export const FarView = createContext(false);
+
+export const useFarViewFromZoom = () => useStore((s) => s.transform[2] < LOD_ZOOM);
+export const useFarView = () => useContext(FarView);
