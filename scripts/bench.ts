@@ -161,7 +161,11 @@ async function benchApi() {
   // (1) the demo hall as the issue states it: the same document again and again, as a
   // board sized twice or an issued revision opened by a site team — answered from the
   // results cache after the first request (lib/persistence/size.ts).
-  const same = await autocannon({ url, method: "POST", headers, body, connections: 10, duration });
+  // Three rounds, the median round reported (by requests/s): on a shared 2-core machine one
+  // round can land on a noisy neighbour's burst; every round is printed.
+  const rounds: CannonResult[] = [];
+  for (let i = 0; i < 3; i++) rounds.push(await autocannon({ url, method: "POST", headers, body, connections: 10, duration }));
+  const same = [...rounds].sort((a, b) => a.requests.average - b.requests.average)[1]!;
   // (2) no cache: every request a different document (the first pipe 1 mm longer each
   // time), so every answer is computed by the engine.
   const doc = JSON.parse(body) as { pipes: { lengthM: number }[] };
@@ -176,7 +180,7 @@ async function benchApi() {
       return { ...req, body: JSON.stringify(doc) };
     } }],
   });
-  console.log(`  10 connections, ${duration} s each, after a 3 s warm-up\n`);
+  console.log(`  10 connections, ${duration} s per round, after a 3 s warm-up; cached: median of 3 rounds\n`);
   console.log(`  ${"".padEnd(34)} ${pad("req/s", 7)} ${pad("p99", 8)} ${pad("mean", 9)} ${pad("non-2xx", 8)}  target ≥ 200 req/s, p99 < 50 ms`);
   const row = (label: string, r: CannonResult, judged: boolean) => {
     const ok = r.requests.average >= 200 && r.latency.p99 < 50 && r.non2xx === 0 && r.errors === 0;
@@ -185,6 +189,7 @@ async function benchApi() {
     );
     return ok;
   };
+  rounds.forEach((r, i) => row(`  round ${i + 1}`, r, false));
   const ok = row("demo hall, same document (cached)", same, true);
   row("a new document every request", distinct, false);
   return ok ? ("pass" as const) : ("fail" as const);
