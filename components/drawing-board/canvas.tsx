@@ -21,6 +21,7 @@ import { useBoard, useBoardStore } from "./store";
 import { useBoardKeys } from "./use-board-keys";
 import { FarView, LOD_ZOOM, useFarViewFromZoom } from "./level-of-detail";
 import { usePartNodes, usePipeEdges } from "./use-canvas-model";
+import { boxOf, OverviewParts } from "./overview-parts";
 
 // module scope: a new object per render would make xyflow remount every node
 const nodeTypes = { part: PartNodeView };
@@ -134,6 +135,18 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
     [helpOpen, setHelpOpen, store],
   );
   useBoardKeys(onView);
+  // Far out the parts are a picture (overview-parts.tsx): a click on one selects it.
+  const onPaneClick = useCallback(
+    (e: React.MouseEvent) => {
+      const p = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+      const hit = nodes.findLast((n) => {
+        const b = boxOf(n);
+        return p.x >= b.x && p.x <= b.x + b.w && p.y >= b.y && p.y <= b.y + b.h;
+      });
+      if (hit) store.getState().setSelection([hit.id], []);
+    },
+    [flow, nodes, store],
+  );
 
   return (
     <div className={`lw-canvas relative h-full w-full ${band} ${large && moving ? "lw-moving" : ""}`} data-testid="board-canvas">
@@ -152,6 +165,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         onMoveStart={large ? onMoveStart : undefined}
         onMoveEnd={large ? onMoveEnd : undefined}
         onDrop={onDrop}
+        onPaneClick={far ? onPaneClick : undefined}
         connectionMode={ConnectionMode.Loose}
         nodeOrigin={[0.5, 0.5]}
         snapToGrid
@@ -174,6 +188,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         {!large && <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#d9d1c4" />}
         <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />
         <Controls showInteractive={false} />
+        {far && <OverviewParts nodes={nodes} />}
       </ReactFlow>
       </FarView.Provider>
       <CanvasHint />

@@ -1,13 +1,15 @@
 "use client";
 /**
  * Level of detail. Below LOD_ZOOM a symbol is a few pixels wide and a pipe label
- * unreadable, so parts draw as plain boxes and pipes without labels: an overview
- * of 1,000 parts then pans and zooms at frame rate. Symbols stay whole from 50 %.
+ * unreadable, so parts are drawn as plain boxes on one canvas (overview-parts.tsx)
+ * and pipes without labels: an overview of 1,000 parts then pans and zooms at
+ * frame rate. Above it symbols are whole — the demo hall fitted to a laptop
+ * screen (~30 %) still shows them; they are meant to be read from 50 %.
  */
 import { createContext, useContext } from "react";
 import { useStore } from "@xyflow/react";
 
-export const LOD_ZOOM = 0.45;
+export const LOD_ZOOM = 0.25;
 
 /**
  * True while the view is zoomed out past LOD_ZOOM. The canvas reads the zoom once (a
