@@ -170,5 +170,18 @@ test("1,000 parts / 1,200 pipes: frame time of pan and zoom, and demo hall open 
     ].join("\n"),
   );
   await page.screenshot({ path: "test-results/screens/board-perf.png" });
+
+  // far out a part is a box on the overview canvas: a click on it still selects it
+  await page.evaluate(() => window.__lwBoard!.view!.fit());
+  await page.waitForTimeout(300);
+  const target = await page.evaluate(() => {
+    const b = window.__lwBoard!;
+    const part = b.getDoc().parts[500]!;
+    const v = b.view!.get();
+    const pane = document.querySelector(".react-flow__pane")!.getBoundingClientRect();
+    return { id: part.id, x: pane.left + v.x + part.x * v.zoom, y: pane.top + v.y + part.y * v.zoom };
+  });
+  await page.mouse.click(target.x, target.y);
+  await expect.poll(() => page.evaluate(() => window.__lwBoard!.store.getState().selection.parts)).toEqual([target.id]);
   expect(onScreen).toBeGreaterThan(0);
 });
