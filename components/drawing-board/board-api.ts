@@ -71,7 +71,7 @@ export function useBoardApi(): BoardApi {
       if (at) void flow.setCenter(at.x, at.y, { zoom: at.zoom, duration: 300 });
     });
     api.view = {
-      fit: () => void flow.fitView({ padding: 0.1 }),
+      fit: () => void flow.fitView({ padding: 0.1, includeHiddenNodes: true }),
       zoomTo: (zoom) => void flow.zoomTo(zoom),
       panBy: (dx, dy) => {
         const v = flow.getViewport();

@@ -6,7 +6,7 @@
  */
 import "@xyflow/react/dist/style.css";
 import "./board.css";
-import { useCallback, useEffect, useRef, useState, type DragEvent } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } from "react";
 import {
   applyNodeChanges, Background, BackgroundVariant, ConnectionMode, Controls, MiniMap, ReactFlow, useReactFlow, useStore,
   type Connection, type Edge, type IsValidConnection, type OnEdgesChange, type OnNodesChange,
@@ -21,7 +21,7 @@ import { useBoard, useBoardStore } from "./store";
 import { useBoardKeys } from "./use-board-keys";
 import { FarView, LOD_ZOOM, useFarViewFromZoom } from "./level-of-detail";
 import { usePartNodes, usePipeEdges } from "./use-canvas-model";
-import { boxOf, OverviewParts } from "./overview-parts";
+import { boxOf, OverviewLayer } from "./overview-layer";
 
 // module scope: a new object per render would make xyflow remount every node
 const nodeTypes = { part: PartNodeView };
@@ -67,6 +67,10 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
   // below LOD_ZOOM parts and pipes draw plain (level-of-detail.ts)
   const band = useStore((s) => (s.transform[2] < LOD_ZOOM ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
   const far = useFarViewFromZoom();
+  // Far out the drawing is a picture (overview-layer.tsx): parts and pipes are hidden from
+  // xyflow, so none of their 2,200 components re-check the store on each frame of a move.
+  const shownNodes = useMemo(() => (far ? nodes.map((n) => ({ ...n, hidden: true })) : nodes), [far, nodes]);
+  const shownEdges = useMemo(() => (far ? edges.map((e) => ({ ...e, hidden: true })) : edges), [far, edges]);
 
   // Selection has one owner, the store: xyflow's select changes go there and come back as
   // node/edge flags. (Applying them locally as well made the two ping-pong.)
@@ -135,7 +139,7 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
     [helpOpen, setHelpOpen, store],
   );
   useBoardKeys(onView);
-  // Far out the parts are a picture (overview-parts.tsx): a click on one selects it.
+  // Far out the parts are a picture (overview-layer.tsx): a click on one selects it.
   const onPaneClick = useCallback(
     (e: React.MouseEvent) => {
       const p = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
@@ -152,8 +156,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
     <div className={`lw-canvas relative h-full w-full ${band} ${large && moving ? "lw-moving" : ""}`} data-testid="board-canvas">
       <FarView.Provider value={far}>
       <ReactFlow<PartNode, PipeEdge>
-        nodes={nodes}
-        edges={edges}
+        nodes={shownNodes}
+        edges={shownEdges}
         nodeTypes={nodeTypes}
         edgeTypes={edgeTypes}
         onNodesChange={onNodesChange}
@@ -186,9 +190,9 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         connectionLineStyle={{ stroke: "#b4632b", strokeWidth: 2 }}
       >
         {!large && <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#d9d1c4" />}
-        <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />
+        {!far && <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />}
         <Controls showInteractive={false} />
-        {far && <OverviewParts nodes={nodes} />}
+        {far && <OverviewLayer nodes={nodes} edges={edges} />}
       </ReactFlow>
       </FarView.Provider>
       <CanvasHint />

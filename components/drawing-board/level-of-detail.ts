@@ -1,7 +1,7 @@
 "use client";
 /**
  * Level of detail. Below LOD_ZOOM a symbol is a few pixels wide and a pipe label
- * unreadable, so parts are drawn as plain boxes on one canvas (overview-parts.tsx)
+ * unreadable, so parts are drawn as plain boxes on one canvas (overview-layer.tsx)
  * and pipes without labels: an overview of 1,000 parts then pans and zooms at
  * frame rate. Above it symbols are whole — the demo hall fitted to a laptop
  * screen (~30 %) still shows them; they are meant to be read from 50 %.

@@ -24,7 +24,7 @@ export function useBoardKeys(onView: (a: ViewAction) => void) {
       if (!target) return;
       e.preventDefault();
       if ("view" in target) {
-        if (target.view === "fit-view") void flow.fitView({ padding: 0.1, duration: 200 });
+        if (target.view === "fit-view") void flow.fitView({ padding: 0.1, duration: 200, includeHiddenNodes: true });
         else onView(target.view);
         return;
       }
