@@ -2,13 +2,17 @@ import { expect, test, type Page } from "@playwright/test";
 import { MILLBROOK, signInAs, sql } from "./helpers/board";
 
 // Speed of the canvas with 1,000 parts and 1,200 pipes (generated in the page): median and
-// 95th-percentile frame time (requestAnimationFrame deltas) during a pan and a zoom driven by
-// real pointer input, and the time a designer waits to open the Millbrook demo hall's real
-// board page until its parts are on screen and the canvas answers input.
-// Targets (16 ms median, 1.5 s open) are printed, not asserted: CI machines vary.
+// 95th-percentile frame time (requestAnimationFrame deltas) during a pan and a zoom, at a
+// working zoom (100 %) and fitted (everything on screen), and the time a designer waits to
+// open the Millbrook demo hall's real board page until its parts are on screen and the canvas
+// answers input. Targets (16 ms median, 1.5 s open) are printed, not asserted: CI machines vary.
 // Chromium runs with its frame-rate cap off (no vsync): at 60 Hz a rAF delta can never be
 // below 16.7 ms, so capped deltas would only say "at least one frame"; uncapped, a delta is
-// what the frame really cost (script, style, layout, paint).
+// what the frame really cost (script, style, layout, paint). Two ways of moving:
+// - frame cost: the view changes on every animation frame, so each delta is one frame's work —
+//   the number held against the 16 ms target;
+// - pointer-driven: real mouse drags and wheel steps; frames then come as fast as the input
+//   events do (~60 a second here), so the median shows the input pace, and p95 shows hitches.
 test.use({
   launchOptions: {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
@@ -138,7 +142,11 @@ test("1,000 parts / 1,200 pipes: frame time of pan and zoom, and demo hall open 
   await page.waitForTimeout(500);
   const pan100 = stats(await frameTimes(page, () => pan(page, box)));
   const zoom100 = stats(await frameTimes(page, () => zoom(page, box)));
+  // the strict runs start from the same working view as the pointer runs did
+  const working = () => page.evaluate(() => window.__lwBoard!.view!.set({ x: 80, y: 40, zoom: 1 }));
+  await working();
   const strictPan100 = stats(await everyFrame(page, "pan"));
+  await working();
   const strictZoom100 = stats(await everyFrame(page, "zoom"));
   await page.evaluate(() => window.__lwBoard!.view!.fit());
   await page.waitForTimeout(500);
@@ -154,12 +162,12 @@ test("1,000 parts / 1,200 pipes: frame time of pan and zoom, and demo hall open 
     `${name}: median ${s.median.toFixed(1)} ms, p95 ${s.p95.toFixed(1)} ms over ${s.frames} frames`;
   console.log(
     [
-      `[board-perf] 1,000 parts / 1,200 pipes (target median < 16 ms); pointer-driven:`,
+      `[board-perf] 1,000 parts / 1,200 pipes; pointer-driven (frames paced by the input events, ~60/s):`,
       line("pan at 100 %", pan100),
       line("zoom around 100 %", zoom100),
       line(`pan fitted (${onScreen} parts ${overview ? "drawn on the overview canvas" : "as elements"})`, panAll),
       line("zoom fitted", zoomAll),
-      `[board-perf] strict (view changed on every frame):`,
+      `[board-perf] frame cost (view changed on every frame; target median < 16 ms):`,
       line("pan at 100 %", strictPan100),
       line("zoom around 100 %", strictZoom100),
       line("pan fitted", strictPanAll),
