@@ -4,7 +4,7 @@
  * as plain boxes and pipes as coloured runs on one canvas, and the parts' and
  * pipes are hidden from xyflow (Canvas). Their 2,200 elements and components
  * cost 15–30 ms of store checks, style and paint per frame of a pan or zoom;
- * one canvas redraw a few. Redrawn from xyflow's store on every view change,
+ * here a move costs one bitmap copy a frame, and one redraw when it stops. Redrawn from xyflow's store on every view change,
  * outside React. This far out nothing is dragged; a click selects a part
  * (Canvas, onPaneClick).
  */
@@ -71,19 +71,18 @@ export function OverviewLayer({ nodes, edges }: { nodes: PartNode[]; edges: Pipe
     const canvas = ref.current;
     const ctx = canvas?.getContext("2d");
     if (!canvas || !ctx) return;
-    const draw = () => {
-      const { transform, width, height } = api.getState();
-      const [tx, ty, zoom] = transform;
-      const dpr = window.devicePixelRatio || 1;
-      const cw = Math.round(width * dpr);
-      const ch = Math.round(height * dpr);
+    const dpr = () => window.devicePixelRatio || 1;
+    const fit = () => {
+      const { width, height } = api.getState();
+      const cw = Math.round(width * dpr());
+      const ch = Math.round(height * dpr());
       if (canvas.width !== cw || canvas.height !== ch) {
         canvas.width = cw;
         canvas.height = ch;
       }
-      ctx.setTransform(1, 0, 0, 1, 0, 0);
-      ctx.clearRect(0, 0, cw, ch);
-      ctx.setTransform(dpr * zoom, 0, 0, dpr * zoom, dpr * tx, dpr * ty);
+    };
+    /** The picture itself, in flow coordinates (ctx already transformed to the view). */
+    const paint = (zoom: number) => {
       // at least ~1 px on screen whatever the zoom, so runs and outlines never fade away
       ctx.lineWidth = Math.max(2, 1.2 / zoom);
       for (const [colour, path] of pipes) {
@@ -113,12 +112,60 @@ export function OverviewLayer({ nodes, edges }: { nodes: PartNode[]; edges: Pipe
         ctx.fillStyle = MARK[severity];
         ctx.fill();
       }
-      ctx.fillStyle = PAPER;
+    };
+    const clear = () => {
+      ctx.setTransform(1, 0, 0, 1, 0, 0);
+      ctx.clearRect(0, 0, canvas.width, canvas.height);
+    };
+    // Full redraw at rest.
+    let shown: [number, number, number] = [0, 0, 1];
+    const draw = () => {
+      fit();
+      clear();
+      const [tx, ty, zoom] = api.getState().transform;
+      const r = dpr();
+      ctx.setTransform(r * zoom, 0, 0, r * zoom, r * tx, r * ty);
+      paint(zoom);
+      shown = [tx, ty, zoom];
+    };
+    // While the view moves, the last full picture is moved and scaled as a bitmap (one
+    // drawImage a frame); the vectors are redrawn sharp once it has been still for 120 ms.
+    // What the picture did not cover shows up then.
+    const still = document.createElement("canvas");
+    let snapped: [number, number, number] | null = null;
+    let settle: ReturnType<typeof setTimeout> | undefined;
+    const move = () => {
+      fit();
+      if (!snapped) {
+        still.width = canvas.width;
+        still.height = canvas.height;
+        still.getContext("2d")?.drawImage(canvas, 0, 0);
+        snapped = shown;
+      }
+      const [tx0, ty0, z0] = snapped;
+      const [tx, ty, zoom] = api.getState().transform;
+      const k = zoom / z0;
+      const r = dpr();
+      clear();
+      ctx.setTransform(k, 0, 0, k, r * (tx - tx0 * k), r * (ty - ty0 * k));
+      ctx.drawImage(still, 0, 0);
+      clearTimeout(settle);
+      settle = setTimeout(() => {
+        snapped = null;
+        draw();
+      }, 120);
     };
     draw();
-    return api.subscribe((s, prev) => {
-      if (s.transform !== prev.transform || s.width !== prev.width || s.height !== prev.height) draw();
+    const unsubscribe = api.subscribe((s, prev) => {
+      if (s.width !== prev.width || s.height !== prev.height) {
+        snapped = null;
+        draw();
+      } else if (s.transform !== prev.transform) move();
     });
+    return () => {
+      clearTimeout(settle);
+      unsubscribe();
+    };
   }, [api, nodes, findings, pipes]);
   return <canvas ref={ref} className="lw-overview" aria-hidden data-testid="board-overview" />;
 }
