@@ -7,7 +7,7 @@
  * exist (reverse return, parallel paths) the split follows the resistances.
  * Heads of the solution give every circuit's pressure drop (circuits.ts).
  */
-import { components } from "@/lib/hydraulics/network/model";
+import { components, type ModelLink } from "@/lib/hydraulics/network/model";
 import type { LinkTable } from "@/lib/hydraulics/network/behaviour";
 import { solveNetwork } from "@/lib/hydraulics/network/gga";
 import type { EngineContext } from "./context";
@@ -35,17 +35,26 @@ const NO_WATCH: ReadonlySet<number> = new Set();
  * Pump links (pumps, heat sources with a curve) that lie on a loop of links open
  * in this state: only their head can move flow. A pump on no loop (the usual
  * case: every loop through it passes a load, which design cuts) is a bridge.
+ * One union-find over the open links without the pumps, then the pumps as edges
+ * between those pieces: a pump is on a loop when the other pumps alone already
+ * join its two ends' pieces (O(links + pumps²)).
  */
 function pumpsOnLoops(ctx: EngineContext, state: NetworkState): number[] {
   const { links, nodeCount } = ctx.model;
-  const open = links.map((l) => !isCut(ctx, l, state));
-  const out: number[] = [];
+  const pumps: number[] = [];
+  const rest: ModelLink[] = [];
   links.forEach((l, k) => {
-    if (!open[k] || !isPumpLink(ctx, l)) return;
-    const comp = components(nodeCount, links.filter((_, j) => j !== k && open[j]));
-    if (comp[l.from] === comp[l.to]) out.push(k);
+    if (isCut(ctx, l, state)) return;
+    if (isPumpLink(ctx, l)) pumps.push(k);
+    else rest.push(l);
   });
-  return out;
+  if (pumps.length === 0) return [];
+  const piece = components(nodeCount, rest);
+  return pumps.filter((k) => {
+    const others = pumps.filter((j) => j !== k).map((j) => ({ from: piece[links[j]!.from]!, to: piece[links[j]!.to]! }));
+    const joined = components(nodeCount, others);
+    return joined[piece[links[k]!.from]!] === joined[piece[links[k]!.to]!];
+  });
 }
 
 export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): DesignSolution {
