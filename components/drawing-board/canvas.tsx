@@ -19,7 +19,7 @@ import { CanvasHint } from "./canvas-hint";
 import { HelpOverlay } from "./help-overlay";
 import { useBoard, useBoardStore } from "./store";
 import { useBoardKeys } from "./use-board-keys";
-import { FarView, LOD_ZOOM, useFarViewFromZoom } from "./level-of-detail";
+import { useFarView } from "./level-of-detail";
 import { usePartNodes, usePipeEdges } from "./use-canvas-model";
 import { boxOf, OverviewLayer } from "./overview-layer";
 
@@ -63,10 +63,9 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
     clearTimeout(settle.current);
     settle.current = setTimeout(() => setMoving(false), 150);
   }, []);
-  // small print goes first when zoomed out: port names below 70 %, short-pipe labels until 140 %;
-  // below LOD_ZOOM parts and pipes draw plain (level-of-detail.ts)
-  const band = useStore((s) => (s.transform[2] < LOD_ZOOM ? "lw-far lw-mid" : s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
-  const far = useFarViewFromZoom();
+  // small print goes first when zoomed out: port names below 70 %, short-pipe labels until 140 %
+  const band = useStore((s) => (s.transform[2] < 0.7 ? "lw-mid" : s.transform[2] >= 1.4 ? "lw-near" : ""));
+  const far = useFarView();
   // Far out the drawing is a picture (overview-layer.tsx): parts and pipes are hidden from
   // xyflow, so none of their 2,200 components re-check the store on each frame of a move.
   const shownNodes = useMemo(() => (far ? nodes.map((n) => ({ ...n, hidden: true })) : nodes), [far, nodes]);
@@ -154,7 +153,6 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
 
   return (
     <div className={`lw-canvas relative h-full w-full ${band} ${large && moving ? "lw-moving" : ""}`} data-testid="board-canvas">
-      <FarView.Provider value={far}>
       <ReactFlow<PartNode, PipeEdge>
         nodes={shownNodes}
         edges={shownEdges}
@@ -174,9 +172,8 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         nodeOrigin={[0.5, 0.5]}
         snapToGrid
         snapGrid={[GRID, GRID]}
-        // Culling saves work close up; far out every part is cheap, and mounting the parts that
-        // scroll into view on each frame of a pan would cost more than drawing them all.
-        onlyRenderVisibleElements={!far}
+        // only what is on screen is mounted (far out nothing is: the overview canvas draws it)
+        onlyRenderVisibleElements
         fitView={fitOnOpen}
         fitViewOptions={{ padding: 0.1, maxZoom: 1.5 }}
         defaultViewport={{ x: 40, y: 40, zoom: 1 }}
@@ -194,7 +191,6 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         <Controls showInteractive={false} />
         {far && <OverviewLayer nodes={nodes} edges={edges} />}
       </ReactFlow>
-      </FarView.Provider>
       <CanvasHint />
       {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
     </div>

@@ -6,17 +6,9 @@
  * frame rate. Above it symbols are whole — the demo hall fitted to a laptop
  * screen (~30 %) still shows them; they are meant to be read from 50 %.
  */
-import { createContext, useContext } from "react";
 import { useStore } from "@xyflow/react";
 
 export const LOD_ZOOM = 0.25;
 
-/**
- * True while the view is zoomed out past LOD_ZOOM. The canvas reads the zoom once (a
- * boolean selector: it re-renders only when the threshold is crossed) and hands the answer
- * down by context, so 2,200 parts and pipes add no store listeners of their own per frame.
- */
-export const FarView = createContext(false);
-
-export const useFarViewFromZoom = () => useStore((s) => s.transform[2] < LOD_ZOOM);
-export const useFarView = () => useContext(FarView);
+/** True while the view is zoomed out past LOD_ZOOM (a boolean selector: re-renders only at the crossing). */
+export const useFarView = () => useStore((s) => s.transform[2] < LOD_ZOOM);

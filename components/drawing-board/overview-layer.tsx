@@ -14,14 +14,14 @@ import { layoutOf } from "./parts";
 import { orientedLayout } from "./parts/orientation";
 import { useBoard } from "./store";
 import type { PartNode } from "./nodes/part-node";
-import { sideColour, type PipeEdge } from "./pipes/pipe-edge";
+import { PIPE_STEP, pipeColour, type PipeEdge } from "./pipes/pipe-edge";
 
 const INK = "#1f1d1a";
 const SELECTED = "#9a5222";
 const PAPER = "#fffdf9";
 const MARK = { error: "#b42318", warning: "#b7791f" } as const;
 
-/** The drawn box of a part: the node's frame inset 15 % each side, as .lw-part-box. */
+/** The drawn box of a part: the node's frame inset 15 % each side. */
 export function boxOf(n: PartNode): { x: number; y: number; w: number; h: number } {
   const w = n.width ?? 0;
   const h = n.height ?? 0;
@@ -52,8 +52,8 @@ function pipePaths(edges: PipeEdge[], nodes: PartNode[]): Map<string, Path2D> {
     const a = portPoint(byId.get(e.source), e.sourceHandle);
     const b = portPoint(byId.get(e.target), e.targetHandle);
     if (!a || !b || !e.data) continue;
-    const [d] = getSmoothStepPath({ sourceX: a.x, sourceY: a.y, targetX: b.x, targetY: b.y, sourcePosition: a.position, targetPosition: b.position, borderRadius: 6, offset: 16 });
-    const colour = e.selected ? SELECTED : (e.data.overlay?.color ?? sideColour[e.data.side]);
+    const [d] = getSmoothStepPath({ sourceX: a.x, sourceY: a.y, targetX: b.x, targetY: b.y, sourcePosition: a.position, targetPosition: b.position, ...PIPE_STEP });
+    const colour = e.selected ? SELECTED : pipeColour(e.data);
     let p = out.get(colour);
     if (!p) out.set(colour, (p = new Path2D()));
     p.addPath(new Path2D(d));

@@ -2,18 +2,8 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { LRUCache } from "lru-cache";
 import { calculate, ENGINE_VERSION } from "@/lib/hydraulics/calculate";
-import type { Issue, Results } from "@/lib/schematic";
+import type { Results } from "@/lib/schematic";
 import { invalidDocument, type Refused } from "./outcome";
-
-/**
- * The one seam between the app (sizing action, calculate API) and the engine.
- * The engine parses and validates the document itself (parseSchematic), so a
- * bad document comes back as JSON-path issues, never as an exception.
- */
-export function size(input: unknown): { ok: true; results: Results } | { ok: false; issues: Issue[] } {
-  const answer = calculate(input);
-  return answer.ok ? { ok: true, results: answer.results } : { ok: false, issues: answer.issues };
-}
 
 /** Serialized results, ready to send (UTF-8 JSON). */
 export class Answer {
@@ -34,10 +24,12 @@ const answers = new LRUCache<string, Answer>({ maxSize: Math.max(1, CACHE_BYTES)
 const keyOf = (doc: Uint8Array | string) => createHash("sha256").update(ENGINE_VERSION).update("\0").update(doc).digest("base64url");
 
 /**
- * size() answering with the results serialized, from the cache when the same
- * document was sized before. `doc` is the document as received (the API's request
- * body) or as serialized by the caller; `parse` turns it into the document (or
- * refuses it) and is only called on a miss.
+ * The one seam between the app (sizing action, calculate API) and the engine:
+ * the results serialized, from the cache when the same document was sized
+ * before. The engine parses and validates the document itself (parseSchematic),
+ * so a bad document comes back refused with its JSON-path issues. `doc` is the
+ * document as received (the API's request body) or as serialized by the caller;
+ * `parse` turns it into the document (or refuses it) and is only called on a miss.
  */
 export function sizeToAnswer(doc: Uint8Array | string, parse: () => { ok: true; value: unknown } | Refused): Answer | Refused {
   const key = keyOf(doc);
@@ -45,7 +37,7 @@ export function sizeToAnswer(doc: Uint8Array | string, parse: () => { ok: true; 
   if (hit !== undefined) return hit;
   const parsed = parse();
   if (!parsed.ok) return parsed;
-  const r = size(parsed.value);
+  const r = calculate(parsed.value);
   if (!r.ok) return invalidDocument(r.issues);
   const answer = new Answer(new TextEncoder().encode(JSON.stringify(r.results)));
   if (answer.json.byteLength <= CACHE_BYTES / 8) answers.set(key, answer); // one huge answer may not flush the rest

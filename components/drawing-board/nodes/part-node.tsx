@@ -3,7 +3,7 @@
  * One drawn part: its symbol (turned/mirrored), its named port handles, its
  * tag, and a findings marker. Memoised; node data is rebuilt only for parts
  * that changed, so a drag or an edit elsewhere does not repaint it. Zoomed
- * far out (level-of-detail.ts) it is a plain box: no symbol, tag or port names.
+ * far out the overview canvas draws it instead (overview-layer.tsx).
  */
 import { memo } from "react";
 import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
@@ -12,7 +12,6 @@ import { useBoard } from "../store";
 import { layoutOf, symbols } from "../parts";
 import { orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
 import type { PortSpot } from "../parts/layout";
-import { useFarView } from "../level-of-detail";
 
 export type PartNodeData = { part: Part; orientation: Orientation; readOnly: boolean };
 export type PartNode = Node<PartNodeData, "part">;
@@ -55,25 +54,20 @@ export const PartNodeView = memo(function PartNodeView({ id, data, selected }: N
   const base = layoutOf(part.type, part.props);
   const layout = orientedLayout(base, orientation);
   const Symbol = symbols[part.type];
-  const far = useFarView();
   const ports = Object.entries(layout.ports);
   const title = part.label ? `${part.label} (${id})` : `${partRegistry[part.type].label} ${id}`;
   return (
     <div className={`lw-part ${selected ? "lw-part-selected" : ""}`} style={{ width: layout.w, height: layout.h }} title={title} data-part-type={part.type}>
-      {far ? (
-        <div className="lw-part-box" />
-      ) : (
-        <svg width={layout.w} height={layout.h} className="lw-symbol" aria-hidden>
-          <g transform={svgTransform(base, orientation)}>
-            <Symbol w={base.w} h={base.h} props={part.props as Record<string, unknown>} />
-          </g>
-        </svg>
-      )}
+      <svg width={layout.w} height={layout.h} className="lw-symbol" aria-hidden>
+        <g transform={svgTransform(base, orientation)}>
+          <Symbol w={base.w} h={base.h} props={part.props as Record<string, unknown>} />
+        </g>
+      </svg>
       {ports.map(([name, spot]) => (
-        // a lone "connection" port needs no name; far out, handles stay (pipes end on them) unlabelled
-        <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} labelled={!far && ports.length > 1} />
+        // a lone "connection" port needs no name
+        <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} labelled={ports.length > 1} />
       ))}
-      {!far && <span className={`lw-tag lw-tag-${tagSide(ports.map(([, p]) => p))}`}>{id}</span>}
+      <span className={`lw-tag lw-tag-${tagSide(ports.map(([, p]) => p))}`}>{id}</span>
       <FindingMarker id={id} />
     </div>
   );

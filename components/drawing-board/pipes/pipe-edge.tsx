@@ -3,14 +3,13 @@
  * A pipe: an orthogonal run between two ports, red for flow and blue for
  * return (flow-side.ts), labelled "size · length". After Size it, board-2's
  * overlay (data.overlay) recolours it by velocity band and adds the numbers.
- * Zoomed far out (level-of-detail.ts) it is the coloured line alone.
+ * Zoomed far out the overview canvas draws the same run instead (overview-layer.tsx).
  */
 import { memo } from "react";
 import { BaseEdge, getSmoothStepPath, type Edge, type EdgeProps } from "@xyflow/react";
 import type { Pipe } from "@/lib/schematic";
 import type { PipeLabel } from "../overlay/pipe-labels";
 import type { PipeSide } from "./flow-side";
-import { useFarView } from "../level-of-detail";
 
 export type PipeEdgeData = { pipe: Pipe; side: PipeSide; overlay: PipeLabel | null };
 export type PipeEdge = Edge<PipeEdgeData, "pipe">;
@@ -19,22 +18,18 @@ export const sideColour: Record<PipeSide, string> = { flow: "#c8322b", return: "
 
 const metres = (m: number) => `${Number.isInteger(m) ? m : Number(m.toFixed(2))} m`;
 export const pipeCaption = (pipe: Pipe) => `${pipe.size} · ${metres(pipe.lengthM)}`;
+/** How a run turns between its ports (getSmoothStepPath), shared with the overview canvas. */
+export const PIPE_STEP = { borderRadius: 6, offset: 16 } as const;
+/** Its colour: the velocity band after Size it, else flow or return side. */
+export const pipeColour = (d: PipeEdgeData) => (d.overlay ? d.overlay.color : sideColour[d.side]);
 
 export const PipeEdgeView = memo(function PipeEdgeView(props: EdgeProps<PipeEdge>) {
   const { id, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, data, selected } = props;
-  const far = useFarView();
-  const [path, lx, ly] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 6, offset: 16 });
+  const [path, lx, ly] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, ...PIPE_STEP });
   if (!data) return null;
   const { pipe, side, overlay } = data;
-  const colour = overlay ? overlay.color : sideColour[side];
+  const colour = pipeColour(data);
   const width = (overlay?.onIndexCircuit ? 3.5 : 2) + (selected ? 1.5 : 0);
-  if (far) {
-    return (
-      <g data-side={side} className="lw-pipe">
-        <BaseEdge id={id} path={path} style={{ stroke: selected ? "#dc9a6a" : colour, strokeWidth: width + (selected ? 2 : 0) }} interactionWidth={0} />
-      </g>
-    );
-  }
   // a label wider than its pipe would sit on the ports: show it when zoomed in or selected
   const short = Math.abs(targetX - sourceX) + Math.abs(targetY - sourceY) < 90;
   const lines = overlay ? [pipeCaption(pipe), overlay.flow, `${overlay.velocity} · ${overlay.pressureDrop}`] : [pipeCaption(pipe)];

@@ -6,7 +6,7 @@
  */
 import type { PumpDuty } from "@/lib/schematic/results";
 import type { EngineContext } from "./context";
-import type { CircuitAnalysis } from "./circuits";
+import { requiredHeads, type CircuitAnalysis } from "./circuits";
 import type { DesignSolution } from "./design";
 import { pumpHeadAt } from "./part-results";
 
@@ -21,10 +21,11 @@ function curveOf(ctx: EngineContext, linkIndex: number): [number, number][] | nu
 
 export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitAnalysis): PumpDuty[] {
   const duties: PumpDuty[] = [];
+  const heads = requiredHeads(ca);
   for (const [side, root] of ca.rootOfSide) {
     const circuits = ca.circuits.filter((c) => c.side === side && c.pressureDropKpa !== null);
     if (circuits.length === 0) continue;
-    const required = Math.max(...circuits.map((c) => c.pressureDropKpa!));
+    const required = heads.get(root)!;
     const rootId = ctx.model.links[root]!.id;
     let available: number | null = 0;
     let offCurve = false;
