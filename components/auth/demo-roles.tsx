@@ -1,4 +1,4 @@
-import { demoSignInAction } from "@/app/(auth)/actions";
+import { demoSignInAction } from "@/components/auth/actions";
 
 // Landing-page row (development / demo servers only): one click signs in as the seeded
 // person for a role. Each button is its own form posting to a server action.

@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useActionState } from "react";
 import {
   acceptInvitationAction, changePasswordAction, forgotPasswordAction, inviteSignUpAction, resetPasswordAction, signInAction, signUpAction,
-} from "@/app/(auth)/actions";
+} from "@/components/auth/actions";
 import { Field, FormAlert, SubmitButton, type FormResult } from "./form-bits";
 
 // One client component per account form; each posts to its server action.

@@ -1,4 +1,4 @@
-import { signOutAction } from "@/app/(auth)/actions";
+import { signOutAction } from "@/components/auth/actions";
 
 // A form, not a link: signing out changes state, so it is a POST (server action).
 export function SignOutButton({ label = "Sign out", className, next }: { label?: string; className?: string; next?: string }) {

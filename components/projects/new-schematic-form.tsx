@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { createSchematicAction } from "@/app/(app)/projects/[projectId]/actions";
+import { createSchematicAction } from "@/components/projects/actions";
 import { Button } from "@/components/ui/button";
 
 /** Name a new, empty team schematic and open it on the drawing board. */

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { newVariantAction } from "@/app/(app)/projects/[projectId]/actions";
+import { newVariantAction } from "@/components/projects/actions";
 import { Button } from "@/components/ui/button";
 
 /** Copies the stored draft into a new variant (private practice copy for trainees) and opens it. */

@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
-import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "@/app/(app)/projects/[projectId]/team/actions";
+import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "@/components/team/actions";
 import { Field, FormAlert, SubmitButton, fieldError, type FormResult } from "@/components/auth/form-bits";
 import { projectRoles, type ProjectRole } from "@/lib/auth/policy";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { useTransition } from "react";
-import { saveUnitPreference } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { saveUnitPreference } from "./actions";
 import { flowUnits, pressureUnits, unitLabels, type UnitPrefs } from "@/lib/units/display";
 import { useUnits } from "./units-context";
 

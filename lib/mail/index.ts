@@ -4,7 +4,9 @@ import { config } from "@/lib/config";
 
 // Outgoing e-mail through nodemailer over SMTP. Locally that is maildev, which
 // `npm start` / `npm test` run (see scripts/common.sh) and /dev/mail lists.
-export type Message = { to: string; subject: string; text: string; html: string };
+import type { Message } from "./message";
+
+export type { Message };
 
 const g = globalThis as unknown as { __loopwrightMailer?: ReturnType<typeof nodemailer.createTransport> };
 

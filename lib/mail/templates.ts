@@ -1,7 +1,7 @@
 // Message wording: plain text first (what most phones preview), the same words as simple
 // HTML with one copper button. Each message says who sent it, what the link does, when
 // it stops working, and what to do if it was not expected.
-import type { Message } from "./index";
+import type { Message } from "./message";
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 

@@ -41,10 +41,11 @@ const projectRoute = () => import("@/app/api/v1/projects/route");
 const projectItemRoute = () => import("@/app/api/v1/projects/[projectId]/route");
 const schematicRoute = () => import("@/app/api/v1/schematics/[schematicId]/route");
 const calculateRoute = () => import("@/app/api/v1/calculate/route");
-const teamActions = () => import("@/app/(app)/projects/[projectId]/team/actions");
-const authActions = () => import("@/app/(auth)/actions");
-const projectActions = () => import("@/app/(app)/projects/[projectId]/actions");
-const boardActions = () => import("@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions");
+const teamActions = () => import("@/components/team/actions");
+const authActions = () => import("@/components/auth/actions");
+const projectActions = () => import("@/components/projects/actions");
+const boardActions = () => import("@/components/drawing-board/actions");
+const unitActions = () => import("@/components/units/actions");
 
 export const rows: Row[] = [
   // ——— session ———
@@ -203,7 +204,7 @@ export const rows: Row[] = [
   },
   {
     name: "action saveUnitPreference", kind: "action", expect: allow(members),
-    call: async (_f, cookie) => callAction(async () => (await boardActions()).saveUnitPreference({ flow: "m3/h", pressure: "kPa" }), cookie),
+    call: async (_f, cookie) => callAction(async () => (await unitActions()).saveUnitPreference({ flow: "m3/h", pressure: "kPa" }), cookie),
   },
 
   // ——— public account actions: the same answer whoever calls (no role involved) ———

@@ -6,7 +6,8 @@ import { lucia } from "@/lib/auth/lucia";
 import { withRequestCookies } from "@/lib/auth/request-context";
 import { createSchematic } from "@/db/queries/schematics";
 import { parseSchematic, type Schematic } from "@/lib/schematic";
-import * as actions from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import * as actions from "@/components/drawing-board/actions";
+import { saveUnitPreference } from "@/components/units/actions";
 
 // Against the real PostgreSQL of DATABASE_URL (the seeded test database). Each test makes its
 // own schematic in the seeded Orchard End project, so tests never depend on each other's rows.
@@ -145,9 +146,9 @@ describe("save as variant", () => {
 describe("unit preference", () => {
   it("is stored in users.preferences next to other keys and validated", async () => {
     await db()("users").where({ id: "demo-reviewer" }).update({ preferences: JSON.stringify({ theme: "paper" }) });
-    expect(await as("reviewer", () => actions.saveUnitPreference({ flow: "l/s", pressure: "bar" }))).toMatchObject({ ok: true });
+    expect(await as("reviewer", () => saveUnitPreference({ flow: "l/s", pressure: "bar" }))).toMatchObject({ ok: true });
     expect((await db()("users").where({ id: "demo-reviewer" }).first()).preferences).toEqual({ theme: "paper", units: { flow: "l/s", pressure: "bar" } });
-    expect(await as("reviewer", () => actions.saveUnitPreference({ flow: "gallons" }))).toMatchObject({ ok: false, status: 400 });
+    expect(await as("reviewer", () => saveUnitPreference({ flow: "gallons" }))).toMatchObject({ ok: false, status: 400 });
     await db()("users").where({ id: "demo-reviewer" }).update({ preferences: JSON.stringify({}) }); // browser tests expect SI defaults
   });
 });

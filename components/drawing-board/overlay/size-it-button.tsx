@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { sizeSchematic } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { sizeSchematic } from "@/components/drawing-board/actions";
 import { Button } from "@/components/ui/button";
 import { useBoardSession } from "../persistence/session-context";
 import { useBoardStore, useBoard } from "../store";

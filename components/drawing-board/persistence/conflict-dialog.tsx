@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { saveAsVariant } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { saveAsVariant } from "@/components/drawing-board/actions";
 import { Button } from "@/components/ui/button";
 import { useBoardStore } from "../store";
 import { Modal } from "./modal";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { setRevisionStatus, startNewDraft } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { setRevisionStatus, startNewDraft } from "@/components/drawing-board/actions";
 import { StatusBadge } from "@/components/projects/status-badge";
 import { Button } from "@/components/ui/button";
 import { transitionsFor, type RevisionStatus } from "@/lib/revisions/transitions";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { saveRevision } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { saveRevision } from "@/components/drawing-board/actions";
 import { Button } from "@/components/ui/button";
 import { useBoardStore } from "../store";
 import { Modal } from "./modal";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useCallback, useEffect, useRef, useState } from "react";
-import { autosaveDraft } from "@/app/(app)/projects/[projectId]/schematics/[schematicId]/actions";
+import { autosaveDraft } from "@/components/drawing-board/actions";
 import { useBoardStore } from "../store";
 
 export type SaveStatus = "saved" | "unsaved" | "saving" | "conflict" | "error";

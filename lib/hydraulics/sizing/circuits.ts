@@ -17,7 +17,7 @@ import { kvForPressureDrop } from "@/lib/hydraulics/losses";
 import { adjacency, components, type Adjacency, type ModelLink } from "@/lib/hydraulics/network/model";
 import type { Circuit } from "@/lib/schematic/results";
 import type { EngineContext } from "./context";
-import type { DesignSolution } from "./design";
+import type { DesignSolution } from "./design-solution";
 import { isCut } from "./laws";
 import type { DesignLoad } from "./loads";
 

@@ -8,26 +8,15 @@
  * Heads of the solution give every circuit's pressure drop (circuits.ts).
  */
 import { components, type ModelLink } from "@/lib/hydraulics/network/model";
-import type { LinkTable } from "@/lib/hydraulics/network/behaviour";
 import { solveNetwork } from "@/lib/hydraulics/network/gga";
 import type { EngineContext } from "./context";
 import { isPumpLink, requiredHeads, traceCircuits } from "./circuits";
 import { buildLaws, isCut, type NetworkState } from "./laws";
 import { designLoads, type DesignLoad } from "./loads";
 import { baseState } from "./state";
+import type { DesignSolution } from "./design-solution";
 
-export interface DesignSolution {
-  mode: NetworkState["mode"];
-  state: NetworkState;
-  loads: DesignLoad[];
-  /** loads with a path from inlet back to outlet (the others get no flow) */
-  served: DesignLoad[];
-  laws: LinkTable;
-  q: Float64Array;
-  head: Float64Array;
-  converged: boolean;
-  iterations: number;
-}
+export type { DesignSolution };
 
 const NO_WATCH: ReadonlySet<number> = new Set();
 

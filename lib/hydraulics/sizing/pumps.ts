@@ -7,7 +7,7 @@
 import type { PumpDuty } from "@/lib/schematic/results";
 import type { EngineContext } from "./context";
 import { requiredHeads, type CircuitAnalysis } from "./circuits";
-import type { DesignSolution } from "./design";
+import type { DesignSolution } from "./design-solution";
 import { pumpHeadAt } from "./part-results";
 
 const fin = (x: number | null): number | null => (x !== null && Number.isFinite(x) ? x : null);

@@ -5,13 +5,11 @@ import { audit } from "@/lib/audit";
 import { requireProjectRole, requireSchematicAccess, requireUser } from "@/lib/auth/authorize";
 import { requestIp } from "@/lib/auth/request-context";
 import * as q from "@/db/queries/schematics";
-import { saveUserUnits } from "@/db/queries/user-preferences";
 import { parseSchematic } from "@/lib/schematic";
 import { invalidDocument, refusal, Refused, runChecked } from "@/lib/persistence/outcome";
 import { Answer, sizeToAnswer } from "@/lib/persistence/size";
 import { makeVariant } from "@/lib/persistence/variants";
 import { findTransition, revisionStatuses } from "@/lib/revisions/transitions";
-import { unitPrefsSchema } from "@/lib/units/display";
 
 // Server actions of the drawing board. Each: zod-check the envelope, check the role
 // through lib/auth, validate the document with the engine's own parser (issues name
@@ -85,14 +83,5 @@ export async function sizeSchematic(input: { schematicId?: string; doc: unknown 
     else await requireUser();
     const r = sizeToAnswer(JSON.stringify(i.doc ?? null), () => ({ ok: true, value: i.doc }));
     return r instanceof Answer ? r.results() : r;
-  });
-}
-
-export async function saveUnitPreference(input: unknown) {
-  return runChecked(async () => {
-    const units = unitPrefsSchema.parse(input);
-    const user = await requireUser();
-    await saveUserUnits(user.id, units);
-    return units;
   });
 }
