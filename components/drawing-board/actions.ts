@@ -10,6 +10,7 @@ import { invalidDocument, refusal, Refused, runChecked } from "@/lib/persistence
 import { Answer, sizeToAnswer } from "@/lib/persistence/size";
 import { makeVariant } from "@/lib/persistence/variants";
 import { findTransition, revisionStatuses } from "@/lib/revisions/transitions";
+import { keepDraftSizing, resultsForNewRevision } from "@/lib/revisions/with-results";
 
 // Server actions of the drawing board. Each: zod-check the envelope, check the role
 // through lib/auth, validate the document with the engine's own parser (issues name
@@ -36,8 +37,13 @@ export async function saveRevision(input: { schematicId: string; lockVersion: nu
     if (access.schematic.kind === "team") await requireProjectRole(access.schematic.projectId, "revision.save");
     const parsed = parseSchematic(i.doc);
     if (!parsed.ok) return invalidDocument(parsed.issues);
-    const r = await q.saveRevision({ ...i, doc: parsed.doc, userId: access.user.id });
-    return r.ok ? r : refusal(r);
+    // sized before the write, so the revision and its results are stored in one transaction
+    const sized = resultsForNewRevision(parsed.doc);
+    const r = await q.saveRevision({ ...i, doc: parsed.doc, userId: access.user.id, results: sized });
+    if (!r.ok) return refusal(r);
+    // the draft is now that revision's document: its last sizing is the revision's
+    if (sized) await keepDraftSizing(i.schematicId, parsed.doc, sized.json, access.user.id);
+    return { ...r, results: sized?.results ?? null };
   });
 }
 
@@ -75,13 +81,23 @@ export async function startNewDraft(input: { schematicId: string }) {
   });
 }
 
-/** Runs the engine on the board's current document; with a schematicId the caller must be allowed to size it. */
+/**
+ * Runs the engine on the board's current document; with a schematicId the caller must be
+ * allowed to size it, and the answer is kept as the draft's last sizing (with the document
+ * it was for), so it is there on the next opening, for everyone who may read the draft.
+ */
 export async function sizeSchematic(input: { schematicId?: string; doc: unknown }) {
   return runChecked(async () => {
     const i = z.object({ schematicId: uuid.optional(), doc: z.unknown() }).parse(input);
-    if (i.schematicId) await requireSchematicAccess(i.schematicId, "size");
-    else await requireUser();
+    const access = i.schematicId ? await requireSchematicAccess(i.schematicId, "size") : null;
+    if (!access) await requireUser();
     const r = sizeToAnswer(JSON.stringify(i.doc ?? null), () => ({ ok: true, value: i.doc }));
-    return r instanceof Answer ? r.results() : r;
+    if (!(r instanceof Answer)) return r;
+    const results = r.results();
+    if (access) {
+      const parsed = parseSchematic(i.doc);
+      if (parsed.ok) await keepDraftSizing(access.schematic.id, parsed.doc, new TextDecoder().decode(r.json), access.user.id);
+    }
+    return results;
   });
 }

@@ -23,8 +23,12 @@ export interface DrawingBoardProps {
   toolbarSlot?: ReactNode;
   /** The sizing report; adds a Drawing / Sizing report switch. */
   reportSlot?: ReactNode;
-  /** Over the canvas, e.g. velocity legend and findings list. */
+  /** Over the canvas, small: the velocity legend. */
   canvasSlot?: ReactNode;
+  /** A strip between the top bar and the canvas: what is open, which results are shown. */
+  barSlot?: ReactNode;
+  /** Docked in the right-hand column above the details: the findings panel. */
+  dockSlot?: ReactNode;
   onChange?: (doc: Schematic, revision: number) => void;
   onReady?: (api: BoardApi) => void;
   /** Height of the whole board; default fills the window under the 3.5 rem app header. */
@@ -51,7 +55,7 @@ function ApiBridge({ onChange, onReady }: Pick<DrawingBoardProps, "onChange" | "
 }
 
 const drawer = (open: boolean, side: "left" | "right") =>
-  `${open ? "absolute inset-y-0 z-20 w-72 shadow-xl" : "hidden"} ${side === "left" ? "left-0 border-r" : "right-0 border-l"} border-ink/10 bg-paper md:static md:block md:shadow-none`;
+  `${open ? "absolute inset-y-0 z-20 flex w-72 shadow-xl" : "hidden"} ${side === "left" ? "left-0 border-r" : "right-0 border-l"} flex-col border-ink/10 bg-paper md:static md:flex md:shadow-none`;
 
 function Shell(props: DrawingBoardProps) {
   const [help, setHelp] = useState(false);
@@ -64,6 +68,7 @@ function Shell(props: DrawingBoardProps) {
       <div className="flex flex-col" style={{ height: props.height ?? "calc(100dvh - 3.5rem - 1px)" }} data-testid="drawing-board">
         <BoardTopBar toolbarSlot={props.toolbarSlot} onHelp={() => setHelp((h) => !h)} onToggleBin={() => setBin((b) => !b)}
           onToggleDetails={() => setDetails((d) => !d)} tab={tab} onTab={props.reportSlot ? setTab : undefined} />
+        {props.barSlot}
         <div className={`relative min-h-0 flex-1 ${tab === "drawing" ? "flex" : "hidden"}`}>
           <aside className={`${drawer(bin, "left")} md:w-56 md:shrink-0`} aria-label="Parts bin">
             <PartsBin />
@@ -73,7 +78,8 @@ function Shell(props: DrawingBoardProps) {
             {props.canvasSlot}
           </main>
           <aside className={`${drawer(details, "right")} md:w-72 md:shrink-0`} aria-label="Details">
-            <DetailsPanel />
+            {props.dockSlot}
+            <div className="min-h-0 flex-1"><DetailsPanel /></div>
           </aside>
         </div>
         {tab === "report" && <div className="min-h-0 flex-1 overflow-auto">{props.reportSlot}</div>}

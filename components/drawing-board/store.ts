@@ -11,6 +11,8 @@ import type { Results, Schematic, Severity } from "@/lib/schematic";
 import { commands, type CommandArgs, type CommandId } from "./commands";
 import type { BoardState, DispatchResult } from "./commands/types";
 import { autoOrient } from "./parts/orientation";
+import { docChanges } from "@/lib/schematic/doc-changes";
+import { DEFAULT_VIEW, findingInView, viewsOf } from "./overlay/results-view";
 
 export type { BoardState, Selection, Clipboard } from "./commands/types";
 
@@ -20,7 +22,10 @@ export const HISTORY_LIMIT = 100;
 export interface BoardActions {
   dispatch<K extends CommandId>(id: K, ...args: CommandArgs<K> extends void ? [] : [CommandArgs<K>]): DispatchResult;
   setSelection(parts: string[], pipes: string[]): void;
-  setResults(results: Results | null): void;
+  /** Results and the document they were computed for (default: the document now). */
+  setResults(results: Results | null, forDoc?: Schematic): void;
+  setResultsView(view: string): void;
+  setTagMode(mode: "label" | "id"): void;
   setHint(hint: string | null): void;
   /** E.g. after "start a new draft" on an issued revision. */
   setReadOnly(readOnly: boolean): void;
@@ -29,10 +34,11 @@ export type BoardStore = StoreApi<BoardState & BoardActions>;
 
 const rank: Record<Severity, number> = { info: 0, warning: 1, error: 2 };
 
-/** Worst finding per referenced id, so each node looks its marker up in O(1). */
-export function findingsIndex(results: Results | null): Map<string, Severity> {
+/** Worst finding per referenced id in the results shown, so each node looks its marker up in O(1). */
+export function findingsIndex(results: Results | null, view: string = DEFAULT_VIEW): Map<string, Severity> {
   const map = new Map<string, Severity>();
   for (const f of results?.findings ?? []) {
+    if (!findingInView(f, view)) continue;
     for (const ref of f.refs) {
       const prev = map.get(ref);
       if (!prev || rank[f.severity] > rank[prev]) map.set(ref, f.severity);
@@ -44,7 +50,14 @@ export function findingsIndex(results: Results | null): Map<string, Severity> {
 // order-insensitive: the canvas reports selections in document order, commands in their own
 const sameIds = (a: string[], b: string[]) => a.length === b.length && (a.every((x, i) => x === b[i]) || (new Set(a).size === a.length && b.every((x) => a.includes(x))));
 
-export function createBoardStore(initialDoc: Schematic, opts: { readOnly: boolean } = { readOnly: false }): BoardStore {
+export interface StoreOptions {
+  readOnly: boolean;
+  /** Kept results to show from the start, and the document they were computed for. */
+  sizing?: { results: Results; doc: Schematic } | null;
+}
+
+export function createBoardStore(initialDoc: Schematic, opts: StoreOptions = { readOnly: false }): BoardStore {
+  const kept = opts.sizing ?? null;
   return createStore<BoardState & BoardActions>()((set, get) => ({
     doc: initialDoc,
     selection: { parts: [], pipes: [] },
@@ -52,9 +65,12 @@ export function createBoardStore(initialDoc: Schematic, opts: { readOnly: boolea
     future: [],
     revision: 0,
     clipboard: null,
-    results: null,
-    findings: new Map(),
-    resultsStale: false,
+    results: kept?.results ?? null,
+    findings: findingsIndex(kept?.results ?? null),
+    resultsDoc: kept?.doc ?? null,
+    resultsStale: kept ? docChanges(kept.doc, initialDoc).length > 0 : false,
+    resultsView: DEFAULT_VIEW,
+    tagMode: "label",
     readOnly: opts.readOnly,
     hint: null,
     pasteCount: 0,
@@ -76,7 +92,8 @@ export function createBoardStore(initialDoc: Schematic, opts: { readOnly: boolea
           patch.future = [];
         }
         patch.revision = state.revision + 1;
-        if (state.results) patch.resultsStale = true;
+        // stale while a sizing input differs (a move, or an undo back to the sized drawing, is not)
+        if (state.results && state.resultsDoc) patch.resultsStale = docChanges(state.resultsDoc, out.doc).length > 0;
         if (out.doc.pipes !== state.doc.pipes) patch.autoOrient = autoOrient(out.doc);
       }
       set(patch);
@@ -87,8 +104,18 @@ export function createBoardStore(initialDoc: Schematic, opts: { readOnly: boolea
       if (sameIds(s.parts, parts) && sameIds(s.pipes, pipes)) return;
       set({ selection: { parts, pipes } });
     },
-    setResults(results) {
-      set({ results, findings: findingsIndex(results), resultsStale: false });
+    setResults(results, forDoc) {
+      const doc = get().doc;
+      const resultsDoc = results ? forDoc ?? doc : null;
+      const view = viewsOf(results).some((v) => v.key === get().resultsView) ? get().resultsView : DEFAULT_VIEW;
+      set({ results, resultsDoc, resultsView: view, findings: findingsIndex(results, view),
+        resultsStale: resultsDoc ? docChanges(resultsDoc, doc).length > 0 : false });
+    },
+    setResultsView(resultsView) {
+      if (get().resultsView !== resultsView) set({ resultsView, findings: findingsIndex(get().results, resultsView) });
+    },
+    setTagMode(tagMode) {
+      set({ tagMode });
     },
     setHint(hint) {
       if (get().hint !== hint) set({ hint });

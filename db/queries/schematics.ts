@@ -4,6 +4,7 @@ import { db } from "@/lib/db";
 import type { Schematic } from "@/lib/schematic";
 import { draftIsReadOnly } from "@/lib/revisions/draft-state";
 import type { RevisionStatus } from "@/lib/revisions/transitions";
+import { putRevisionResults } from "./kept-results";
 import { mapRevision, mapSchematic, type RevisionRecord, type SchematicRecord } from "./schematic-rows";
 
 export type { RevisionRecord, SchematicRecord, SchematicSummary } from "./schematic-rows";
@@ -68,14 +69,18 @@ export async function saveDraft(input: { schematicId: string; lockVersion: numbe
   });
 }
 
-/** Save the draft and freeze it as the next numbered revision, in one transaction (nothing half-saved). */
-export async function saveRevision(input: { schematicId: string; lockVersion: number; doc: Schematic; message: string; userId: string }):
-  Promise<(DraftSaved & { revision: RevisionRecord }) | WriteRefusal> {
+/**
+ * Save the draft and freeze it as the next numbered revision with its sizing results,
+ * in one transaction (nothing half-saved).
+ */
+export async function saveRevision(input: { schematicId: string; lockVersion: number; doc: Schematic; message: string; userId: string;
+  results: { engineVersion: string; json: string } | null }): Promise<(DraftSaved & { revision: RevisionRecord }) | WriteRefusal> {
   return db().transaction(async (trx) => {
     const r = await writeDraft(trx, input);
     if (!r.ok) return r;
     const [row] = await trx("schematic_revisions").insert({ schematic_id: input.schematicId, number: (r.latest?.number ?? 0) + 1,
       document: JSON.stringify(input.doc), status: "draft", message: input.message, author_id: input.userId }).returning("*");
+    if (input.results) await putRevisionResults(row.id, input.results.engineVersion, input.results.json, trx);
     return { ok: true, lockVersion: r.lockVersion, updatedAt: r.updatedAt, revision: mapRevision(row) };
   });
 }

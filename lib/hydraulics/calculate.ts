@@ -21,7 +21,8 @@ import { emitterResults, hotWaterResult } from "./sizing/emitters";
 import { runMode, type ModeRun } from "./sizing/mode";
 import { systemVolumeL, vesselResult, volumeResult } from "./sizing/vessel";
 
-export const ENGINE_VERSION = "1.0.0";
+// 1.1.0: findings name the mode or scenario they were found in; scenario pipes carry their velocity.
+export const ENGINE_VERSION = "1.1.0";
 
 export type CalculateResult = { ok: true; results: Results } | { ok: false; issues: Issue[] };
 
@@ -74,7 +75,7 @@ function bypassSection(
     });
     if (!Number.isFinite(flow)) flow = null;
   }
-  const minFlowMet = minFlowCheck(ctx, flow, "with every zone valve shut");
+  const minFlowMet = ctx.findings.within({ mode: "heating", scenario: "all zones shut" }, () => minFlowCheck(ctx, flow, "with every zone valve shut"));
   return {
     id: first.id,
     recommendedOpeningKpa: first.recommendedOpeningKpa,
@@ -90,10 +91,13 @@ export function calculateSchematic(doc: Schematic): Results {
   plantFindings(doc, ctx.model, findings);
   const unheated = unheatedLoads(ctx.model, findings);
   const hydraulic = ctx.fluid !== null && ctx.deltaTK !== null;
-  const heating = hydraulic ? runMode(ctx, "heating") : null;
+  // Findings of a mode or scenario say so (Findings.within), so the board can show that state.
+  const inHeating = <T>(fn: () => T) => findings.within({ mode: "heating" }, fn);
+  const inHotWater = <T>(fn: () => T) => findings.within({ mode: "hot-water" }, fn);
+  const heating = hydraulic ? inHeating(() => runMode(ctx, "heating")) : null;
   const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
-  const hotWater = hydraulic && hasCylinder ? runMode(ctx, "hot-water") : null;
-  if (heating) minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode");
+  const hotWater = hydraulic && hasCylinder ? inHotWater(() => runMode(ctx, "hot-water")) : null;
+  if (heating) inHeating(() => minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode"));
   const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];
   const openings = new Map(sizings.map((s) => [s.id, s.openingKpa]));
   const warm = heating ? heating.solution.q : null;
@@ -117,8 +121,8 @@ export function calculateSchematic(doc: Schematic): Results {
     bypass,
     expansionVessel: vesselResult(ctx, volumeL),
     volume: volumeResult(ctx, volumeL),
-    emitters: emitterResults(ctx, unheated),
-    hotWater: hotWaterResult(ctx),
+    emitters: inHeating(() => emitterResults(ctx, unheated)),
+    hotWater: inHotWater(() => hotWaterResult(ctx)),
     scenarios: run?.results ?? [],
   };
 }

@@ -1,20 +1,39 @@
 import "server-only";
 import { AuthError, requireSchematicAccess, type SchematicAccess } from "@/lib/auth/authorize";
-import { getRevision, getSchematic, listRevisions, type RevisionRecord } from "@/db/queries/schematics";
+import { getSchematic, listRevisions, type RevisionRecord } from "@/db/queries/schematics";
 import { draftIsReadOnly } from "@/lib/revisions/draft-state";
+import { draftSizing, revisionWithResults, type Recomputed } from "@/lib/revisions/with-results";
+import type { Results, Schematic } from "@/lib/schematic";
+
+/** Kept sizing of what is opened: a revision's own results, or the draft's last sizing. */
+export interface KeptSizing {
+  results: Results;
+  engineVersion: string;
+  /** The draft as it was when sized (draft only): the board lists what changed since. */
+  sizedDocument: Schematic | null;
+  sizedAt: string | null;
+  sizedBy: string | null;
+  recomputed: Recomputed;
+}
 
 /** What the board needs to open a schematic; shared by its page and GET /api/v1/schematics/:id. */
 export interface SchematicView {
   schematic: { id: string; projectId: string; name: string; kind: "team" | "practice"; variantOf: string | null;
     lockVersion: number; updatedAt: string };
-  /** The stored draft (or issued document for installers); the board parses and migrates it. */
+  /** The stored draft, or the revision opened; the board parses and migrates it. */
   doc: unknown;
+  /** The working draft, or a saved revision (read-only). */
+  viewing: { kind: "draft" } | { kind: "revision"; revision: RevisionRecord };
+  /** Its sizing results, when kept: anyone who may read it sees the numbers without sizing. */
+  sizing: KeptSizing | null;
   revisions: RevisionRecord[];
+  /** Installers see issued revisions only: no draft to switch to. */
+  draftVisible: boolean;
   readOnly: boolean;
   /** The caller's role may edit this schematic (an issued lock aside). */
   mayEdit: boolean;
   /** Why it is read-only, for the banner. */
-  readOnlyReason: "issued" | "role" | null;
+  readOnlyReason: "issued" | "role" | "revision" | null;
 }
 
 /** Whether the caller may do `mode` on the schematic (lib/auth decides; a refusal is just "no"). */
@@ -28,26 +47,47 @@ export async function mayDo(schematicId: string, mode: "edit" | "size"): Promise
   }
 }
 
-export async function schematicView(access: SchematicAccess): Promise<SchematicView | null> {
+/**
+ * Which revision to open. "draft" → the working draft; a revision id → that revision;
+ * "default" → by role: installers the newest issued revision, reviewers the newest one
+ * under review (the one they are asked to judge), everyone else the draft.
+ */
+export type Open = "default" | "draft" | string;
+
+function chooseRevision(access: SchematicAccess, revisions: RevisionRecord[], open: Open): RevisionRecord | null {
+  const asked = open !== "default" && open !== "draft" ? revisions.find((r) => r.id === open) : undefined;
+  if (asked) return asked;
+  if (access.issuedOnly) return revisions[0] ?? null;
+  if (open !== "draft" && access.role === "reviewer") return revisions.find((r) => r.status === "in-review") ?? null;
+  return null;
+}
+
+export async function schematicView(access: SchematicAccess, open: Open = "draft"): Promise<SchematicView | null> {
   const canEdit = !access.issuedOnly && (await mayDo(access.schematic.id, "edit"));
   const s = await getSchematic(access.schematic.id);
   if (!s) return null;
   let revisions = await listRevisions(s.id);
-  let doc = s.draft;
-  const latest = revisions[0] ?? null;
-  const issuedLock = draftIsReadOnly({ draftUpdatedAt: s.updatedAt, latest });
-  if (access.issuedOnly) {
-    revisions = revisions.filter((r) => r.status === "issued");
-    const top = revisions[0];
-    doc = top ? (await getRevision(top.id))?.document ?? null : null;
+  const issuedLock = draftIsReadOnly({ draftUpdatedAt: s.updatedAt, latest: revisions[0] ?? null });
+  if (access.issuedOnly) revisions = revisions.filter((r) => r.status === "issued");
+  const head = {
+    schematic: { id: s.id, projectId: s.projectId, name: s.name, kind: s.kind, variantOf: s.variantOf, lockVersion: s.lockVersion, updatedAt: s.updatedAt },
+    revisions, draftVisible: !access.issuedOnly, mayEdit: canEdit,
+  };
+  const chosen = chooseRevision(access, revisions, open);
+  if (chosen) {
+    const r = await revisionWithResults(chosen.id);
+    if (!r) return null;
+    const sizing = r.results && r.engineVersion
+      ? { results: r.results, engineVersion: r.engineVersion, sizedDocument: null, sizedAt: null, sizedBy: null, recomputed: r.recomputed } : null;
+    return { ...head, doc: r.document, viewing: { kind: "revision", revision: chosen }, sizing, readOnly: true, readOnlyReason: "revision" };
   }
+  if (access.issuedOnly) return { ...head, doc: null, viewing: { kind: "draft" }, sizing: null, readOnly: true, readOnlyReason: "role" };
+  const kept = await draftSizing(s.id);
+  const sizing = kept ? { results: kept.results, engineVersion: kept.engineVersion, sizedDocument: kept.document, sizedAt: kept.sizedAt,
+    sizedBy: kept.sizedBy, recomputed: kept.recomputed } : null;
   return {
-    schematic: { id: s.id, projectId: s.projectId, name: s.name, kind: s.kind, variantOf: s.variantOf, lockVersion: s.lockVersion,
-      updatedAt: s.updatedAt },
-    doc,
-    revisions,
+    ...head, doc: s.draft, viewing: { kind: "draft" }, sizing,
     readOnly: issuedLock || !canEdit,
-    mayEdit: canEdit,
     readOnlyReason: issuedLock ? "issued" : canEdit ? null : "role",
   };
 }

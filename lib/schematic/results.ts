@@ -14,6 +14,10 @@ export const findingSchema = z.object({
   code: z.string().regex(/^[a-z0-9-]+(\.[a-z0-9-]+)+$/),
   message: z.string().min(1),
   refs: z.array(z.string()),
+  /** The design mode it was found in (absent: it holds whatever the mode). */
+  mode: z.enum(["heating", "hot-water"]).optional(),
+  /** The simulated scenario it was found in, by name. */
+  scenario: z.string().optional(),
 });
 
 export const pipeResultSchema = z.object({
@@ -64,7 +68,7 @@ export const scenarioResultSchema = z.object({
   iterations: z.number().int().min(0),
   heatSourceFlowM3h: nnum,
   heatSourceReturnC: nnum,
-  pipes: z.array(z.object({ id: z.string(), flowM3h: nnum, pressureDropKpa: nnum })),
+  pipes: z.array(z.object({ id: z.string(), flowM3h: nnum, velocityMps: nnum, pressureDropKpa: nnum })),
   parts: z.array(partResultSchema),
   emitters: z.array(
     z.object({ id: z.string(), flowM3h: nnum, outputW: nnum, returnTemperatureC: nnum }),

@@ -24,8 +24,14 @@ export interface BoardState {
   results: Results | null;
   /** Worst finding severity per part/pipe id, derived from results. */
   findings: Map<string, Severity>;
-  /** The document changed since results were computed. */
+  /** The document the results were computed for (what "changed since" compares with). */
+  resultsDoc: Schematic | null;
+  /** A sizing input changed since results were computed (lib/schematic/doc-changes). */
   resultsStale: boolean;
+  /** Which results the overlay, report and markers show: a design mode or a scenario (overlay/results-view.ts). */
+  resultsView: string;
+  /** Part tags on the drawing: their labels, or their ids. */
+  tagMode: "label" | "id";
   readOnly: boolean;
   /** Short message shown on the canvas (e.g. why a connection was refused). */
   hint: string | null;

@@ -8,6 +8,8 @@
 import { memo } from "react";
 import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
 import { partRegistry, type Part } from "@/lib/schematic";
+import { useUnits } from "@/components/units/units-context";
+import { partBadgesMemo } from "../overlay/part-badges";
 import { useBoard } from "../store";
 import { layoutOf, symbols } from "../parts";
 import { orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
@@ -39,6 +41,24 @@ function PortHandle({ name, spot, readOnly, labelled }: { name: string; spot: Po
   );
 }
 
+/** The part's label (or its id, by the board's labels/ids switch) on the side with no port. */
+function Tag({ part, side }: { part: Part; side: string }) {
+  const mode = useBoard((s) => s.tagMode);
+  const text = mode === "id" ? part.id : part.label || `${partRegistry[part.type].label} ${part.id}`;
+  return <span className={`lw-tag lw-tag-${side} ${mode === "label" ? "lw-tag-label" : ""}`} data-tag={mode}>{text}</span>;
+}
+
+/** Its number in the results view shown (emitter output, heat-source or bypass flow). */
+function Badge({ part }: { part: Part }) {
+  const results = useBoard((s) => s.results);
+  const view = useBoard((s) => s.resultsView);
+  const parts = useBoard((s) => s.doc.parts);
+  const { prefs } = useUnits();
+  const badge = partBadgesMemo(results, parts, view, prefs).get(part.id);
+  if (!badge) return null;
+  return <span className={`lw-badge ${badge.warn ? "lw-badge-warn" : ""}`} data-badge={part.id}>{badge.text}</span>;
+}
+
 function FindingMarker({ id }: { id: string }) {
   const severity = useBoard((s) => s.findings.get(id));
   if (!severity || severity === "info") return null;
@@ -67,7 +87,8 @@ export const PartNodeView = memo(function PartNodeView({ id, data, selected }: N
         // a lone "connection" port needs no name
         <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} labelled={ports.length > 1} />
       ))}
-      <span className={`lw-tag lw-tag-${tagSide(ports.map(([, p]) => p))}`}>{id}</span>
+      <Tag part={part} side={tagSide(ports.map(([, p]) => p))} />
+      <Badge part={part} />
       <FindingMarker id={id} />
     </div>
   );

@@ -3,10 +3,10 @@
  * pressure drop in the user's display units, the velocity band, and whether the
  * engine suggests another size. Pure: results + document in, plain data out.
  */
-import type { ModeResult, Results, Schematic } from "@/lib/schematic";
+import type { Results, Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
 import { suggestedSizeChanges } from "../report/apply-suggested-sizes";
-import { modeOf } from "./results-mode";
+import { DEFAULT_VIEW, pipesInView } from "./results-view";
 import { bandStyle, velocityBand, type VelocityBand } from "./velocity-bands";
 
 export interface PipeLabel {
@@ -21,15 +21,16 @@ export interface PipeLabel {
 }
 
 export function pipeLabels(results: Results | null, doc: Pick<Schematic, "pipes" | "design">, prefs: UnitPrefs,
-  mode?: ModeResult["mode"]): Map<string, PipeLabel> {
+  view: string = DEFAULT_VIEW): Map<string, PipeLabel> {
   const out = new Map<string, PipeLabel>();
-  const m = modeOf(results, mode);
-  if (!results || !m) return out;
-  const onIndex = new Set(m.circuits.filter((c) => c.index).flatMap((c) => c.path));
+  if (!results) return out;
+  const onIndex = indexCircuitIds(results, view);
   // the same suggestion "Apply suggested sizes" would make (largest over the modes)
-  const suggested = new Map(suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]));
+  // (in a design view only: a simulated scenario is what the drawn sizes do, not a sizing)
+  const design = results.modes.some((m) => m.mode === view);
+  const suggested = new Map(design ? suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]) : []);
   const rho = results.fluid.densityKgM3;
-  for (const r of m.pipes) {
+  for (const r of pipesInView(results, view)) {
     const band = velocityBand(r.velocityMps, doc.design.maxVelocityMps);
     out.set(r.id, {
       id: r.id,
@@ -45,8 +46,8 @@ export function pipeLabels(results: Results | null, doc: Pick<Schematic, "pipes"
   return out;
 }
 
-/** Ids of pipes and parts on the index circuit(s) of a mode, for tracing on the canvas. */
-export function indexCircuitIds(results: Results | null, mode?: ModeResult["mode"]): Set<string> {
-  const m = modeOf(results, mode);
+/** Ids of pipes and parts on the index circuit(s) of a design mode, for tracing on the canvas (scenarios have none). */
+export function indexCircuitIds(results: Results | null, view: string = DEFAULT_VIEW): Set<string> {
+  const m = (results?.modes ?? []).find((x) => x.mode === view);
   return new Set(m ? m.circuits.filter((c) => c.index).flatMap((c) => c.path) : []);
 }

@@ -9,7 +9,7 @@ import { useBoardStore, useBoard } from "../store";
 /** "Size it": runs the sizing server action on the document as drawn now and puts the answer in the store. */
 export function SizeItButton() {
   const store = useBoardStore();
-  const { schematicId, canSize } = useBoardSession();
+  const { schematicId, canSize, setSizing } = useBoardSession();
   const stale = useBoard((s) => s.resultsStale);
   const sized = useBoard((s) => s.results !== null);
   const [busy, setBusy] = useState(false);
@@ -20,9 +20,13 @@ export function SizeItButton() {
     setBusy(true);
     setError(null);
     try {
-      const r = await sizeSchematic({ schematicId, doc: store.getState().doc });
-      if (r.ok) store.getState().setResults(r.data);
-      else setError(r.error);
+      const doc = store.getState().doc;
+      const r = await sizeSchematic({ schematicId, doc });
+      if (r.ok) {
+        // the results belong to the drawing as sent, even if it changed while sizing ran
+        store.getState().setResults(r.data, doc);
+        setSizing({ engineVersion: r.data.engine, sizedAt: new Date().toISOString(), sizedBy: null, recomputed: null });
+      } else setError(r.error);
     } catch {
       setError("Could not reach the server to size the schematic.");
     } finally {

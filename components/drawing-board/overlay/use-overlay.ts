@@ -10,10 +10,11 @@ import { indexCircuitIds, pipeLabels, type PipeLabel } from "./pipe-labels";
 
 export function usePipeLabels(): Map<string, PipeLabel> {
   const results = useBoard((s) => s.results);
+  const view = useBoard((s) => s.resultsView);
   const pipes = useBoard((s) => s.doc.pipes);
   const design = useBoard((s) => s.doc.design);
   const { prefs } = useUnits();
-  return useMemo(() => pipeLabels(results, { pipes, design }, prefs), [results, pipes, design, prefs]);
+  return useMemo(() => pipeLabels(results, { pipes, design }, prefs, view), [results, pipes, design, prefs, view]);
 }
 
 export function usePipeOverlay(pipeId: string): PipeLabel | null {
@@ -22,5 +23,6 @@ export function usePipeOverlay(pipeId: string): PipeLabel | null {
 
 export function useIndexCircuit(): Set<string> {
   const results = useBoard((s) => s.results);
-  return useMemo(() => indexCircuitIds(results), [results]);
+  const view = useBoard((s) => s.resultsView);
+  return useMemo(() => indexCircuitIds(results, view), [results, view]);
 }

@@ -8,33 +8,36 @@ import { parseSchematic, type Schematic } from "@/lib/schematic";
 import type { UnitPrefs } from "@/lib/units/display";
 import { fetchJson } from "@/lib/fetch-json";
 import { BoardStoreProvider, createBoardStore } from "../store";
-import { BoardSessionContext } from "./session-context";
+import { BoardSessionContext, type SizingMeta } from "./session-context";
 import { ConflictDialog } from "./conflict-dialog";
 import { useAutosave } from "./use-autosave";
 
 interface Props {
   view: SchematicView;
+  projectName: string;
   role: ProjectRole;
   canSize: boolean;
   units: UnitPrefs;
   children: ReactNode;
 }
 
-type Opened = { doc: Schematic; lockVersion: number; readOnly: boolean; key: number };
+type Opened = { doc: Schematic; lockVersion: number; readOnly: boolean; key: number; sizing: SchematicView["sizing"] };
+
+const keptOf = (sizing: SchematicView["sizing"], doc: Schematic) => (sizing ? { results: sizing.results, doc: sizing.sizedDocument ?? doc } : null);
 
 /**
  * One open schematic: the board store, autosave and the conflict dialog. The
  * store is made here (one per opening) so "Reload theirs" can swap in a fresh
  * store with the stored draft by bumping `key`, without leaving the page.
  */
-export function BoardSession({ view, role, canSize, units, children }: Props) {
+export function BoardSession({ view, projectName, role, canSize, units, children }: Props) {
   const canEdit = view.mayEdit;
   const first = parseSchematic(view.doc);
   const [opened, setOpened] = useState<Opened | null>(() =>
-    first.ok ? { doc: first.doc, lockVersion: view.schematic.lockVersion, readOnly: view.readOnly, key: 0 } : null);
+    first.ok ? { doc: first.doc, lockVersion: view.schematic.lockVersion, readOnly: view.readOnly, key: 0, sizing: view.sizing } : null);
   const [revisions, setRevisions] = useState(view.revisions);
   const [readOnlyReason, setReason] = useState(view.readOnlyReason);
-  const store = useMemo(() => (opened ? createBoardStore(opened.doc, { readOnly: opened.readOnly }) : null),
+  const store = useMemo(() => (opened ? createBoardStore(opened.doc, { readOnly: opened.readOnly, sizing: keptOf(opened.sizing, opened.doc) }) : null),
     // a new store only when a different draft is opened
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [opened?.key]);
@@ -54,17 +57,19 @@ export function BoardSession({ view, role, canSize, units, children }: Props) {
     if (!parsed.ok) throw new Error(parsed.issues[0]?.message ?? "The stored schematic is not valid.");
     setRevisions(fresh.revisions);
     setReason(fresh.readOnlyReason);
-    setOpened({ doc: parsed.doc, lockVersion: fresh.schematic.lockVersion, readOnly: fresh.readOnly || !canEdit, key: opened.key + 1 });
+    setOpened({ doc: parsed.doc, lockVersion: fresh.schematic.lockVersion, readOnly: fresh.readOnly || !canEdit, key: opened.key + 1, sizing: fresh.sizing });
   };
   const unlock = (lockVersion: number) => {
     setReason(null);
-    setOpened({ doc: store.getState().doc, lockVersion, readOnly: false, key: opened.key + 1 });
+    const { results, resultsDoc } = store.getState();
+    setOpened({ doc: store.getState().doc, lockVersion, readOnly: false, key: opened.key + 1,
+      sizing: results && opened.sizing ? { ...opened.sizing, results, sizedDocument: resultsDoc } : null });
   };
 
   return (
     <UnitsProvider initial={units}>
       <BoardStoreProvider key={opened.key} store={store} initialDoc={opened.doc} readOnly={opened.readOnly}>
-        <Saving view={view} role={role} canSize={canSize} opened={opened} revisions={revisions}
+        <Saving view={view} projectName={projectName} role={role} canSize={canSize} opened={opened} revisions={revisions}
           setRevisions={setRevisions} readOnlyReason={readOnlyReason} reload={reload} unlock={unlock}>
           {children}
         </Saving>
@@ -77,8 +82,10 @@ export function BoardSession({ view, role, canSize, units, children }: Props) {
 function Saving(p: Omit<Props, "units"> & { opened: Opened; revisions: SchematicView["revisions"]; setRevisions: (r: SchematicView["revisions"]) => void;
   readOnlyReason: SchematicView["readOnlyReason"]; reload: () => Promise<void>; unlock: (v: number) => void }) {
   const save = useAutosave(p.view.schematic.id, p.opened.lockVersion, !p.opened.readOnly);
+  const [sizing, setSizing] = useState<SizingMeta | null>(() => metaOf(p.opened.sizing));
   const value = {
-    schematicId: p.view.schematic.id, projectId: p.view.schematic.projectId, name: p.view.schematic.name, role: p.role,
+    schematicId: p.view.schematic.id, projectId: p.view.schematic.projectId, name: p.view.schematic.name, projectName: p.projectName, role: p.role,
+    viewing: p.view.viewing, draftVisible: p.view.draftVisible, sizing, setSizing,
     canEdit: p.view.mayEdit && !p.opened.readOnly, mayEdit: p.view.mayEdit, canSize: p.canSize, readOnlyReason: p.readOnlyReason,
     revisions: p.revisions, setRevisions: p.setRevisions, save, reload: p.reload, unlock: p.unlock,
   };
@@ -88,4 +95,8 @@ function Saving(p: Omit<Props, "units"> & { opened: Opened; revisions: Schematic
       <ConflictDialog open={save.status === "conflict"} />
     </BoardSessionContext.Provider>
   );
+}
+
+function metaOf(sizing: SchematicView["sizing"]): SizingMeta | null {
+  return sizing ? { engineVersion: sizing.engineVersion, sizedAt: sizing.sizedAt, sizedBy: sizing.sizedBy, recomputed: sizing.recomputed } : null;
 }

@@ -25,6 +25,11 @@ export function SaveRevisionDialog({ open, onClose }: { open: boolean; onClose: 
     setBusy(false);
     if (!r.ok) return setError(r.error);
     session.save.markSaved(r.data.lockVersion);
+    // saving a revision sized it: show those results
+    if (r.data.results) {
+      store.getState().setResults(r.data.results, doc);
+      session.setSizing({ engineVersion: r.data.results.engine, sizedAt: new Date().toISOString(), sizedBy: null, recomputed: null });
+    }
     session.setRevisions([r.data.revision, ...session.revisions]);
     setMessage("");
     setError(null);

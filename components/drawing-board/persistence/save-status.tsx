@@ -8,7 +8,7 @@ const tone = { saved: "text-ok", unsaved: "text-ink-soft", saving: "text-ink-sof
 /** Autosave state beside the revision bar; the error is in the tooltip and for screen readers. */
 export function SaveStatus() {
   const { save, readOnlyReason, canEdit } = useBoardSession();
-  if (!canEdit) return <span className="text-xs text-ink-faint" data-testid="save-status">{readOnlyReason === "issued" ? "Read-only (issued)" : "Read-only"}</span>;
+  if (!canEdit) return <span className="text-xs text-ink-faint" data-testid="save-status">{readOnlyReason === "issued" ? "Read-only (issued)" : readOnlyReason === "revision" ? "Read-only (saved revision)" : "Read-only"}</span>;
   return (
     <span role="status" aria-live="polite" title={save.error ?? undefined} data-testid="save-status"
       className={`inline-flex items-center gap-1 text-xs ${tone[save.status]}`}>

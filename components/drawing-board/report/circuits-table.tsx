@@ -10,13 +10,13 @@ import { designFlowWorking, type Working } from "./working";
 type Row = ModeResult["circuits"][number] & { flowM3h: number | null };
 
 /** Each load's circuit: its pressure drop, the index circuit, and the Kv its balancing valve needs. */
-export function CircuitsTable({ doc, results, mode, prefs, onShow }: { doc: Schematic; results: Results; mode: ModeResult; prefs: UnitPrefs; onShow: (w: Working) => void }) {
+export function CircuitsTable({ doc, results, mode, prefs, onShow }: { doc: Schematic; results: Results; mode: ModeResult; prefs: UnitPrefs; onShow?: (w: Working) => void }) {
   const rho = results.fluid.densityKgM3;
   const label = (id: string) => doc.parts.find((p) => p.id === id)?.label ?? id;
   const columns = useMemo<Columns<Row>>(() => [
     { id: "load", header: "Load", cell: ({ row }) => <span>{label(row.original.load)}{row.original.index && <span className="ml-2 rounded bg-copper-100 px-1.5 text-xs text-copper-700">index</span>}</span> },
     { id: "flow", header: `Design flow (${showFlow(0, prefs).unit})`, cell: ({ row }) =>
-      <Num text={showFlow(row.original.flowM3h, prefs).value} working={designFlowWorking(doc, results, row.original.load)} onShow={onShow} /> },
+      <Num text={showFlow(row.original.flowM3h, prefs).value} working={onShow ? designFlowWorking(doc, results, row.original.load) : null} onShow={onShow} /> },
     { id: "dp", header: `Circuit Δp (${showPressure(0, prefs).unit})`, cell: ({ row }) => <Num text={showPressure(row.original.pressureDropKpa, prefs, rho).value} /> },
     { id: "excess", header: `To burn (${showPressure(0, prefs).unit})`, cell: ({ row }) => <Num text={showPressure(row.original.excessKpa, prefs, rho).value} /> },
     { id: "kv", header: "Balancing Kv", cell: ({ row }) => <Num text={row.original.balancingKv === null ? "—" : row.original.balancingKv.toFixed(2)} /> },

@@ -1,18 +1,24 @@
 "use client";
 
 import { useMemo } from "react";
-import type { ModeResult, Results, Schematic } from "@/lib/schematic";
+import type { Results, Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
+import type { ViewPipe } from "../overlay/results-view";
 import { velocityBand } from "../overlay/velocity-bands";
 import { suggestedSizeChanges } from "./apply-suggested-sizes";
 import { DataTable, type Columns } from "./data-table";
 import { Num } from "./num";
 import { pipeDpWorking, type Working } from "./working";
 
-type Row = { pipe: Schematic["pipes"][number]; r: ModeResult["pipes"][number] | undefined; next: string | null };
+type Row = { pipe: Schematic["pipes"][number]; r: ViewPipe | undefined; next: string | null };
 
-/** Every pipe with its size, flow, velocity and pressure drop in the heating mode; Δp opens its working. */
-export function PipeSchedule({ doc, results, mode, prefs, onShow }: { doc: Schematic; results: Results; mode: ModeResult; prefs: UnitPrefs; onShow: (w: Working) => void }) {
+/**
+ * Every pipe with its size, flow, velocity and pressure drop in the results view shown;
+ * Δp opens its working where there is one (onShow), suggested sizes only in a design view.
+ */
+export function PipeSchedule({ doc, results, pipes, design, prefs, onShow }: {
+  doc: Schematic; results: Results; pipes: ViewPipe[]; design: boolean; prefs: UnitPrefs; onShow?: (w: Working) => void;
+}) {
   const rho = results.fluid.densityKgM3;
   const columns = useMemo<Columns<Row>>(() => [
     { id: "id", header: "Pipe", cell: ({ row }) => <span className="num">{row.original.pipe.id}</span> },
@@ -28,13 +34,14 @@ export function PipeSchedule({ doc, results, mode, prefs, onShow }: { doc: Schem
       return <Num text={v === null || v === undefined ? "—" : Math.abs(v).toFixed(2)} tone={band === "high" ? "fault" : undefined} />;
     } },
     { id: "dp", header: `Δp (${showPressure(0, prefs).unit})`, cell: ({ row }) =>
-      <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={pipeDpWorking(doc, results, row.original.pipe.id)} onShow={onShow} /> },
+      <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={onShow ? pipeDpWorking(doc, results, row.original.pipe.id) : null} onShow={onShow} /> },
     { id: "grad", header: "Pa/m", cell: ({ row }) => <Num text={row.original.r?.gradientPaPerM?.toFixed(0) ?? "—"} /> },
     { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{row.original.pipe.from} → {row.original.pipe.to}</span> },
   ], [doc, results, prefs, rho, onShow]);
   const data = useMemo(() => {
-    const next = new Map(suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]));
-    return doc.pipes.map((pipe) => ({ pipe, r: mode.pipes.find((p) => p.id === pipe.id), next: next.get(pipe.id) ?? null }));
-  }, [doc, results, mode]);
+    const next = new Map(design ? suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]) : []);
+    const byId = new Map(pipes.map((p) => [p.id, p]));
+    return doc.pipes.map((pipe) => ({ pipe, r: byId.get(pipe.id), next: next.get(pipe.id) ?? null }));
+  }, [doc, results, pipes, design]);
   return <DataTable columns={columns} data={data} caption="Pipe schedule" testId="pipe-schedule" />;
 }

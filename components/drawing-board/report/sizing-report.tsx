@@ -2,7 +2,9 @@
 
 import { useCallback, useState } from "react";
 import { useUnits } from "@/components/units/units-context";
-import { modeOf } from "../overlay/results-mode";
+import { emittersInView, pipesInView } from "../overlay/results-view";
+import { ViewSummary } from "../overlay/view-summary";
+import { ViewSwitch } from "../overlay/view-switch";
 import { useBoard } from "../store";
 import { ApplySizesButton } from "./apply-sizes-button";
 import { CircuitsTable } from "./circuits-table";
@@ -13,29 +15,47 @@ import { PumpDuty } from "./pump-duty";
 import { WorkingDialog } from "./working-dialog";
 import type { Working } from "./working";
 
-/** The sizing report tab: every table from the last "Size it", numbers with working one click away. */
+/**
+ * The sizing report tab: every table for the results kept or last sized, in the mode or
+ * scenario chosen (the same switch as the drawing's), numbers with working one click away.
+ */
 export function SizingReport() {
   const results = useBoard((s) => s.results);
   const stale = useBoard((s) => s.resultsStale);
+  const view = useBoard((s) => s.resultsView);
+  const canSize = useBoard((s) => !s.readOnly);
   const doc = useBoard((s) => s.doc);
   const { prefs } = useUnits();
   const [working, setWorking] = useState<Working | null>(null);
   const onShow = useCallback((w: Working) => setWorking(w), []);
-  const heating = modeOf(results);
-
-  if (!results || !heating) {
-    return <p className="p-6 text-sm text-ink-soft" data-testid="sizing-report">Press <span className="font-medium text-ink">Size it</span> to fill in the report.</p>;
+  if (!results || results.modes.length === 0) {
+    return (
+      <p className="p-6 text-sm text-ink-soft" data-testid="sizing-report">
+        {canSize ? <>Press <span className="font-medium text-ink">Size it</span> to fill in the report.</> : "No sizing is kept for this drawing yet."}
+      </p>
+    );
   }
+  const mode = results.modes.find((m) => m.mode === view) ?? null;
+  // "show working" explains the heating design numbers (report/working.ts)
+  const showWorking = view === "heating" ? onShow : undefined;
+  const emitters = emittersInView(results, view);
   return (
-    <div className="space-y-6 p-4" data-testid="sizing-report">
+    <div className="space-y-6 p-4" data-testid="sizing-report" data-view={view}>
+      <div className="flex flex-wrap items-center gap-x-4 gap-y-1 rounded-md border border-ink/10 bg-white px-3 py-2">
+        <ViewSwitch id="results-view-report" />
+        <ViewSummary />
+      </div>
       {stale && <p role="status" className="rounded bg-warn/10 px-3 py-2 text-sm text-warn">The drawing changed since this report was computed — size it again.</p>}
-      <Section title="Pipe schedule" aside={<ApplySizesButton />}>
-        <PipeSchedule doc={doc} results={results} mode={heating} prefs={prefs} onShow={onShow} />
+      <Section title="Pipe schedule" aside={mode ? <ApplySizesButton /> : null}>
+        <PipeSchedule doc={doc} results={results} pipes={pipesInView(results, view)} design={mode !== null} prefs={prefs} onShow={showWorking} />
       </Section>
-      <Section title="Circuits"><CircuitsTable doc={doc} results={results} mode={heating} prefs={prefs} onShow={onShow} /></Section>
+      {mode && <Section title="Circuits"><CircuitsTable doc={doc} results={results} mode={mode} prefs={prefs} onShow={showWorking} /></Section>}
       <Section title="Pump duty"><PumpDuty doc={doc} results={results} modes={results.modes} prefs={prefs} /></Section>
       <Section title="Bypass, vessel, volumes and hot water"><PlantSummary doc={doc} results={results} prefs={prefs} onShow={onShow} /></Section>
-      <Section title="Emitters"><EmittersTable doc={doc} results={results} onShow={onShow} /></Section>
+      <Section title="Emitters">
+        {emitters.length > 0 ? <EmittersTable doc={doc} results={results} rows={emitters} prefs={prefs} onShow={showWorking} />
+          : <p className="text-sm text-ink-soft">No emitters are served in this mode.</p>}
+      </Section>
       <p className="border-t border-ink/10 pt-3 text-xs text-ink-faint">
         These results are design aids to be checked by a competent person. Follow local codes, manufacturers&apos; instructions and
         licensed practice; mind stored hot water and legionella control, pressure testing, and isolation before work. Engine {results.engine}.

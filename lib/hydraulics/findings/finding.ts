@@ -11,15 +11,36 @@ export function finding(severity: Severity, code: string, message: string, refs:
   return { severity, code, message, refs: [...refs] };
 }
 
-/** Collects findings; one collector per calculation (no module state). */
+/** What a finding was found in: a design mode, or a simulated scenario (with its mode). */
+export type FindingContext = Pick<Finding, "mode" | "scenario">;
+
+/**
+ * Collects findings; one collector per calculation (no module state). While
+ * `within` runs, every finding added is tagged with that mode or scenario, so
+ * the board can show the drawing in the state a finding belongs to.
+ */
 export class Findings {
   readonly list: Finding[] = [];
   private seen = new Set<string>();
+  private context: FindingContext = {};
+  within<T>(context: FindingContext, fn: () => T): T {
+    const outer = this.context;
+    this.context = context;
+    try {
+      return fn();
+    } finally {
+      this.context = outer;
+    }
+  }
   add(severity: Severity, code: string, message: string, refs: readonly string[] = []): void {
-    const key = `${code}|${refs.join(",")}|${message}`;
+    const { mode, scenario } = this.context;
+    const key = `${code}|${refs.join(",")}|${message}|${mode ?? ""}|${scenario ?? ""}`;
     if (this.seen.has(key)) return;
     this.seen.add(key);
-    this.list.push(finding(severity, code, message, refs));
+    const f = finding(severity, code, message, refs);
+    if (mode) f.mode = mode;
+    if (scenario !== undefined) f.scenario = scenario;
+    this.list.push(f);
   }
   error(code: string, message: string, refs: readonly string[] = []) {
     this.add("error", code, message, refs);

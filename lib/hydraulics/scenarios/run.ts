@@ -45,10 +45,13 @@ export function scenarioResult(ctx: EngineContext, spec: ScenarioSpec, sim: Simu
   model.links.forEach((l, k) => {
     if (l.role === "heat-source") sourceFlow = (sourceFlow ?? 0) + Math.abs(sim.q[k]!);
   });
-  const pipes = doc.pipes.map((p) => {
+  const pipes = doc.pipes.map((p, i) => {
     const k = model.linkOfPipe.get(p.id)!;
     const l = model.links[k]!;
-    return { id: p.id, flowM3h: fin(sim.q[k]), pressureDropKpa: fin(sim.head[l.from]! - sim.head[l.to]!) };
+    const d = ctx.pipeGeom[i]?.innerDiameterM;
+    // mean velocity v = Q/A, A = πD²/4 (continuity; White, Fluid Mechanics, eq. 3.7), m/s from m³/h
+    const v = d ? sim.q[k]! / 3600 / ((Math.PI * d * d) / 4) : null;
+    return { id: p.id, flowM3h: fin(sim.q[k]), velocityMps: fin(v), pressureDropKpa: fin(sim.head[l.from]! - sim.head[l.to]!) };
   });
   const emitters: ScenarioResult["emitters"] = [];
   model.links.forEach((l, k) => {
@@ -90,9 +93,11 @@ export function runScenarios(
   const results: ScenarioResult[] = [];
   const sims = new Map<string, Simulation>();
   for (const spec of specs) {
-    const sim = simulate(ctx, scenarioState(ctx, spec, openings), warm);
-    sims.set(spec.name, sim);
-    results.push(scenarioResult(ctx, spec, sim));
+    ctx.findings.within({ mode: spec.mode, scenario: spec.name }, () => {
+      const sim = simulate(ctx, scenarioState(ctx, spec, openings), warm);
+      sims.set(spec.name, sim);
+      results.push(scenarioResult(ctx, spec, sim));
+    });
   }
   return { results, sims };
 }
