@@ -8,11 +8,11 @@ import "@xyflow/react/dist/style.css";
 import "./board.css";
 import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } from "react";
 import {
-  applyNodeChanges, Background, BackgroundVariant, ConnectionMode, Controls, MiniMap, ReactFlow, useReactFlow, useStore,
+  applyNodeChanges, Background, BackgroundVariant, ConnectionMode, ControlButton, Controls, MiniMap, ReactFlow, useReactFlow, useStore,
   type Connection, type Edge, type IsValidConnection, type OnEdgesChange, type OnNodesChange,
 } from "@xyflow/react";
 import { partTypes, type PartType } from "@/lib/schematic";
-import { connectionProblem } from "./commands";
+import { connectionProblem, inlinePorts } from "./commands";
 import { PartNodeView, type PartNode } from "./nodes/part-node";
 import { PipeEdgeView, type PipeEdge } from "./pipes/pipe-edge";
 import { CanvasHint } from "./canvas-hint";
@@ -39,9 +39,21 @@ function toggled(ids: string[], changes: { id: string; selected?: boolean }[]): 
 
 const refOf = (node: string, handle: string | null | undefined) => `${node}.${handle ?? ""}`;
 
+/** The pipe drawn under a screen point, if any (its edge's wide interaction stroke counts). */
+function pipeUnder(x: number, y: number): string | null {
+  for (const el of document.elementsFromPoint(x, y)) {
+    const edge = el.closest(".react-flow__edge");
+    if (edge) return edge.getAttribute("data-id");
+  }
+  return null;
+}
+
 export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOpen: (open: boolean) => void }) {
   const store = useBoardStore();
   const readOnly = useBoard((s) => s.readOnly);
+  const tagMode = useBoard((s) => s.tagMode);
+  // the minimap sits top right, away from the parts bin's drops, and can be put away
+  const [showMap, setShowMap] = useState(true);
   const derived = usePartNodes();
   const edges = usePipeEdges();
   const [nodes, setNodes] = useState<PartNode[]>(derived);
@@ -123,7 +135,11 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
       if (!partTypes.includes(type)) return;
       e.preventDefault();
       const p = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
-      store.getState().dispatch("add-part", { type, x: Math.round(p.x / GRID) * GRID, y: Math.round(p.y / GRID) * GRID });
+      const at = { type, x: Math.round(p.x / GRID) * GRID, y: Math.round(p.y / GRID) * GRID };
+      // a tee or a valve dropped on a pipe goes into it: the pipe splits in two through the part
+      const pipeId = inlinePorts(type) ? pipeUnder(e.clientX, e.clientY) : null;
+      if (pipeId) store.getState().dispatch("insert-on-pipe", { ...at, pipeId });
+      else store.getState().dispatch("add-part", at);
     },
     [flow, store],
   );
@@ -187,8 +203,18 @@ export function Canvas({ helpOpen, setHelpOpen }: { helpOpen: boolean; setHelpOp
         connectionLineStyle={{ stroke: "#b4632b", strokeWidth: 2 }}
       >
         {!large && <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#d9d1c4" />}
-        {!far && <MiniMap pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />}
-        <Controls showInteractive={false} />
+        {!far && showMap && <MiniMap position="top-right" pannable zoomable nodeColor="#cdbfae" nodeStrokeColor="#8a8378" maskColor="rgba(241,236,227,0.7)" className="!bg-white" />}
+        <Controls showInteractive={false}>
+          <ControlButton onClick={() => setShowMap((m) => !m)} title={showMap ? "Hide the minimap" : "Show the minimap"}
+            aria-label={showMap ? "Hide the minimap" : "Show the minimap"} aria-pressed={showMap} data-testid="toggle-minimap">
+            <span className="text-[10px] font-semibold">map</span>
+          </ControlButton>
+          <ControlButton onClick={() => store.getState().setTagMode(tagMode === "label" ? "id" : "label")}
+            title={tagMode === "label" ? "Show part ids on the drawing" : "Show part labels on the drawing"}
+            aria-label={tagMode === "label" ? "Show part ids" : "Show part labels"} data-testid="toggle-tags">
+            <span className="text-[10px] font-semibold">{tagMode === "label" ? "id" : "Aa"}</span>
+          </ControlButton>
+        </Controls>
         {far && <OverviewLayer nodes={nodes} edges={edges} />}
       </ReactFlow>
       <CanvasHint />

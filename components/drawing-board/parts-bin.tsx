@@ -1,15 +1,16 @@
 "use client";
 /**
  * The parts bin: every part type, grouped as in the schematic registry, with a
- * search box. Drag a part onto the canvas, or click it to drop it at the
- * centre of the view.
+ * search box. Drag a part onto the canvas (onto a pipe, a tee or valve goes
+ * into it), or click it to place it in the free space nearest the view's centre.
  */
 import { useMemo, useState, type DragEvent } from "react";
 import { useReactFlow, useStore } from "@xyflow/react";
 import { partGroups, partRegistry, partTypes, type PartType } from "@/lib/schematic";
 import { GRID, PART_MIME } from "./canvas";
 import { layoutOf, symbols } from "./parts";
-import { useBoard } from "./store";
+import { freeSpotNear } from "./commands";
+import { useBoard, useBoardStore } from "./store";
 
 function Thumb({ type }: { type: PartType }) {
   const l = layoutOf(type);
@@ -24,6 +25,7 @@ function Thumb({ type }: { type: PartType }) {
 export function PartsBin() {
   const [query, setQuery] = useState("");
   const dispatch = useBoard((s) => s.dispatch);
+  const store = useBoardStore();
   const readOnly = useBoard((s) => s.readOnly);
   const flow = useReactFlow();
   const size = useStore((s) => ({ w: s.width, h: s.height }), (a, b) => a.w === b.w && a.h === b.h);
@@ -37,7 +39,7 @@ export function PartsBin() {
     const { x, y, zoom } = flow.getViewport();
     const cx = (size.w / 2 - x) / zoom;
     const cy = (size.h / 2 - y) / zoom;
-    dispatch("add-part", { type, x: Math.round(cx / GRID) * GRID, y: Math.round(cy / GRID) * GRID });
+    dispatch("add-part", { type, ...freeSpotNear(store.getState().doc, type, cx, cy, GRID) });
   };
   const onDragStart = (e: DragEvent, type: PartType) => {
     e.dataTransfer.setData(PART_MIME, type);

@@ -41,6 +41,7 @@ const projectRoute = () => import("@/app/api/v1/projects/route");
 const projectItemRoute = () => import("@/app/api/v1/projects/[projectId]/route");
 const schematicRoute = () => import("@/app/api/v1/schematics/[schematicId]/route");
 const calculateRoute = () => import("@/app/api/v1/calculate/route");
+const revisionRoute = () => import("@/app/api/v1/revisions/[revisionId]/route");
 const teamActions = () => import("@/components/team/actions");
 const authActions = () => import("@/components/auth/actions");
 const projectActions = () => import("@/components/projects/actions");
@@ -144,6 +145,15 @@ export const rows: Row[] = [
     call: async (f, cookie) => callRoute((await schematicRoute()).PUT as never, {
       method: "PUT", path: `/api/v1/schematics/${f.practiceSchematicId}`, cookie, params: { schematicId: f.practiceSchematicId }, body: { lockVersion: f.lockVersion, doc: f.doc },
     }),
+  },
+
+  {
+    name: "GET /api/v1/revisions/[id] draft revision", kind: "route", expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => callRoute((await revisionRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "GET /api/v1/revisions/[id] issued revision", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await revisionRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}`, cookie, params: { revisionId: f.revisionId } }),
   },
 
   // ——— drawing board server actions (app/(app)/projects/[projectId]/…/actions.ts) ———

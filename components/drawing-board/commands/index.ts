@@ -8,6 +8,7 @@ import { connectPipe } from "./connect-pipe";
 import { copy } from "./copy";
 import { deleteSelection } from "./delete-selection";
 import { duplicateSelection } from "./duplicate-selection";
+import { insertOnPipe } from "./insert-on-pipe";
 import { moveParts } from "./move-parts";
 import { flipSelection, rotateSelection } from "./orient-selection";
 import { paste } from "./paste";
@@ -22,6 +23,7 @@ import type { Command } from "./types";
 
 export const commands = {
   "add-part": addPart,
+  "insert-on-pipe": insertOnPipe,
   "move-parts": moveParts,
   "delete-selection": deleteSelection,
   "duplicate-selection": duplicateSelection,
@@ -43,5 +45,7 @@ export const commands = {
 export type CommandId = keyof typeof commands;
 export type CommandArgs<K extends CommandId> = (typeof commands)[K] extends Command<infer A> ? A : never;
 export { connectionProblem } from "./connection";
+export { freeSpotNear } from "./free-spot";
+export { inlinePorts } from "./insert-on-pipe";
 export { parseClipboard } from "./paste";
 export type { Command, Clipboard, Selection, BoardState, DispatchResult } from "./types";
