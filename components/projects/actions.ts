@@ -2,19 +2,40 @@
 
 import { z } from "zod";
 import { requireProjectRole } from "@/lib/auth/authorize";
+import { getProjectHead } from "@/db/queries/project-admin";
 import { createSchematic } from "@/db/queries/schematics";
+import { copyDemoProject, createProject, updateProject } from "@/lib/projects/admin";
+import { designFromDefaults, readDesignDefaults } from "@/lib/projects/design-defaults";
 import { refusal, runChecked } from "@/lib/persistence/outcome";
 import { makeVariant } from "@/lib/persistence/variants";
 import { parseSchematic } from "@/lib/schematic";
 
-// Project page actions: a new, empty team schematic (designers, owners) and a private
-// practice copy of a team schematic (trainees; designers get a team variant).
+// Projects and their schematics: a new project (anyone in a firm), a copy of the demo project,
+// changing or archiving a project (owners, designers); a new, empty team schematic that starts
+// from the project's design defaults (designers, owners) and a private practice copy of a team
+// schematic (trainees; designers get a team variant).
+
+export async function createProjectAction(input: unknown) {
+  return runChecked(() => createProject(input));
+}
+
+export async function copyDemoProjectAction() {
+  return runChecked(() => copyDemoProject());
+}
+
+export async function updateProjectAction(input: { projectId: string; change: unknown }) {
+  return runChecked(async () => {
+    const i = z.object({ projectId: z.uuid("must be a project id"), change: z.unknown() }).parse(input);
+    return updateProject(i.projectId, i.change);
+  });
+}
 
 export async function createSchematicAction(input: { projectId: string; name: string }) {
   return runChecked(async () => {
     const i = z.object({ projectId: z.uuid(), name: z.string().trim().min(1, "give the schematic a name").max(160) }).parse(input);
     const { user } = await requireProjectRole(i.projectId, "schematic.edit");
-    const blank = parseSchematic({ format: "loopwright/schematic", version: 1, name: i.name });
+    const defaults = readDesignDefaults((await getProjectHead(i.projectId))?.design);
+    const blank = parseSchematic({ format: "loopwright/schematic", version: 1, name: i.name, design: designFromDefaults(defaults) });
     if (!blank.ok) throw new Error("the blank schematic does not parse"); // a bug, not user input
     const r = await createSchematic({ projectId: i.projectId, name: i.name, doc: blank.doc, userId: user.id, kind: "team" });
     return r.ok ? { id: r.schematic.id } : refusal(r);

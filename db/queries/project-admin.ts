@@ -1,9 +1,22 @@
 import "server-only";
 import { db } from "@/lib/db";
 
-// Creating and deleting projects (the list is in ./projects.ts).
+// Creating, changing and deleting projects (the list is in ./projects.ts).
 
-export type NewProject = { name: string; client: string; site: string };
+export type NewProject = { name: string; client: string; site: string; design: Record<string, unknown> };
+export type ProjectChange = { name?: string; client?: string; site?: string; design?: Record<string, unknown>; archived?: boolean };
+
+export interface ProjectHead {
+  id: string;
+  name: string;
+  client: string;
+  site: string;
+  firm: string;
+  organisationId: string;
+  /** Design defaults as stored (lib/projects/design-defaults reads them). */
+  design: unknown;
+  archivedAt: string | null;
+}
 
 /** The firm a new project of this user belongs to: the first one they joined. */
 export async function firmOfUser(userId: string): Promise<string | null> {
@@ -15,19 +28,35 @@ export async function projectNameTaken(organisationId: string, name: string): Pr
   return !!(await db()("projects").where({ organisation_id: organisationId }).whereRaw("lower(name) = lower(?)", [name]).first("id"));
 }
 
-export async function insertProject(organisationId: string, userId: string, p: NewProject): Promise<{ id: string; name: string }> {
+/** The project, its creator as owner, and any starting schematics (drafts), in one transaction. */
+export async function insertProject(organisationId: string, userId: string, p: NewProject, schematics: { name: string; doc: unknown }[] = []):
+  Promise<{ id: string; name: string }> {
   return db().transaction(async (trx) => {
-    const [row] = await trx("projects").insert({ organisation_id: organisationId, name: p.name, client: p.client, site: p.site, created_by: userId })
-      .returning(["id", "name"]);
+    const [row] = await trx("projects").insert({ organisation_id: organisationId, name: p.name, client: p.client, site: p.site,
+      design_conditions: JSON.stringify(p.design), created_by: userId }).returning(["id", "name"]);
     await trx("project_members").insert({ project_id: row.id, user_id: userId, role: "owner" });
+    for (const s of schematics) {
+      await trx("schematics").insert({ project_id: row.id, name: s.name, kind: "team", owner_id: userId, draft: JSON.stringify(s.doc), updated_by: userId });
+    }
     return { id: row.id, name: row.name };
   });
 }
 
-export async function getProjectHead(projectId: string): Promise<{ id: string; name: string; client: string; site: string; firm: string } | null> {
+export async function updateProjectRow(projectId: string, c: ProjectChange): Promise<void> {
+  const row: Record<string, unknown> = { updated_at: db().fn.now() };
+  if (c.name !== undefined) row.name = c.name;
+  if (c.client !== undefined) row.client = c.client;
+  if (c.site !== undefined) row.site = c.site;
+  if (c.design !== undefined) row.design_conditions = JSON.stringify(c.design);
+  if (c.archived !== undefined) row.archived_at = c.archived ? db().fn.now() : null;
+  await db()("projects").where({ id: projectId }).update(row);
+}
+
+export async function getProjectHead(projectId: string): Promise<ProjectHead | null> {
   const row = await db()("projects as p").join("organisations as o", "o.id", "p.organisation_id")
-    .where("p.id", projectId).first("p.id", "p.name", "p.client", "p.site", "o.name as firm");
-  return row ?? null;
+    .where("p.id", projectId).first("p.id", "p.name", "p.client", "p.site", "o.name as firm", "p.organisation_id", "p.design_conditions", "p.archived_at");
+  return row ? { id: row.id, name: row.name, client: row.client, site: row.site, firm: row.firm, organisationId: row.organisation_id,
+    design: row.design_conditions, archivedAt: row.archived_at ? new Date(row.archived_at).toISOString() : null } : null;
 }
 
 export async function deleteProjectRow(projectId: string): Promise<number> {

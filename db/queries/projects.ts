@@ -10,6 +10,7 @@ export type ProjectSummary = {
   schematicCount: number;
   latestStatus: string | null;
   updatedAt: string;
+  archived: boolean;
 };
 
 // Projects the user is a member of, with their role and the newest revision's status.
@@ -19,7 +20,7 @@ export async function listProjectsForUser(userId: string): Promise<ProjectSummar
       this.on("m.project_id", "p.id").andOn("m.user_id", db().raw("?", [userId]));
     })
     .select(
-      "p.id", "p.name", "p.client", "p.site", "p.updated_at", "m.role",
+      "p.id", "p.name", "p.client", "p.site", "p.updated_at", "p.archived_at", "m.role",
       db().raw("(select count(*)::int from schematics s where s.project_id = p.id and s.kind = 'team') as schematic_count"),
       db().raw(`(select r.status from schematic_revisions r join schematics s on s.id = r.schematic_id
                  where s.project_id = p.id order by r.created_at desc limit 1) as latest_status`),
@@ -29,6 +30,6 @@ export async function listProjectsForUser(userId: string): Promise<ProjectSummar
   return rows.map((r) => ({
     id: r.id, name: r.name, client: r.client, site: r.site, role: r.role,
     schematicCount: r.schematic_count, latestStatus: r.latest_status ?? null,
-    updatedAt: new Date(r.updated_at).toISOString(),
+    updatedAt: new Date(r.updated_at).toISOString(), archived: r.archived_at !== null,
   }));
 }

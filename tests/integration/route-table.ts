@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { db } from "@/lib/db";
 import { callAction, callRoute, cookieFor, form, type Outcome, type Who } from "./helpers/call";
 import { FIXTURE_PREFIX, type Fixture } from "./helpers/fixture";
 
@@ -79,6 +80,30 @@ export const rows: Row[] = [
   {
     name: "DELETE /api/v1/projects/[projectId]", kind: "route", expect: allow(["owner"], 204),
     call: async (f, cookie) => callRoute((await projectItemRoute()).DELETE as never, { method: "DELETE", path: `/api/v1/projects/${f.projectId}`, cookie, params: { projectId: f.projectId } }),
+  },
+
+  {
+    name: "PATCH /api/v1/projects/[projectId] (rename)", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await projectItemRoute()).PATCH as never, {
+      method: "PATCH", path: `/api/v1/projects/${f.projectId}`, cookie, params: { projectId: f.projectId }, body: { name: `${f.projectName} renamed` },
+    }),
+  },
+  {
+    name: "action updateProjectAction (archive)", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await projectActions()).updateProjectAction({ projectId: f.projectId, change: { archived: true } }), cookie),
+  },
+  {
+    name: "action createProjectAction", kind: "action", expect: { ...allow(members), anon: 401 },
+    call: async (_f, cookie) => callAction(async () => (await projectActions()).createProjectAction({ name: `${FIXTURE_PREFIX} new ${randomUUID().slice(0, 8)}` }), cookie),
+  },
+  {
+    // a copy lands in the caller's firm (Fernbank for the demo people); removed again so rows do not pile up
+    name: "action copyDemoProjectAction", kind: "action", expect: allow(members),
+    call: async (_f, cookie) => {
+      const out = await callAction(async () => (await projectActions()).copyDemoProjectAction(), cookie);
+      if (out.status === 200) await db()("projects").where({ id: out.body.data.id }).delete();
+      return out;
+    },
   },
 
   // ——— team (server actions) ———

@@ -7,6 +7,8 @@ import { NotAllowed } from "@/components/ui/not-allowed";
 import { getProjectHead } from "@/db/queries/project-admin";
 import { listProjectSchematics } from "@/db/queries/schematics";
 import { NewSchematicForm } from "@/components/projects/new-schematic-form";
+import { ProjectSettings } from "@/components/projects/project-settings";
+import { readDesignDefaults } from "@/lib/projects/design-defaults";
 import { SchematicCard } from "@/components/projects/schematic-card";
 
 export const metadata: Metadata = { title: "Project" };
@@ -25,6 +27,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const variantsOf = (id: string) => schematics.filter((s) => s.variantOf === id);
   const canCreate = can(role, "schematic.edit");
   const canPractice = role === "trainee" ? can(role, "variant.practice") : canCreate;
+  const design = readDesignDefaults(project.design);
 
   return (
     <main className="mx-auto max-w-5xl px-4 py-8">
@@ -39,6 +42,21 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <Link href={`/projects/${projectId}/team`} className="text-copper-600 hover:underline">Team</Link>
         </p>
       </div>
+      <div className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-soft" data-testid="project-design">
+        <span>
+          Design: flow <span className="num">{design.flowTemperatureC} °C</span> / return <span className="num">{design.returnTemperatureC} °C</span>,
+          outdoor <span className="num">{design.outdoorC} °C</span>{design.heatSource && <> · {design.heatSource}</>}
+        </span>
+        {can(role, "project.update") && (
+          <ProjectSettings projectId={projectId} archived={project.archivedAt !== null}
+            initial={{ name: project.name, client: project.client, site: project.site, design }} />
+        )}
+      </div>
+      {project.archivedAt && (
+        <p className="mt-3 rounded-md bg-paper-dark px-3 py-2 text-sm text-ink-soft" data-testid="archived-banner">
+          This project is archived: it is kept as it is and listed under Archived on the projects page.
+        </p>
+      )}
 
       <section className="mt-8" aria-labelledby="schematics-h">
         <div className="flex flex-wrap items-center justify-between gap-3">
