@@ -9,9 +9,8 @@
  * (Canvas, onPaneClick).
  */
 import { useEffect, useMemo, useRef } from "react";
-import { getSmoothStepPath, Position, useStoreApi } from "@xyflow/react";
-import { layoutOf } from "./parts";
-import { orientedLayout } from "./parts/orientation";
+import { getSmoothStepPath, useStoreApi } from "@xyflow/react";
+import { portPoint } from "./parts/port-point";
 import { useBoard } from "./store";
 import type { PartNode } from "./nodes/part-node";
 import { PIPE_STEP, pipeColour, type PipeEdge } from "./pipes/pipe-edge";
@@ -28,29 +27,17 @@ export function boxOf(n: PartNode): { x: number; y: number; w: number; h: number
   return { x: n.position.x - w / 2 + 0.15 * w, y: n.position.y - h / 2 + 0.15 * h, w: 0.7 * w, h: 0.7 * h };
 }
 
-/** Where a pipe meets a port, from the part's own layout (as its handles are placed). */
-function portPoint(node: PartNode | undefined, port: string | null | undefined) {
-  if (!node || !port) return null;
-  const layout = orientedLayout(layoutOf(node.data.part.type, node.data.part.props), node.data.orientation);
-  const spot = layout.ports[port];
-  if (!spot) return null;
-  const left = node.position.x - layout.w / 2;
-  const top = node.position.y - layout.h / 2;
-  switch (spot.side) {
-    case "left": return { x: left, y: top + spot.at * layout.h, position: Position.Left };
-    case "right": return { x: left + layout.w, y: top + spot.at * layout.h, position: Position.Right };
-    case "top": return { x: left + spot.at * layout.w, y: top, position: Position.Top };
-    default: return { x: left + spot.at * layout.w, y: top + layout.h, position: Position.Bottom };
-  }
-}
+/** Where a pipe meets a port of a drawn node (parts/port-point.ts). */
+const nodePort = (node: PartNode | undefined, port: string | null | undefined) =>
+  node ? portPoint(node.data.part, node.data.orientation, node.position, port) : null;
 
 /** The pipes as one path per colour, the same orthogonal runs as pipe-edge.tsx. */
 function pipePaths(edges: PipeEdge[], nodes: PartNode[]): Map<string, Path2D> {
   const byId = new Map(nodes.map((n) => [n.id, n]));
   const out = new Map<string, Path2D>();
   for (const e of edges) {
-    const a = portPoint(byId.get(e.source), e.sourceHandle);
-    const b = portPoint(byId.get(e.target), e.targetHandle);
+    const a = nodePort(byId.get(e.source), e.sourceHandle);
+    const b = nodePort(byId.get(e.target), e.targetHandle);
     if (!a || !b || !e.data) continue;
     const [d] = getSmoothStepPath({ sourceX: a.x, sourceY: a.y, targetX: b.x, targetY: b.y, sourcePosition: a.position, targetPosition: b.position, ...PIPE_STEP });
     const colour = e.selected ? SELECTED : pipeColour(e.data);

@@ -2,6 +2,7 @@
 
 import { UnitsPicker } from "@/components/units/units-picker";
 import { SizeItButton } from "../overlay/size-it-button";
+import { ExportMenu } from "./export-menu";
 import { RevisionStatusBar } from "./revision-status-bar";
 
 /** board-2's part of the board's top bar (DrawingBoard toolbarSlot). */
@@ -10,6 +11,7 @@ export function BoardToolbar() {
     <>
       <RevisionStatusBar />
       <UnitsPicker />
+      <ExportMenu />
       <SizeItButton />
     </>
   );
