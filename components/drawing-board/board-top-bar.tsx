@@ -20,7 +20,7 @@ export function BoardTopBar(props: {
   const dispatch = useBoard((s) => s.dispatch);
   return (
     <div className="flex flex-wrap items-center gap-1 border-b border-ink/10 bg-white px-2 py-1.5">
-      <button type="button" className={`${btn} md:hidden`} onClick={props.onToggleBin} aria-label="Parts bin">Parts</button>
+      {!readOnly && <button type="button" className={`${btn} md:hidden`} onClick={props.onToggleBin} aria-label="Parts bin">Parts</button>}
       <h1 className="mr-2 max-w-[40vw] truncate text-sm font-semibold text-ink" title={name}>{name || "Untitled schematic"}</h1>
       {readOnly && <span className="rounded bg-paper-dark px-1.5 py-0.5 text-xs text-ink-soft">read-only</span>}
       <button type="button" className={btn} disabled={!canUndo} onClick={() => dispatch("undo")} title="Undo (Ctrl/⌘+Z)" aria-label="Undo">↶ Undo</button>

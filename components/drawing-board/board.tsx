@@ -13,7 +13,7 @@ import { BoardTopBar } from "./board-top-bar";
 import { Canvas } from "./canvas";
 import { DetailsPanel } from "./details/details-panel";
 import { PartsBin } from "./parts-bin";
-import { BoardContext, BoardStoreProvider, type BoardStore } from "./store";
+import { BoardContext, BoardStoreProvider, useBoard, type BoardStore } from "./store";
 
 export interface DrawingBoardProps {
   initialDoc?: Schematic;
@@ -58,6 +58,8 @@ const drawer = (open: boolean, side: "left" | "right") =>
   `${open ? "absolute inset-y-0 z-20 flex w-72 shadow-xl" : "hidden"} ${side === "left" ? "left-0 border-r" : "right-0 border-l"} flex-col border-ink/10 bg-paper md:static md:flex md:shadow-none`;
 
 function Shell(props: DrawingBoardProps) {
+  // the drawing first: a board that cannot be edited needs no parts bin
+  const readOnly = useBoard((s) => s.readOnly);
   const [help, setHelp] = useState(false);
   const [bin, setBin] = useState(false);
   const [details, setDetails] = useState(false);
@@ -70,9 +72,11 @@ function Shell(props: DrawingBoardProps) {
           onToggleDetails={() => setDetails((d) => !d)} tab={tab} onTab={props.reportSlot ? setTab : undefined} />
         {props.barSlot}
         <div className={`relative min-h-0 flex-1 ${tab === "drawing" ? "flex" : "hidden"}`}>
-          <aside className={`${drawer(bin, "left")} md:w-56 md:shrink-0`} aria-label="Parts bin">
-            <PartsBin />
-          </aside>
+          {!readOnly && (
+            <aside className={`${drawer(bin, "left")} md:w-56 md:shrink-0`} aria-label="Parts bin">
+              <PartsBin />
+            </aside>
+          )}
           <main className="relative min-w-0 flex-1">
             <Canvas helpOpen={help} setHelpOpen={setHelp} />
             {props.canvasSlot}

@@ -29,6 +29,9 @@ describe("drawing sheet (print, SVG and PNG export)", () => {
     expect(svg("label")).toContain(">Lounge<");
     expect(svg("id")).toContain(">rad-lounge<");
     expect(svg("id")).not.toContain(">Lounge<");
+    // tees are named by id only: their labels would crowd the runs
+    expect(svg("label")).not.toContain(">Tee, Lounge flow<");
+    expect(svg("id")).toContain(">z1-tf1<");
   });
   it("keeps the whole drawing inside the sheet", () => {
     const out = svg();

@@ -7,10 +7,11 @@
  * serialises it for SVG, PNG and print, and a test renders it on the server.
  */
 import { getSmoothStepPath } from "@xyflow/react";
-import { partRegistry, splitPortRef, type Part, type Schematic } from "@/lib/schematic";
+import { splitPortRef, type Part, type Schematic } from "@/lib/schematic";
 import { layoutOf, symbols } from "../parts";
 import { autoOrient, explicitOrientation, IDENTITY, orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
 import { portPoint } from "../parts/port-point";
+import { partTag } from "../parts/tag";
 import { pipeSides } from "../pipes/flow-side";
 import { PIPE_STEP, pipeCaption, sideColour } from "../pipes/pipe-edge";
 
@@ -88,11 +89,11 @@ export function DrawingSheet({ doc, title, tags }: { doc: Schematic; title: Titl
         const o = orient(p);
         const l = orientedLayout(base, o);
         const Symbol = symbols[p.type];
-        const tag = tags === "id" ? p.id : p.label || `${partRegistry[p.type].label} ${p.id}`;
+        const tag = partTag(p, tags);
         return (
           <g key={p.id} transform={`translate(${p.x - l.w / 2} ${p.y - l.h / 2})`} data-part={p.id}>
             <g transform={svgTransform(base, o)}><Symbol w={base.w} h={base.h} props={p.props as Record<string, unknown>} /></g>
-            <text x={l.w / 2} y={l.h + 11} textAnchor="middle" fontFamily={FONT} fontSize={9} fill={INK}>{tag}</text>
+            {tag && <text x={l.w / 2} y={l.h + 11} textAnchor="middle" fontFamily={FONT} fontSize={9} fill={INK}>{tag}</text>}
           </g>
         );
       })}

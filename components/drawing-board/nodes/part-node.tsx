@@ -13,6 +13,7 @@ import { partBadgesMemo } from "../overlay/part-badges";
 import { useBoard } from "../store";
 import { layoutOf, symbols } from "../parts";
 import { orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
+import { partTag } from "../parts/tag";
 import type { PortSpot } from "../parts/layout";
 
 export type PartNodeData = { part: Part; orientation: Orientation; readOnly: boolean };
@@ -41,10 +42,11 @@ function PortHandle({ name, spot, readOnly, labelled }: { name: string; spot: Po
   );
 }
 
-/** The part's label (or its id, by the board's labels/ids switch) on the side with no port. */
+/** The part's label (or its id, by the board's labels/ids switch) on the side with no port (parts/tag.ts). */
 function Tag({ part, side }: { part: Part; side: string }) {
   const mode = useBoard((s) => s.tagMode);
-  const text = mode === "id" ? part.id : part.label || `${partRegistry[part.type].label} ${part.id}`;
+  const text = partTag(part, mode);
+  if (text === null) return null;
   return <span className={`lw-tag lw-tag-${side} ${mode === "label" ? "lw-tag-label" : ""}`} data-tag={mode}>{text}</span>;
 }
 

@@ -20,8 +20,8 @@ export const severityStyle: Record<Severity, { label: string; className: string;
 
 /** Our words for the checks seen most; any other code reads as itself ("pump.curve-short" → "Pump curve short"). */
 const checkTitles: Record<string, string> = {
-  "pipe.velocity-high": "Pipes faster than the velocity limit",
-  "pipe.gradient-high": "Pipes above the target pressure gradient",
+  "pipe.velocity-high": "Pipes too fast",
+  "pipe.gradient-high": "Pipe gradient above target",
   "pipe.no-flow": "Pipes with no flow",
   "pipe.no-size": "No catalogue size fits",
   "pump.head-low": "Pump short of head",

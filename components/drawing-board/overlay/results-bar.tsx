@@ -32,7 +32,7 @@ export function ResultsBar() {
     <div className="flex flex-wrap items-center gap-x-4 gap-y-1 border-b border-ink/10 bg-white px-3 py-1" data-testid="results-bar">
       <ViewSwitch id="results-view-bar" />
       <ViewSummary />
-      <span className="ml-auto text-xs text-ink-faint">{source} · engine <span className="num">{results.engine}</span></span>
+      <span className="ml-auto hidden text-xs text-ink-faint sm:inline">{source} · engine <span className="num">{results.engine}</span></span>
       <Stale />
       <Recomputed />
     </div>

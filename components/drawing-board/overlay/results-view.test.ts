@@ -86,7 +86,7 @@ describe("findings grouped by check", () => {
     ] };
     const groups = groupFindings(sortedFindings(many));
     expect(groups.map((g) => [g.code, g.items.length])).toEqual([["pump.head-low", 1], ["pipe.velocity-high", 4], ["pipe.no-flow", 1]]);
-    expect(groups[1]!.title).toBe("Pipes faster than the velocity limit");
+    expect(groups[1]!.title).toBe("Pipes too fast");
     expect(groups[2]!.title).toBe("Pipes with no flow");
   });
 });

@@ -41,7 +41,7 @@ export function ExportMenu() {
   const item = "block w-full rounded px-3 py-1.5 text-left text-sm hover:bg-paper-dark";
   return (
     <details className="relative" data-testid="export-menu">
-      <summary className="cursor-pointer list-none rounded-md border border-ink/15 bg-white px-2 py-1 text-xs text-ink hover:bg-paper-dark">Print / export ▾</summary>
+      <summary className="cursor-pointer list-none rounded-md border border-ink/15 bg-white px-2 py-1 text-xs text-ink hover:bg-paper-dark">Export ▾</summary>
       <div className="absolute right-0 z-30 mt-1 w-44 rounded-md border border-ink/10 bg-white p-1 shadow-lg">
         <button type="button" className={item} onClick={() => run("print")}>Print…</button>
         <button type="button" className={item} onClick={() => run("svg")} data-testid="export-svg">Drawing as SVG</button>

@@ -3,8 +3,6 @@
 import { useCallback, useState } from "react";
 import { useUnits } from "@/components/units/units-context";
 import { emittersInView, pipesInView } from "../overlay/results-view";
-import { ViewSummary } from "../overlay/view-summary";
-import { ViewSwitch } from "../overlay/view-switch";
 import { useBoard } from "../store";
 import { ApplySizesButton } from "./apply-sizes-button";
 import { CircuitsTable } from "./circuits-table";
@@ -17,7 +15,8 @@ import type { Working } from "./working";
 
 /**
  * The sizing report tab: every table for the results kept or last sized, in the mode or
- * scenario chosen (the same switch as the drawing's), numbers with working one click away.
+ * scenario chosen on the results bar above it (the drawing's own switch), numbers with
+ * working one click away.
  */
 export function SizingReport() {
   const results = useBoard((s) => s.results);
@@ -41,10 +40,6 @@ export function SizingReport() {
   const emitters = emittersInView(results, view);
   return (
     <div className="space-y-6 p-4" data-testid="sizing-report" data-view={view}>
-      <div className="flex flex-wrap items-center gap-x-4 gap-y-1 rounded-md border border-ink/10 bg-white px-3 py-2">
-        <ViewSwitch id="results-view-report" />
-        <ViewSummary />
-      </div>
       {stale && <p role="status" className="rounded bg-warn/10 px-3 py-2 text-sm text-warn">The drawing changed since this report was computed — size it again.</p>}
       <Section title="Pipe schedule" aside={mode ? <ApplySizesButton /> : null}>
         <PipeSchedule doc={doc} results={results} pipes={pipesInView(results, view)} design={mode !== null} prefs={prefs} onShow={showWorking} />
