@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { hashPassword } from "../../lib/auth/password";
+import { calculate, ENGINE_VERSION } from "../../lib/hydraulics/calculate";
 import { demoFirm, demoUsers } from "./demo/people";
 import { demoProjects, loadDemoDocument } from "./demo/projects";
 
@@ -23,12 +24,27 @@ export async function seed(knex: Knex): Promise<void> {
     }
     for (const s of p.schematics) {
       const existing = await knex("schematics").where({ project_id: p.id, name: s.name }).first();
-      if (existing) continue;
+      if (existing) {
+        await keepRevisionResults(knex, existing.id);
+        continue;
+      }
       const doc = loadDemoDocument(s.file, `${p.name} — ${s.name}`);
       const [row] = await knex("schematics").insert({ project_id: p.id, name: s.name, kind: "team", owner_id: "demo-designer",
         draft: doc, updated_by: "demo-designer" }).returning("id");
       await knex("schematic_revisions").insert({ schematic_id: row.id, number: 1, document: doc, status: s.status,
         message: "First design for review", author_id: "demo-designer" });
+      await keepRevisionResults(knex, row.id);
     }
+  }
+}
+
+/** Saving a revision sizes it (lib/revisions/with-results.ts): the demo's revisions carry their results for this engine too. */
+async function keepRevisionResults(knex: Knex, schematicId: string): Promise<void> {
+  const revisions = await knex("schematic_revisions").where({ schematic_id: schematicId }).select("id", "document");
+  for (const r of revisions) {
+    const sized = calculate(r.document);
+    if (!sized.ok) continue;
+    await knex("revision_results").insert({ revision_id: r.id, engine_version: ENGINE_VERSION, results: JSON.stringify(sized.results) })
+      .onConflict(["revision_id", "engine_version"]).ignore();
   }
 }
