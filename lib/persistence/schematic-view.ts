@@ -13,6 +13,8 @@ export interface KeptSizing {
   sizedDocument: Schematic | null;
   sizedAt: string | null;
   sizedBy: string | null;
+  /** The draft was never sized itself: these are the results of this revision number (its last saved one). */
+  fromRevision: number | null;
   recomputed: Recomputed;
 }
 
@@ -62,6 +64,17 @@ function chooseRevision(access: SchematicAccess, revisions: RevisionRecord[], op
   return null;
 }
 
+/**
+ * A draft never sized itself (e.g. the demo's) shows its newest revision's results, measured
+ * against that revision's document: the board then says what the draft changed since.
+ */
+async function lastRevisionSizing(latest: RevisionRecord | undefined): Promise<KeptSizing | null> {
+  const r = latest ? await revisionWithResults(latest.id) : null;
+  if (!r?.results || !r.engineVersion) return null;
+  return { results: r.results, engineVersion: r.engineVersion, sizedDocument: r.document, sizedAt: null, sizedBy: null,
+    fromRevision: r.revision.number, recomputed: r.recomputed };
+}
+
 export async function schematicView(access: SchematicAccess, open: Open = "draft"): Promise<SchematicView | null> {
   const canEdit = !access.issuedOnly && (await mayDo(access.schematic.id, "edit"));
   const s = await getSchematic(access.schematic.id);
@@ -78,13 +91,13 @@ export async function schematicView(access: SchematicAccess, open: Open = "draft
     const r = await revisionWithResults(chosen.id);
     if (!r) return null;
     const sizing = r.results && r.engineVersion
-      ? { results: r.results, engineVersion: r.engineVersion, sizedDocument: null, sizedAt: null, sizedBy: null, recomputed: r.recomputed } : null;
+      ? { results: r.results, engineVersion: r.engineVersion, sizedDocument: null, sizedAt: null, sizedBy: null, fromRevision: null, recomputed: r.recomputed } : null;
     return { ...head, doc: r.document, viewing: { kind: "revision", revision: chosen }, sizing, readOnly: true, readOnlyReason: "revision" };
   }
   if (access.issuedOnly) return { ...head, doc: null, viewing: { kind: "draft" }, sizing: null, readOnly: true, readOnlyReason: "role" };
   const kept = await draftSizing(s.id);
   const sizing = kept ? { results: kept.results, engineVersion: kept.engineVersion, sizedDocument: kept.document, sizedAt: kept.sizedAt,
-    sizedBy: kept.sizedBy, recomputed: kept.recomputed } : null;
+    sizedBy: kept.sizedBy, fromRevision: null, recomputed: kept.recomputed } : await lastRevisionSizing(revisions[0]);
   return {
     ...head, doc: s.draft, viewing: { kind: "draft" }, sizing,
     readOnly: issuedLock || !canEdit,

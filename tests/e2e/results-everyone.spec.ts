@@ -18,6 +18,7 @@ test("the reviewer opens the revision under review and reads its report without 
   test.setTimeout(120_000);
   const id = await bypassOnly();
   const [saved] = await sql<{ draft: unknown; lock_version: number }>("select draft, lock_version from schematics where id = $1", [id]);
+  await sql("delete from draft_results where schematic_id = $1", [id]); // the draft as the seed leaves it: never sized itself
   try {
     // the designer changes the draft after submitting: pipe z1-f0 from 6 m to 80 m
     const designer = await browser.newPage();
@@ -66,6 +67,11 @@ test("the reviewer opens the revision under review and reads its report without 
     await page.getByTestId("open-draft").click();
     await expect(page.getByTestId("viewing-banner")).toHaveAttribute("data-viewing", "draft");
     await expect(page.getByTestId("viewing-banner")).toContainText("Working draft");
+    // never sized itself, the draft shows Rev 1's numbers, out of date, with what changed since
+    await expect(page.getByTestId("results-bar")).toContainText("Results of Rev 1");
+    await expect(page.getByTestId("results-stale")).toContainText("pipe z1-f0: length 6 → 80 m");
+    await page.getByTestId("results-stale").locator("summary").click();
+    await page.screenshot({ path: `${shots}/reviewer-draft-stale.png` });
   } finally {
     await sql("update schematics set draft = $2, lock_version = lock_version + 1 where id = $1", [id, JSON.stringify(saved!.draft)]);
     await sql("delete from draft_results where schematic_id = $1", [id]);

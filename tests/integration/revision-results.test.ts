@@ -140,6 +140,15 @@ describe("the board opens what each role needs, with its kept numbers", () => {
     // the designer opens the draft by default
     expect((await open("designer", id))!.viewing.kind).toBe("draft");
   });
+  it("a draft never sized itself shows its last revision's results, measured against that revision's document", async () => {
+    const { id, lockVersion } = await inReview();
+    await as("designer", () => actions.autosaveDraft({ schematicId: id, lockVersion, doc: withLength("z1-f0", 80) }));
+    await db()("draft_results").where({ schematic_id: id }).del(); // as the demo seed leaves its drafts
+    const v = (await open("trainee", id, "draft"))!;
+    expect(v.sizing!.fromRevision).toBe(1);
+    expect(v.sizing!.sizedDocument!.pipes.find((p) => p.id === "z1-f0")!.lengthM).toBe(8);
+    expect(v.sizing!.results).toEqual(engine(withLength("z1-f0", 8)));
+  });
   it("keeps the draft's last sizing with the document it was for, shown to everyone who opens the draft", async () => {
     const id = await fresh();
     const sized = await as("designer", () => actions.sizeSchematic({ schematicId: id, doc: withLength("z1-f0", 12) }));

@@ -27,6 +27,7 @@ export function ResultsBar() {
   }
   const meta = session.sizing;
   const source = session.viewing.kind === "revision" ? `Results of Rev ${session.viewing.revision.number}`
+    : meta?.fromRevision ? `Results of Rev ${meta.fromRevision}, the last saved revision`
     : meta?.sizedAt ? `Sized ${when(meta.sizedAt)}${meta.sizedBy ? ` by ${meta.sizedBy}` : ""}` : "Sized now";
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-1 border-b border-ink/10 bg-white px-3 py-1" data-testid="results-bar">

@@ -25,7 +25,7 @@ export function SizeItButton() {
       if (r.ok) {
         // the results belong to the drawing as sent, even if it changed while sizing ran
         store.getState().setResults(r.data, doc);
-        setSizing({ engineVersion: r.data.engine, sizedAt: new Date().toISOString(), sizedBy: null, recomputed: null });
+        setSizing({ engineVersion: r.data.engine, sizedAt: new Date().toISOString(), sizedBy: null, fromRevision: null, recomputed: null });
       } else setError(r.error);
     } catch {
       setError("Could not reach the server to size the schematic.");

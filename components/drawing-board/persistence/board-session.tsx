@@ -98,5 +98,6 @@ function Saving(p: Omit<Props, "units"> & { opened: Opened; revisions: Schematic
 }
 
 function metaOf(sizing: SchematicView["sizing"]): SizingMeta | null {
-  return sizing ? { engineVersion: sizing.engineVersion, sizedAt: sizing.sizedAt, sizedBy: sizing.sizedBy, recomputed: sizing.recomputed } : null;
+  return sizing ? { engineVersion: sizing.engineVersion, sizedAt: sizing.sizedAt, sizedBy: sizing.sizedBy, fromRevision: sizing.fromRevision,
+    recomputed: sizing.recomputed } : null;
 }

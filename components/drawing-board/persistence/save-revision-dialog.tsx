@@ -28,7 +28,7 @@ export function SaveRevisionDialog({ open, onClose }: { open: boolean; onClose: 
     // saving a revision sized it: show those results
     if (r.data.results) {
       store.getState().setResults(r.data.results, doc);
-      session.setSizing({ engineVersion: r.data.results.engine, sizedAt: new Date().toISOString(), sizedBy: null, recomputed: null });
+      session.setSizing({ engineVersion: r.data.results.engine, sizedAt: new Date().toISOString(), sizedBy: null, fromRevision: null, recomputed: null });
     }
     session.setRevisions([r.data.revision, ...session.revisions]);
     setMessage("");

@@ -12,6 +12,8 @@ export interface SizingMeta {
   /** When the draft was sized (null: a revision's own results). */
   sizedAt: string | null;
   sizedBy: string | null;
+  /** The draft shows the results of this revision (it was never sized itself). */
+  fromRevision: number | null;
   /** Kept results of an older engine, sized again on opening: what differs. */
   recomputed: Recomputed;
 }
