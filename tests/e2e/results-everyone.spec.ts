@@ -97,6 +97,11 @@ test("hot water and scenarios on the drawing: the cylinder coil pipes carry flow
   await expect(page.getByTestId("velocity-legend")).toContainText("hot water");
   await zoomIn(page, 2);
   await page.screenshot({ path: `${shots}/board-hot-water.png` });
+  // part labels on the drawing, or their ids
+  await expect(page.locator('.react-flow__node[data-id="cyl"] [data-tag]')).toHaveText("Hot-water cylinder 200 L");
+  await page.getByTestId("toggle-tags").click();
+  await expect(page.locator('.react-flow__node[data-id="cyl"] [data-tag]')).toHaveText("cyl");
+  await page.getByTestId("toggle-tags").click();
 
   // a simulated scenario: every zone shut, the bypass passes the heat source's flow
   await page.getByTestId("results-view").first().selectOption("scenario:all zones shut");
@@ -217,6 +222,10 @@ test("a new firm's empty projects page offers a first project and the demo copy;
   await page.waitForURL(/\/projects\/[0-9a-f-]{36}$/);
   await expect(page.getByRole("heading", { name: "Heron Cottage" })).toBeVisible();
   await expect(page.getByTestId("project-design")).toContainText("flow 50 °C / return 43 °C");
+  await page.getByTestId("edit-project").click();
+  await page.getByTestId("project-form").getByLabel("Project name").fill("Heron Cottage, phase 1");
+  await page.getByRole("button", { name: "Save project" }).click();
+  await expect(page.getByRole("heading", { name: "Heron Cottage, phase 1" })).toBeVisible();
   await page.getByTestId("archive-project").click();
   await expect(page.getByTestId("archived-banner")).toBeVisible();
   await page.screenshot({ path: `${shots}/project-archived.png` });
