@@ -9,7 +9,7 @@ import { memo } from "react";
 import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
 import { partRegistry, type Part } from "@/lib/schematic";
 import { useUnits } from "@/components/units/units-context";
-import { partBadgesMemo } from "../overlay/part-badges";
+import { partBadge } from "../overlay/part-badges";
 import { useBoard } from "../store";
 import { layoutOf, symbols } from "../parts";
 import { orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
@@ -54,9 +54,8 @@ function Tag({ part, side }: { part: Part; side: string }) {
 function Badge({ part }: { part: Part }) {
   const results = useBoard((s) => s.results);
   const view = useBoard((s) => s.resultsView);
-  const parts = useBoard((s) => s.doc.parts);
   const { prefs } = useUnits();
-  const badge = partBadgesMemo(results, parts, view, prefs).get(part.id);
+  const badge = partBadge(results, part, view, prefs);
   if (!badge) return null;
   return <span className={`lw-badge ${badge.warn ? "lw-badge-warn" : ""}`} data-badge={part.id}>{badge.text}</span>;
 }

@@ -4,6 +4,7 @@ import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { parseSchematic, type Results } from "@/lib/schematic";
 import { groupFindings, sortedFindings } from "./findings";
+import { partBadge } from "./part-badges";
 import { pipeLabels } from "./pipe-labels";
 import { emittersInView, findingInView, pipesInView, scenarioKey, viewOfFinding, viewsOf, viewSummary } from "./results-view";
 
@@ -51,6 +52,23 @@ describe("results views: design modes and simulated scenarios", () => {
     expect(open.heatToEmittersW!).toBeGreaterThan(1000);
     // heating design: emitter outputs are the engine's design outputs
     expect(emittersInView(results, "heating").map((e) => e.outputW)).toEqual(results.emitters.map((e) => e.outputAtDesignW));
+  });
+});
+
+describe("part badges: the number a part shows in the view chosen", () => {
+  const part = (id: string) => doc.parts.find((p) => p.id === id)!;
+  it("the cylinder shows its coil flow in hot water and none in heating; a radiator its output", () => {
+    const hw = results.modes.find((m) => m.mode === "hot-water")!.parts.find((p) => p.id === "cyl")!.flowM3h!;
+    expect(partBadge(results, part("cyl"), "hot-water", si)).toEqual({ text: `${hw.toFixed(3)} m³/h`, warn: false });
+    expect(partBadge(results, part("cyl"), "heating", si)?.text).toBe("0.000 m³/h");
+    const out = results.emitters.find((e) => e.id === "rad-lounge")!.outputAtDesignW!;
+    expect(partBadge(results, part("rad-lounge"), "heating", si)?.text).toBe(out >= 1000 ? `${(out / 1000).toFixed(2)} kW` : `${out.toFixed(0)} W`);
+    expect(partBadge(results, part("t-sv"), "heating", si)).toBeNull();
+  });
+  it("a heat source below its minimum flow is marked", () => {
+    const shut = scenarioKey("all zones shut");
+    const hp = { ...part("hp"), props: { ...part("hp").props, minFlowM3h: 5 } };
+    expect(partBadge(results, hp, shut, si)).toMatchObject({ warn: true, text: expect.stringMatching(/< min$/) });
   });
 });
 
