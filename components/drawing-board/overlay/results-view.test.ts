@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
-import { parseSchematic, type Results } from "@/lib/schematic";
+import { parseSchematic, type Part, type Results } from "@/lib/schematic";
 import { groupFindings, sortedFindings } from "./findings";
 import { partBadge } from "./part-badges";
 import { pipeLabels } from "./pipe-labels";
@@ -67,7 +67,7 @@ describe("part badges: the number a part shows in the view chosen", () => {
   });
   it("a heat source below its minimum flow is marked", () => {
     const shut = scenarioKey("all zones shut");
-    const hp = { ...part("hp"), props: { ...part("hp").props, minFlowM3h: 5 } };
+    const hp = { ...part("hp"), props: { ...(part("hp").props as object), minFlowM3h: 5 } } as Part;
     expect(partBadge(results, hp, shut, si)).toMatchObject({ warn: true, text: expect.stringMatching(/< min$/) });
   });
 });
