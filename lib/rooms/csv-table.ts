@@ -33,8 +33,11 @@ export interface CsvField {
 
 export type Mapping = Record<string, string | null>;
 
-/** Header text compared without case, spaces, punctuation or units in brackets' symbols: "Heat loss (W)" → "heatlossw". */
-export const normaliseHeading = (s: string) => s.toLowerCase().replace(/°/g, "").replace(/²/g, "2").replace(/³/g, "3").replace(/[^a-z0-9]+/g, "");
+/** Header text compared without case, spaces or punctuation: "Heat loss (W)" → "heatlossw", "ΔT50" → "dt50". */
+export const normaliseHeading = (s: string) =>
+  s.toLowerCase().replace(/[Δδ]/g, "d").replace(/²/g, "2").replace(/³/g, "3").replace(/[^a-z0-9]+/g, "");
+/** The same without a unit in brackets: "Heat loss (W)" → "heatloss". */
+const withoutUnit = (s: string) => normaliseHeading(s.replace(/[([][^)\]]*[)\]]/g, ""));
 
 /** Header + rows, each with the line it starts on (quoted line breaks counted). Blank lines are skipped. */
 export function readCsv(text: string): CsvTable {
@@ -80,7 +83,8 @@ function quoteMessage(code: string, fallback: string): string {
 
 /** Best guess of which column holds each field: the heading equal to the field's key or a synonym. */
 export function guessMapping(headers: readonly string[], fields: readonly CsvField[]): Mapping {
-  const byNorm = new Map(headers.map((h) => [normaliseHeading(h), h]));
+  const byNorm = new Map<string, string>();
+  for (const h of headers) for (const n of [withoutUnit(h), normaliseHeading(h)]) if (n && !byNorm.has(n)) byNorm.set(n, h);
   const out: Mapping = {};
   const used = new Set<string>();
   for (const f of fields) {

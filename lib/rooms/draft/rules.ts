@@ -49,13 +49,14 @@ export const KV_SERIES = [0.63, 1, 1.6, 2.5, 4, 6.3, 10, 16, 25, 40, 63, 100, 16
 /**
  * The smallest Kv of the series whose pressure drop at flow q (m³/h) stays
  * within maxKpa: Δp = (q/Kv)² bar (IEC 60534 Kv definition) → Kv ≥ q·√(100/maxKpa).
- * Limits used: isolation valves 1 kPa, filter 5 kPa, zone and diverter valves 10 kPa.
+ * Limits used: isolation valves 1 kPa, filter 3 kPa, zone and diverter valves
+ * 5 kPa, cylinder coil and bypass 10 kPa.
  */
 export function kvFor(flowM3h: number, maxKpa: number): number {
   const need = Math.max(flowM3h, 0.05) * Math.sqrt(100 / maxKpa);
   return KV_SERIES.find((k) => k >= need) ?? KV_SERIES[KV_SERIES.length - 1]!;
 }
-export const DP_LIMIT_KPA = { isolation: 1, filter: 5, zoneValve: 10, diverter: 10, coil: 10, bypass: 10 } as const;
+export const DP_LIMIT_KPA = { isolation: 1, filter: 3, zoneValve: 5, diverter: 5, coil: 10, bypass: 10 } as const;
 
 /** Nominal sizes of expansion vessels as sold, L. */
 export const VESSEL_SERIES_L = [8, 12, 18, 25, 35, 50, 80, 100, 140, 200, 300, 500, 800, 1000] as const;

@@ -12,7 +12,7 @@
  *    minimum flow is not met with every zone shut.
  * 4. the final results the draft is judged by.
  */
-import { calculateSchematic } from "@/lib/hydraulics";
+import { calculateSchematic, en12828MinimumFillPressureBar, en12828WaterReserveL } from "@/lib/hydraulics";
 import { parseSchematic, type Results, type Schematic } from "@/lib/schematic";
 import { applySuggestedSizes } from "@/lib/schematic/apply-suggested-sizes";
 import { DP_LIMIT_KPA, FILL_ABOVE_PRECHARGE_BAR, KV_SERIES, kvFor, nextInSeries, pumpCurveFor, VESSEL_SERIES_L } from "./rules";
@@ -64,10 +64,13 @@ function setVessel(doc: Schematic, results: Results): void {
   const vessel = doc.parts.find((p) => p.type === "expansion-vessel");
   if (!vessel || !ev || ev.requiredVolumeL === null || ev.recommendedPrechargeBar === null) return;
   const precharge = Math.ceil(ev.recommendedPrechargeBar * 10) / 10;
-  props(vessel).volumeL = nextInSeries(VESSEL_SERIES_L, ev.requiredVolumeL);
+  const volumeL = nextInSeries(VESSEL_SERIES_L, ev.requiredVolumeL);
+  props(vessel).volumeL = volumeL;
   props(vessel).prechargeBar = precharge;
-  vessel.label = `Expansion vessel ${props(vessel).volumeL} L, pre-charge ${precharge} bar`;
-  doc.design.coldFillPressureBar = Math.round((precharge + FILL_ABOVE_PRECHARGE_BAR) * 10) / 10;
+  vessel.label = `Expansion vessel ${volumeL} L, pre-charge ${precharge} bar`;
+  // Cold fill: enough to put the EN 12828 water reserve into this vessel, and pre-charge + 0.3 bar at least.
+  const minFill = en12828MinimumFillPressureBar(volumeL, precharge, en12828WaterReserveL(results.volume.systemL ?? 0));
+  doc.design.coldFillPressureBar = Math.ceil(Math.max(minFill, precharge + FILL_ABOVE_PRECHARGE_BAR) * 10) / 10;
 }
 
 /** Bypass opening from the engine; Kvs up the series while the minimum flow is not met. */
