@@ -63,7 +63,7 @@ export function DraftForm({ projectId, rooms, flowC, deltaK, practice }: { proje
         </label>
         <label className={label}>Short emitters
           <select className={field} value={emitters} onChange={(e) => setEmitters(e.target.value as typeof emitters)}>
-            <option value="upsize">replace with one that meets</option><option value="keep">keep (list the shortfall)</option>
+            <option value="upsize">replace (upsize)</option><option value="keep">keep, list shortfall</option>
           </select>
         </label>
         <div className={label}>

@@ -43,7 +43,7 @@ export function RoomsTable({ rows, problems, editable, onChange, onAdd, onRemove
 
   return (
     <div className="overflow-x-auto rounded-md border border-ink/10 bg-white">
-      <table ref={grid} className="w-full min-w-max border-collapse text-sm" data-testid="rooms-table" aria-label="Rooms">
+      <table ref={grid} className="min-w-max border-collapse text-sm" data-testid="rooms-table" aria-label="Rooms">
         <thead className="bg-paper-dark text-left text-xs text-ink-soft">
           <tr>
             <th scope="col" className="px-2 py-2 font-medium">#</th>

@@ -47,7 +47,7 @@ function fieldOfPath(path: readonly PropertyKey[]): string {
   return path[1] === undefined || path[1] === "kind" ? "emitterKind" : String(path[1]);
 }
 
-function rowToRoom(cells: Record<string, string>, line: number, delimiter: string, column: (field: string) => string) {
+function rowToRoom(cells: Record<string, string>, line: number, delimiter: string, column: (field: string) => string, unmapped: Set<string>) {
   const issues: CsvIssue[] = [];
   const n: Record<string, number | null> = {};
   for (const f of numericFields) {
@@ -69,8 +69,9 @@ function rowToRoom(cells: Record<string, string>, line: number, delimiter: strin
   if (!parsed.success) {
     for (const i of parsed.error.issues) {
       const field = fieldOfPath(i.path);
-      // A number already reported as unreadable is not "required" as well.
-      if (issues.some((x) => x.column === column(field))) continue;
+      // A number already reported as unreadable is not "required" as well; a field with no
+      // column at all is reported once, on the header line.
+      if (issues.some((x) => x.column === column(field)) || unmapped.has(field)) continue;
       const missing = i.code === "invalid_type" && (cells[field] ?? "") === "";
       issues.push({ line, column: column(field), message: missing ? `is empty; ${roomCsvFields.find((f) => f.key === field)?.label ?? field} is needed` : i.message });
     }
@@ -90,6 +91,7 @@ export function importRoomsCsv(text: string, mapping?: Partial<Mapping>): RoomsI
   const issues: CsvIssue[] = [...table.issues, ...mappingIssues(table.headers, roomCsvFields, map)];
   if (table.headers.length === 0) issues.push({ line: 1, column: "", message: "the file is empty: it needs a header line and one line per room" });
   const column = (field: string) => map[field] ?? field;
+  const unmapped = new Set(roomCsvFields.filter((f) => f.required && !map[f.key]).map((f) => f.key));
   const rows: ImportRow[] = [];
   const seen = new Map<string, number>();
   for (const r of table.rows.slice(0, MAX_ROOMS)) {
@@ -97,12 +99,12 @@ export function importRoomsCsv(text: string, mapping?: Partial<Mapping>): RoomsI
       issues.push({ line: r.line, column: "", message: `${r.cells.length} values where the header has ${table.headers.length} columns: a comma inside a number (write 1200, not 1,200) or text with a comma that is not in quotes` });
     }
     const cells = cellsByField(table.headers, r.cells, map);
-    const { room, issues: own } = rowToRoom(cells, r.line, table.delimiter, column);
-    issues.push(...own);
+    const { room, issues: own } = rowToRoom(cells, r.line, table.delimiter, column, unmapped);
     const key = (cells.name ?? "").toLowerCase();
-    if (key && seen.has(key)) issues.push({ line: r.line, column: column("name"), message: `'${cells.name}' is already the name of the room on line ${seen.get(key)}; room names must differ` });
+    if (key && seen.has(key)) own.push({ line: r.line, column: column("name"), message: `'${cells.name}' is already the name of the room on line ${seen.get(key)}; room names must differ` });
     else if (key) seen.set(key, r.line);
-    rows.push({ line: r.line, cells, room });
+    issues.push(...own);
+    rows.push({ line: r.line, cells, room: own.length ? null : room });
   }
   if (table.rows.length > MAX_ROOMS) {
     issues.push({ line: table.rows[MAX_ROOMS]!.line, column: "", message: `the file has ${table.rows.length.toLocaleString("en")} rooms; a project holds at most ${MAX_ROOMS}: split the building into projects or import fewer rows (lines after ${table.rows[MAX_ROOMS - 1]!.line} were not read)` });
