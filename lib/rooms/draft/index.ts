@@ -94,6 +94,6 @@ function draw(rooms: readonly Room[], plant: Plant, name: string, list: readonly
     parts: b.parts,
     pipes: b.pipes,
   };
-  const { doc: schematic, results } = sizeDraft(doc, plant.heatSource.minFlowM3h);
-  return { schematic, results, findings: [...planFindings(rooms, plant), ...findings] };
+  const sized = sizeDraft(doc, plant.heatSource.minFlowM3h);
+  return { schematic: sized.doc, results: sized.results, findings: [...planFindings(rooms, plant), ...findings, ...sized.findings] };
 }

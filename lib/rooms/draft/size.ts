@@ -1,10 +1,14 @@
 /**
  * Sizing a drawn draft with the engine itself, in passes (each pass is
- * calculateSchematic on the whole document):
+ * calculateSchematic on the whole document; the working passes simulate only
+ * "all zones open", the final one every default scenario):
  * 1. pipe sizes: the engine's suggested size of every pipe (the larger of
- *    heating and hot water, lib/schematic/apply-suggested-sizes.ts); valve Kv
- *    values from the parts' design flows (rules.ts kvFor). Design flows come
- *    from the loads alone, so they do not change with these choices.
+ *    heating and hot water, lib/schematic/apply-suggested-sizes.ts). A pipe no
+ *    copper size can carry turns steel and takes the engine's steel
+ *    suggestion; beyond the steel catalogue it keeps DN50 with an inner
+ *    diameter for the design velocity (d = √(4q/(π·v_max)), up to 10 mm), and a
+ *    finding says so. Valve Kv values from the parts' design flows (rules.ts).
+ *    Design flows come from the loads alone, so these choices do not move them.
  * 2. pump curves from the required heads and flows; the expansion vessel
  *    from the engine's EN 12828 volume and pre-charge, the cold fill above it.
  * 3. the bypass opening: the engine's recommended opening (needs the pump
@@ -13,23 +17,58 @@
  * 4. the final results the draft is judged by.
  */
 import { calculateSchematic, en12828MinimumFillPressureBar, en12828WaterReserveL } from "@/lib/hydraulics";
-import { parseSchematic, type Results, type Schematic } from "@/lib/schematic";
+import { parseSchematic, type Finding, type Results, type Schematic } from "@/lib/schematic";
 import { applySuggestedSizes } from "@/lib/schematic/apply-suggested-sizes";
 import { DP_LIMIT_KPA, FILL_ABOVE_PRECHARGE_BAR, KV_SERIES, kvFor, nextInSeries, pumpCurveFor, VESSEL_SERIES_L } from "./rules";
 
-function run(doc: unknown): { doc: Schematic; results: Results } {
-  const parsed = parseSchematic(doc);
-  if (!parsed.ok) throw new Error(`draft: generated document does not parse: ${parsed.issues.slice(0, 3).map((i) => i.message).join("; ")}`);
-  return { doc: parsed.doc, results: calculateSchematic(parsed.doc) };
-}
-
 type Part = Schematic["parts"][number];
 const props = (p: Part) => p.props as Record<string, unknown>;
+const QUICK = [{ name: "all zones open", mode: "heating" as const, valves: {} }];
+/** Below this a pipe carries nothing in a mode, m³/h (as apply-suggested-sizes). */
+const NO_FLOW_M3H = 0.001;
+
+function calc(doc: Schematic, quick: boolean): Results {
+  return calculateSchematic(quick ? { ...doc, scenarios: QUICK } : doc);
+}
 
 function partFlows(results: Results): Map<string, number> {
   const out = new Map<string, number>();
   for (const m of results.modes) for (const r of m.parts) out.set(r.id, Math.max(out.get(r.id) ?? 0, Math.abs(r.flowM3h ?? 0)));
   return out;
+}
+
+/** Pipes with flow but no suggested size in some mode, and their largest flow (m³/h). */
+function unsized(results: Results): Map<string, number> {
+  const out = new Map<string, number>();
+  for (const m of results.modes) {
+    for (const p of m.pipes) {
+      const q = Math.abs(p.flowM3h ?? 0);
+      if (q > NO_FLOW_M3H && p.suggestedSize === null) out.set(p.id, Math.max(out.get(p.id) ?? 0, q));
+    }
+  }
+  return out;
+}
+
+function sizePipes(doc: Schematic, findings: Finding[]): Schematic {
+  const first = calc(doc, true);
+  let cur = applySuggestedSizes(doc, first).doc;
+  const tooBig = unsized(first);
+  if (tooBig.size === 0) return cur;
+  cur = { ...cur, pipes: cur.pipes.map((p) => (tooBig.has(p.id) && p.material === "copper" ? { ...p, material: "steel" as const, size: "DN50" } : p)) };
+  cur = applySuggestedSizes(cur, calc(cur, true)).doc;
+  const still = unsized(calc(cur, true));
+  const vMax = cur.design.maxVelocityMps;
+  cur = {
+    ...cur,
+    pipes: cur.pipes.map((p) => {
+      const q = still.get(p.id);
+      if (q === undefined) return p;
+      const dMm = Math.ceil((Math.sqrt((4 * q) / 3600 / (Math.PI * vMax)) * 1000) / 10) * 10;
+      findings.push({ severity: "info", code: "draft.pipe-beyond-catalogue", message: `pipe ${p.id}: ${q.toFixed(2)} m³/h is more than the largest catalogue pipe carries at ${vMax} m/s; drawn as steel with a ${dMm} mm bore (velocity rule): choose a real size`, refs: [p.id] });
+      return { ...p, material: "steel" as const, size: "DN50", innerDiameterMm: dMm };
+    }),
+  };
+  return cur;
 }
 
 function setValves(doc: Schematic, flows: Map<string, number>, minFlowM3h: number): void {
@@ -74,32 +113,34 @@ function setVessel(doc: Schematic, results: Results): void {
 }
 
 /** Bypass opening from the engine; Kvs up the series while the minimum flow is not met. */
-function setBypass(doc: Schematic, results: Results): { doc: Schematic; results: Results } {
-  let cur = { doc, results };
+function setBypass(doc: Schematic, results: Results): void {
+  let r = results;
+  const bp = doc.parts.find((p) => p.type === "dp-bypass-valve");
+  if (!bp) return;
   for (let i = 0; i < KV_SERIES.length; i++) {
-    const bp = cur.doc.parts.find((p) => p.type === "dp-bypass-valve");
-    const rec = cur.results.bypass?.recommendedOpeningKpa ?? null;
-    if (!bp || rec === null) return cur;
+    const rec = r.bypass?.recommendedOpeningKpa ?? null;
+    if (rec === null) return;
     props(bp).openingKpa = Math.ceil(rec * 2) / 2;
-    cur = run(cur.doc);
-    if (cur.results.bypass?.minFlowMet !== false) return cur;
-    const kvs = props(bp).kvs as number;
-    const next = KV_SERIES.find((k) => k > kvs);
-    if (next === undefined) return cur;
+    if (calc(doc, true).bypass?.minFlowMet !== false) return;
+    const next = KV_SERIES.find((k) => k > (props(bp).kvs as number));
+    if (next === undefined) return;
     props(bp).kvs = next;
     props(bp).openingKpa = null;
-    cur = run(cur.doc);
+    r = calc(doc, true);
   }
-  return cur;
 }
 
-export function sizeDraft(raw: unknown, minFlowM3h: number): { doc: Schematic; results: Results } {
-  const first = run(raw);
-  const sized = applySuggestedSizes(first.doc, first.results).doc;
-  setValves(sized, partFlows(first.results), minFlowM3h);
-  const second = run(sized);
-  setPumps(second.doc, second.results);
-  setVessel(second.doc, second.results);
-  const third = run(second.doc);
-  return setBypass(third.doc, third.results);
+export function sizeDraft(raw: unknown, minFlowM3h: number): { doc: Schematic; results: Results; findings: Finding[] } {
+  const parsed = parseSchematic(raw);
+  if (!parsed.ok) throw new Error(`draft: generated document does not parse: ${parsed.issues.slice(0, 3).map((i) => i.message).join("; ")}`);
+  const findings: Finding[] = [];
+  const doc = sizePipes(parsed.doc, findings);
+  setValves(doc, partFlows(calc(doc, true)), minFlowM3h);
+  const second = calc(doc, true);
+  setPumps(doc, second);
+  setVessel(doc, second);
+  setBypass(doc, calc(doc, true));
+  const final = parseSchematic(JSON.parse(JSON.stringify(doc)));
+  if (!final.ok) throw new Error(`draft: sized document does not parse: ${final.issues.slice(0, 3).map((i) => i.message).join("; ")}`);
+  return { doc: final.doc, results: calc(final.doc, false), findings };
 }
