@@ -5,35 +5,11 @@
  * Exit 2 with one line per fault (file, JSON path, what is wrong) when a file cannot
  * be read or the rooms or plant are not valid.
  */
-import { readFileSync } from "node:fs";
 import { generateDraft } from "@/lib/rooms/draft";
 import { importEmitterCsv } from "@/lib/rooms/emitter-list-csv";
+import { exitQuietlyOnClosedPipe, fail, readJson, readText } from "./cli-io";
 
-function fail(lines: string[]): never {
-  for (const line of lines) process.stderr.write(`${line}\n`);
-  process.exit(2);
-}
-
-process.stdout.on("error", (e: NodeJS.ErrnoException) => {
-  if (e.code === "EPIPE") process.exit(0);
-  throw e;
-});
-
-function read(file: string): string {
-  try {
-    return readFileSync(file, "utf8");
-  } catch (e) {
-    fail([`${file}: cannot read the file (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`]);
-  }
-}
-
-function json(file: string): unknown {
-  try {
-    return JSON.parse(read(file));
-  } catch (e) {
-    fail([`${file}: not valid JSON (${(e as Error).message})`]);
-  }
-}
+exitQuietlyOnClosedPipe();
 
 function main(argv: string[]): void {
   const args = argv.filter((a) => a !== "--");
@@ -43,11 +19,11 @@ function main(argv: string[]): void {
   if (!roomsFile || !plantFile || (at >= 0 && !listFile)) fail(["usage: npm run --silent draft -- ROOMS.json PLANT.json [--emitters LIST.csv] > schematic.json"]);
   let emitterList: ReturnType<typeof importEmitterCsv>["emitters"] = [];
   if (listFile) {
-    const list = importEmitterCsv(read(listFile));
+    const list = importEmitterCsv(readText(listFile));
     if (list.issues.length) fail([`${listFile}: not a valid emitter list:`, ...list.issues.map((i) => `  line ${i.line}, ${i.column || "row"}: ${i.message}`)]);
     emitterList = list.emitters;
   }
-  const out = generateDraft(json(roomsFile), { ...(json(plantFile) as object) }, { emitterList });
+  const out = generateDraft(readJson(roomsFile), readJson(plantFile), { emitterList });
   if (!out.ok) fail([`${roomsFile} + ${plantFile}: no draft:`, ...out.issues.map((i) => `  ${i.message}`)]);
   const { schematic, results, findings } = out.draft;
   for (const f of [...findings, ...results.findings.filter((x) => x.severity !== "info")]) process.stderr.write(`${f.severity} ${f.code}: ${f.message}\n`);

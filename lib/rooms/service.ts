@@ -154,3 +154,9 @@ export async function readCsvBody(req: Request): Promise<{ ok: true; text: strin
 
 /** An answer as a Response (JSON). */
 export const respond = (a: Answer) => Response.json(a.body, { status: a.status });
+
+/** The answer as JSON, or — for ?format=csv on a successful read — as a CSV download. */
+export function respondOrCsv(req: Request, a: Answer, toCsv: (body: Answer["body"]) => string, filename: string): Response {
+  if (new URL(req.url).searchParams.get("format") !== "csv" || a.status !== 200) return respond(a);
+  return new Response(toCsv(a.body), { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${filename}"` } });
+}

@@ -1,20 +1,16 @@
 import { apiHandler } from "@/lib/auth/authorize";
 import { readJsonBody } from "@/lib/persistence/json-body";
 import { refusedResponse } from "@/lib/persistence/outcome";
-import { readRooms, replaceRooms, respond } from "@/lib/rooms/service";
+import { readRooms, replaceRooms, respond, respondOrCsv } from "@/lib/rooms/service";
 import { roomsToCsv } from "@/lib/rooms/rooms-csv";
+import type { Room } from "@/lib/rooms/schema";
 
 export const dynamic = "force-dynamic";
 type Ctx = { params: Promise<{ projectId: string }> };
 
 /** {rooms, lockVersion, updatedAt}; with ?format=csv the rooms as a CSV file. Any member. */
-export const GET = apiHandler(async (req: Request, { params }: Ctx) => {
-  const answer = await readRooms((await params).projectId);
-  if (new URL(req.url).searchParams.get("format") !== "csv" || answer.status !== 200) return respond(answer);
-  return new Response(roomsToCsv(answer.body.rooms as never), {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": 'attachment; filename="rooms.csv"' },
-  });
-});
+export const GET = apiHandler(async (req: Request, { params }: Ctx) =>
+  respondOrCsv(req, await readRooms((await params).projectId), (b) => roomsToCsv(b.rooms as Room[]), "rooms.csv"));
 
 /** Replace the rooms: {rooms: [...], lockVersion?}. Owners and designers; 400 {error, issues} and nothing saved when any room is wrong. */
 export const PUT = apiHandler(async (req: Request, { params }: Ctx) => {
