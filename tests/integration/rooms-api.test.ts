@@ -174,6 +174,14 @@ describe("POST …/drafts", () => {
     expect(t.status).toBe(201);
     expect(await db()("schematics").where({ id: t.body.schematicId }).first("kind", "owner_id")).toEqual({ kind: "practice", owner_id: "demo-trainee" });
   });
+  it("with variantOf it is listed as a variant of that schematic; another project's id is refused", async () => {
+    const r = await call(postDraft as Call, { path: "/drafts", method: "POST", json: { plant, variantOf: f.teamSchematicId } });
+    expect(r.status).toBe(201);
+    expect((await db()("schematics").where({ id: r.body.schematicId }).first("variant_of")).variant_of).toBe(f.teamSchematicId);
+    const [other] = await db()("schematics").whereNot({ project_id: f.projectId }).limit(1).pluck("id");
+    const bad = await call(postDraft as Call, { path: "/drafts", method: "POST", json: { plant, variantOf: other } });
+    expect(bad).toMatchObject({ status: 400, body: { issues: [{ path: "variantOf" }] } });
+  });
   it("a bad plant: 400 naming each path, no schematic made; a reviewer: 403", async () => {
     const count = async () => Number((await db()("schematics").where({ project_id: f.projectId }).count("* as n"))[0]!.n);
     const before = await count();
