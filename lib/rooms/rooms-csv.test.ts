@@ -19,6 +19,11 @@ describe("rooms CSV import", () => {
     expect(r.rows[0]!.room!.emitter).toMatchObject({ kind: "radiator", outputAtDt50W: 2100, exponentN: 1.3, waterVolumeL: 8.4 });
   });
 
+  it("the demo rooms JSON (for the draft CLI) holds the same rooms as the demo CSV", () => {
+    const json = JSON.parse(fs.readFileSync(path.join(process.cwd(), "db/seeds/data/orchard-end-rooms.json"), "utf8"));
+    expect(importRoomsCsv(demoCsv).rows.map((r) => r.room)).toEqual(json.rooms);
+  });
+
   it("exports what it imports: CSV → rooms → CSV → the same rooms", () => {
     const rooms = importRoomsCsv(demoCsv).rows.map((r) => r.room!);
     const again = importRoomsCsv(roomsToCsv(rooms));
