@@ -91,7 +91,7 @@ export function CsvImport({ projectId, currentCount, onImported, onClose }: {
               ))}
             </ul>
           )}
-          <div className="mt-3 max-h-72 overflow-auto rounded border border-ink/10">
+          <div className="relative mt-3 max-h-72 overflow-auto rounded border border-ink/10">
             <table className="w-full min-w-max text-sm" data-testid="import-preview">
               <thead className="sticky top-0 bg-paper-dark text-left text-xs text-ink-soft">
                 <tr><th className="px-2 py-1">Line</th>{roomCsvFields.map((f) => <th key={f.key} className="px-2 py-1">{f.key}</th>)}</tr>

@@ -22,7 +22,7 @@ export function EmitterList({ projectId, initial, editable, onChanged }: { proje
     }
   };
   return (
-    <details className="mt-10 rounded-lg border border-ink/10 bg-white p-4" data-testid="emitter-list">
+    <details className="relative mt-10 rounded-lg border border-ink/10 bg-white p-4" data-testid="emitter-list">
       <summary className="cursor-pointer font-semibold">Firm&apos;s emitter list <span className="num text-sm font-normal text-ink-faint">{list.length}</span></summary>
       <p className="mt-2 text-sm text-ink-soft">The radiators the firm fits, rated at ΔT 50 (75/65/20 °C). The check and the first draft pick the smallest that meets a room. Shared by every project of the firm.</p>
       <div className="mt-2 flex flex-wrap items-center gap-3 text-sm">
@@ -35,7 +35,7 @@ export function EmitterList({ projectId, initial, editable, onChanged }: { proje
       </div>
       {error && <p role="alert" className="mt-2 text-sm text-fault">{error}</p>}
       {issues.length > 0 && <ul className="mt-1 text-sm text-fault">{issues.map((i, k) => <li key={k}>Line {i.line}{i.column ? `, ${i.column}` : ""}: {i.message}</li>)}</ul>}
-      <div className="mt-3 overflow-x-auto">
+      <div className="relative mt-3 overflow-x-auto">
         <table className="w-full min-w-max text-sm">
           <thead className="text-left text-xs text-ink-soft"><tr>{["Model", "Type", "H × L mm", "Φ50 W", "n", "Water L"].map((h) => <th key={h} className="px-2 py-1 font-medium">{h}</th>)}</tr></thead>
           <tbody>

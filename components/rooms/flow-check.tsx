@@ -47,7 +47,7 @@ export function FlowCheck({ projectId, flowC, deltaK, version, onTemperatures }:
       {data && data.rooms.length > 0 && (
         <>
           <div className="mt-4 rounded-md border border-ink/10 bg-white p-2"><FlowChart check={data} /></div>
-          <div className="mt-4 overflow-x-auto rounded-md border border-ink/10 bg-white">
+          <div className="relative mt-4 overflow-x-auto rounded-md border border-ink/10 bg-white">
             <table className="w-full min-w-max text-sm" data-testid="flow-table">
               <thead className="bg-paper-dark text-left text-xs text-ink-soft">
                 <tr>{["Room", "Loss W", `Output at ${flowC}/${flowC - deltaK} W`, "Short W", "Needs Φ50 W", "Smallest from the list", "Lowest flow °C"].map((h) => <th key={h} className="px-3 py-2 font-medium">{h}</th>)}</tr>

@@ -42,7 +42,7 @@ export function RoomsTable({ rows, problems, editable, onChange, onAdd, onRemove
   };
 
   return (
-    <div className="overflow-x-auto rounded-md border border-ink/10 bg-white">
+    <div className="relative overflow-x-auto rounded-md border border-ink/10 bg-white">
       <table ref={grid} className="min-w-max border-collapse text-sm" data-testid="rooms-table" aria-label="Rooms">
         <thead className="bg-paper-dark text-left text-xs text-ink-soft">
           <tr>
