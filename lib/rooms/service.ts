@@ -65,7 +65,7 @@ const mappingSchema = z.record(z.string(), z.string().nullable()).superRefine((m
 export async function importRooms(projectId: string, req: Request): Promise<Answer> {
   const { user } = await requireProjectRole(projectId, "rooms.edit");
   const params = new URL(req.url).searchParams;
-  const query = { save: params.get("save") === "true", mapping: params.get("mapping") };
+  const query = { save: ["true", "1", "yes"].includes(params.get("save") ?? ""), mapping: params.get("mapping") };
   const body = await readCsvBody(req);
   if (!body.ok) return body.answer;
   const text = body.text;

@@ -6,7 +6,8 @@
  *    heating and hot water, lib/schematic/apply-suggested-sizes.ts). A pipe no
  *    copper size can carry turns steel and takes the engine's steel
  *    suggestion; beyond the steel catalogue it keeps DN50 with an inner
- *    diameter for the design velocity (d = √(4q/(π·v_max)), up to 10 mm), and a
+ *    diameter for the design velocity (continuity q = v·πd²/4, so
+ *    d = √(4q/(π·v_max)), rounded up to 10 mm), and a
  *    finding says so. Valve Kv values from the parts' design flows (rules.ts).
  *    Design flows come from the loads alone, so these choices do not move them.
  * 2. pump curves from the required heads and flows; the expansion vessel
