@@ -9,6 +9,8 @@
  * 10 connections for 10 s, POSTing the Millbrook Hall demo schematic to
  * /api/v1/calculate.
  *
+ * (c) the first-draft generator (scripts/bench-draft.ts).
+ *
  * Targets: 2,000 pipes < 100 ms, 20,000 pipes < 1 s; API ≥ 200 req/s, p99 < 50 ms.
  * Env: BENCH_URL (default http://localhost:3000), BENCH_COOKIE (sent as Cookie),
  * BENCH_SIZES (e.g. "500,2000"), BENCH_SECONDS (API duration, default 10),
@@ -22,6 +24,7 @@ import { setFlagsFromString } from "node:v8";
 import { runInNewContext } from "node:vm";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { generateBuildingWithPipes } from "@/lib/schematic/generate-building";
+import { benchDraft } from "./bench-draft";
 
 // A real gc() makes the heap figures comparable between sizes (no --expose-gc flag needed).
 setFlagsFromString("--expose-gc");
@@ -197,8 +200,9 @@ async function benchApi() {
 
 async function main() {
   const engineOk = benchEngine();
+  const draftOk = benchDraft();
   const api = await benchApi();
-  const ok = engineOk && api !== "fail";
+  const ok = engineOk && draftOk && api !== "fail";
   console.log(`\n${ok ? "All measured targets met" : "Some targets missed (see FAIL above)"}${api === "skipped" ? " (API not measured)." : "."}`);
 }
 

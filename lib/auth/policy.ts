@@ -9,12 +9,13 @@ export const actions = [
   "project.read", "project.update", "project.delete", "members.manage",
   "schematic.read", "schematic.edit", "schematic.size", "variant.practice", "variant.compare",
   "revision.save", "revision.submit", "revision.review", "revision.issue",
-  "comment.write", "site.read", "site.record",
+  "comment.write", "site.read", "site.record", "rooms.edit",
 ] as const;
 export type Action = (typeof actions)[number];
 
 const R = true;
-// owner: everything. designer: schematics, variants, sizing, submit and issue.
+// owner: everything. designer: schematics, variants, sizing, submit and issue, rooms (heat losses).
+// Rooms are read by every member (project.read).
 // reviewer: read everything, comment, approve/send back. installer: issued revision and
 // site sheet. trainee: read, private practice variants, size them, compare any two.
 const table: Record<ProjectRole, Partial<Record<Action, true>>> = {
@@ -22,7 +23,7 @@ const table: Record<ProjectRole, Partial<Record<Action, true>>> = {
   designer: {
     "project.read": R, "project.update": R, "schematic.read": R, "schematic.edit": R, "schematic.size": R,
     "variant.practice": R, "variant.compare": R, "revision.save": R, "revision.submit": R, "revision.issue": R,
-    "comment.write": R, "site.read": R,
+    "comment.write": R, "site.read": R, "rooms.edit": R,
   },
   reviewer: {
     "project.read": R, "schematic.read": R, "variant.compare": R, "revision.review": R, "comment.write": R, "site.read": R,
@@ -46,7 +47,7 @@ export const actionWords: Record<Action, string> = {
   "schematic.size": "run sizing", "variant.practice": "make practice variants", "variant.compare": "compare variants",
   "revision.save": "save revisions", "revision.submit": "submit a revision for review", "revision.review": "approve or send back a revision",
   "revision.issue": "issue an approved revision", "comment.write": "write comments", "site.read": "read the site sheet",
-  "site.record": "record site work",
+  "site.record": "record site work", "rooms.edit": "change the rooms or the firm's emitter list",
 };
 
 /** Roles that may do an action, for "needs owner or designer" messages. */

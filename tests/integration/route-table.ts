@@ -1,5 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/lib/db";
+import { readFileSync } from "node:fs";
+import path from "node:path";
 import { callAction, callRoute, cookieFor, form, type Outcome, type Who } from "./helpers/call";
 import { FIXTURE_PREFIX, type Fixture } from "./helpers/fixture";
 
@@ -20,7 +22,7 @@ export type Row = {
   name: string;
   kind: "route" | "action";
   /** Fixture options, e.g. an issued revision for installer rows. */
-  fixture?: { revisionStatus?: "draft" | "in-review" | "approved" | "issued" };
+  fixture?: { revisionStatus?: "draft" | "in-review" | "approved" | "issued"; rooms?: boolean };
   call?: (f: Fixture, cookie: string | null, who: Who) => Promise<Outcome>;
   expect?: Expect;
   /** A route that does not exist yet: shown as a todo in the test report. */
@@ -43,6 +45,13 @@ const projectItemRoute = () => import("@/app/api/v1/projects/[projectId]/route")
 const schematicRoute = () => import("@/app/api/v1/schematics/[schematicId]/route");
 const calculateRoute = () => import("@/app/api/v1/calculate/route");
 const revisionRoute = () => import("@/app/api/v1/revisions/[revisionId]/route");
+const roomsRoute = () => import("@/app/api/v1/projects/[projectId]/rooms/route");
+const roomsImportRoute = () => import("@/app/api/v1/projects/[projectId]/rooms/import/route");
+const flowRoute = () => import("@/app/api/v1/projects/[projectId]/rooms/flow-temperature/route");
+const draftsRoute = () => import("@/app/api/v1/projects/[projectId]/drafts/route");
+const emitterListRoute = () => import("@/app/api/v1/projects/[projectId]/emitter-list/route");
+const demoFile = (f: string) => readFileSync(path.join(process.cwd(), "db/seeds/data", f), "utf8");
+const oneRoom = { name: "Matrix room", roomTemperatureC: 20, heatLossW: 800, emitter: { kind: "radiator", outputAtDt50W: 2400, exponentN: 1.3 } };
 const teamActions = () => import("@/components/team/actions");
 const authActions = () => import("@/components/auth/actions");
 const projectActions = () => import("@/components/projects/actions");
@@ -240,6 +249,42 @@ export const rows: Row[] = [
   {
     name: "action saveUnitPreference", kind: "action", expect: allow(members),
     call: async (_f, cookie) => callAction(async () => (await unitActions()).saveUnitPreference({ flow: "m3/h", pressure: "kPa" }), cookie),
+  },
+
+  // ——— rooms, flow temperature, first drafts (read: every member; change: owner, designer) ———
+  {
+    name: "GET /api/v1/projects/[projectId]/rooms", kind: "route", fixture: { rooms: true }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await roomsRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/rooms`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    name: "PUT /api/v1/projects/[projectId]/rooms", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await roomsRoute()).PUT as never, { method: "PUT", path: `/api/v1/projects/${f.projectId}/rooms`, cookie, params: { projectId: f.projectId }, body: { rooms: [oneRoom] } }),
+  },
+  {
+    name: "POST /api/v1/projects/[projectId]/rooms/import (preview)", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await roomsImportRoute()).POST as never, { method: "POST", path: `/api/v1/projects/${f.projectId}/rooms/import`, cookie, params: { projectId: f.projectId }, rawBody: demoFile("orchard-end-rooms.csv"), contentType: "text/csv" }),
+  },
+  {
+    name: "POST /api/v1/projects/[projectId]/rooms/import?save=true", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await roomsImportRoute()).POST as never, { method: "POST", path: `/api/v1/projects/${f.projectId}/rooms/import?save=true`, cookie, params: { projectId: f.projectId }, rawBody: demoFile("orchard-end-rooms.csv"), contentType: "text/csv" }),
+  },
+  {
+    name: "GET /api/v1/projects/[projectId]/rooms/flow-temperature", kind: "route", fixture: { rooms: true }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await flowRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/rooms/flow-temperature?flowC=45&deltaK=5`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    // designers and owners get a team schematic, trainees a private practice one
+    name: "POST /api/v1/projects/[projectId]/drafts", kind: "route", fixture: { rooms: true }, expect: allow(["owner", "designer", "trainee"], 201),
+    call: async (f, cookie) => callRoute((await draftsRoute()).POST as never, { method: "POST", path: `/api/v1/projects/${f.projectId}/drafts`, cookie, params: { projectId: f.projectId }, body: { plant: JSON.parse(demoFile("orchard-end-plant.json")) } }),
+  },
+  {
+    name: "GET /api/v1/projects/[projectId]/emitter-list", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await emitterListRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/emitter-list`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    // the firm's own list sent back unchanged, so other rows see the same list
+    name: "PUT /api/v1/projects/[projectId]/emitter-list", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await emitterListRoute()).PUT as never, { method: "PUT", path: `/api/v1/projects/${f.projectId}/emitter-list`, cookie, params: { projectId: f.projectId }, rawBody: demoFile("fernbank-emitters.csv"), contentType: "text/csv" }),
   },
 
   // ——— public account actions: the same answer whoever calls (no role involved) ———

@@ -56,6 +56,11 @@ export function en12828FinalPressureBar(safetyValveBar: number): number {
   return safetyValveBar <= 5 ? safetyValveBar - 0.5 : 0.9 * safetyValveBar;
 }
 
+/** Water reserve V_WR = max(0.5 % of V_s, 3 L) (EN 12828 Annex D), L. */
+export function en12828WaterReserveL(systemVolumeL: number): number {
+  return Math.max(0.005 * systemVolumeL, 3);
+}
+
 /** Minimum cold fill pressure (bar g) for vessel volumeL with pre-charge p0 holding waterReserveL (Boyle, isothermal). */
 export function en12828MinimumFillPressureBar(volumeL: number, prechargeBar: number, waterReserveL: number): number {
   check("volumeL", volumeL, 0, true);
@@ -91,7 +96,7 @@ export function en12828Vessel(input: En12828Input): En12828Result {
     );
   }
   const expansionVolumeL = expansionFraction * systemVolumeL;
-  const waterReserveL = Math.max(0.005 * systemVolumeL, 3);
+  const waterReserveL = en12828WaterReserveL(systemVolumeL);
   const nominalVolumeL = ((expansionVolumeL + waterReserveL) * (finalPressureBar + 1)) / (finalPressureBar - prechargeBar);
   const minimumFillPressureBar = en12828MinimumFillPressureBar(nominalVolumeL, prechargeBar, waterReserveL);
   return {

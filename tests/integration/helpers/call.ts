@@ -25,9 +25,9 @@ export type Outcome = { status: number; body: any; setCookies: string[]; redirec
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
-export async function callRoute(handler: Handler | undefined, o: { method?: string; path: string; cookie: string | null; body?: unknown; params?: Record<string, string>; ip?: string; rawBody?: string }): Promise<Outcome> {
+export async function callRoute(handler: Handler | undefined, o: { method?: string; path: string; cookie: string | null; body?: unknown; params?: Record<string, string>; ip?: string; rawBody?: string; contentType?: string }): Promise<Outcome> {
   if (!handler) throw new Error(`No ${o.method ?? "GET"} handler exported for ${o.path}`);
-  const headers = new Headers({ "content-type": "application/json", "x-forwarded-for": o.ip ?? "10.9.9.9" });
+  const headers = new Headers({ "content-type": o.contentType ?? "application/json", "x-forwarded-for": o.ip ?? "10.9.9.9" });
   if (o.cookie) headers.set("cookie", o.cookie);
   const body = o.rawBody ?? (o.body === undefined ? undefined : JSON.stringify(o.body));
   const res = await handler(new Request(`http://test.local${o.path}`, { method: o.method ?? "GET", headers, body }), { params: Promise.resolve(o.params ?? {}) });

@@ -1,4 +1,6 @@
 import { randomUUID } from "node:crypto";
+import fs from "node:fs";
+import path from "node:path";
 import { db } from "@/lib/db";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { demoFirm } from "@/db/seeds/demo/people";
@@ -18,7 +20,10 @@ export type Fixture = {
 export const FIXTURE_PREFIX = `Matrix fixture ${randomUUID().slice(0, 6)}`;
 const roles = ["owner", "designer", "reviewer", "installer", "trainee"] as const;
 
-export async function makeFixture(o: { revisionStatus?: "draft" | "in-review" | "approved" | "issued" } = {}): Promise<Fixture> {
+/** The demo rooms (db/seeds/data/orchard-end-rooms.json), for fixtures that ask for rooms. */
+const demoRooms = () => JSON.parse(fs.readFileSync(path.join(process.cwd(), "db/seeds/data/orchard-end-rooms.json"), "utf8")).rooms;
+
+export async function makeFixture(o: { revisionStatus?: "draft" | "in-review" | "approved" | "issued"; rooms?: boolean } = {}): Promise<Fixture> {
   const projectId = randomUUID();
   const projectName = `${FIXTURE_PREFIX} ${projectId.slice(0, 8)}`;
   const doc = loadDemoDocument("millbrook-hall.json", projectName);
@@ -29,6 +34,7 @@ export async function makeFixture(o: { revisionStatus?: "draft" | "in-review" | 
     const [team] = await trx("schematics").insert({ project_id: projectId, name: "Plant room", kind: "team", owner_id: "demo-designer", draft: doc, updated_by: "demo-designer" }).returning("id");
     const [rev] = await trx("schematic_revisions").insert({ schematic_id: team.id, number: 1, document: doc, status: o.revisionStatus ?? "draft", author_id: "demo-designer" }).returning("id");
     const [practice] = await trx("schematics").insert({ project_id: projectId, name: "Nia's practice", kind: "practice", owner_id: "demo-trainee", variant_of: team.id, draft: doc, updated_by: "demo-trainee" }).returning("id");
+    if (o.rooms) await trx("project_rooms").insert({ project_id: projectId, rooms: JSON.stringify(demoRooms()), updated_by: "demo-designer" });
     const [inv] = await trx("invitations").insert({ project_id: projectId, email: `pending-${projectId.slice(0, 8)}@example.test`, role: "designer", token_hash: hash, invited_by: "demo-owner", expires_at: new Date(Date.now() + 86_400_000) }).returning("id");
     return { projectId, projectName, teamSchematicId: team.id, practiceSchematicId: practice.id, revisionId: rev.id, invitationId: inv.id, invitationToken: token, lockVersion: 1, doc };
   });
@@ -47,6 +53,8 @@ export async function snapshot(f: Fixture): Promise<string> {
     k("site_records").whereIn("revision_id", [f.revisionId]).select("*"),
     k("users").where("id", "like", "demo-%").orderBy("id").select("id", "email", "password_hash"),
     k("projects").where("name", "like", `${FIXTURE_PREFIX} new %`).count("* as n"),
+    k("project_rooms").where({ project_id: f.projectId }).select("*"),
+    k("firm_emitters").where({ organisation_id: demoFirm.id }).select("*"),
   ]);
   return JSON.stringify(parts);
 }

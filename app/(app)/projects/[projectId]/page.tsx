@@ -40,6 +40,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         <p className="text-sm text-ink-soft">
           You are <span className="font-medium text-copper-700">{role}</span> ·{" "}
           <Link href={`/projects/${projectId}/team`} className="text-copper-600 hover:underline">Team</Link>
+          {" · "}<Link href={`/projects/${projectId}/rooms`} className="text-copper-600 hover:underline">Rooms</Link>
         </p>
       </div>
       <div className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-soft" data-testid="project-design">
