@@ -19,7 +19,9 @@ import { sizeBypasses } from "./sizing/bypass";
 import { createContext, type EngineContext } from "./sizing/context";
 import { emitterResults, hotWaterResult } from "./sizing/emitters";
 import { runMode, type ModeRun } from "./sizing/mode";
-import { systemVolumeL, vesselResult, volumeResult } from "./sizing/vessel";
+import { noFlowFinding } from "./sizing/pipe-results";
+import { systemVolume, vesselResult, volumeResult } from "./sizing/vessel";
+import { resistanceRefs } from "./typical/resolve";
 
 export const ENGINE_VERSION = "1.0.0";
 
@@ -80,6 +82,8 @@ function bypassSection(
     recommendedOpeningKpa: first.recommendedOpeningKpa,
     heatSourceFlowAllZonesClosedM3h: flow,
     minFlowMet,
+    // the opening comes from circuit drops and a simulation: every resistance in the network
+    restsOn: resistanceRefs(ctx.inputs),
   };
 }
 
@@ -94,6 +98,7 @@ export function calculateSchematic(doc: Schematic): Results {
   const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
   const hotWater = hydraulic && hasCylinder ? runMode(ctx, "hot-water") : null;
   if (heating) minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode");
+  noFlowFinding(ctx, [...new Set([...(heating?.noFlow ?? []), ...(hotWater?.noFlow ?? [])])]);
   const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];
   const openings = new Map(sizings.map((s) => [s.id, s.openingKpa]));
   const warm = heating ? heating.solution.q : null;
@@ -101,7 +106,7 @@ export function calculateSchematic(doc: Schematic): Results {
   const run = hydraulic ? runScenarios(ctx, specs, openings, warm) : null;
   const ownShut = doc.scenarios && doc.scenarios.length > 0 ? undefined : run?.sims.get("all zones shut");
   const bypass = hydraulic ? bypassSection(ctx, heating, warm, openings, sizings, ownShut) : null;
-  const volumeL = systemVolumeL(ctx);
+  const volume = systemVolume(ctx);
   const fluid = ctx.fluid;
   return {
     engine: ENGINE_VERSION,
@@ -115,10 +120,11 @@ export function calculateSchematic(doc: Schematic): Results {
     },
     modes: [heating, hotWater].filter((m): m is ModeRun => m !== null).map((m) => m.result),
     bypass,
-    expansionVessel: vesselResult(ctx, volumeL),
-    volume: volumeResult(ctx, volumeL),
+    expansionVessel: vesselResult(ctx, volume),
+    volume: volumeResult(ctx, volume),
     emitters: emitterResults(ctx, unheated),
     hotWater: hotWaterResult(ctx),
     scenarios: run?.results ?? [],
+    assumptions: ctx.inputs.assumptions,
   };
 }
