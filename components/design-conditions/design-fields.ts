@@ -64,6 +64,6 @@ export function designLimits(key: DesignKey): { min: number | null; max: number 
 /** "5 to 110 °C" for the form's hint. */
 export function limitsText(f: DesignFieldInfo): string {
   const { min, max } = designLimits(f.key);
-  if (min !== null && max !== null) return `${min === 0 && f.key.endsWith("Mps") ? "above 0" : min} to ${max} ${f.unit}`;
-  return "";
+  if (min === null || max === null) return "";
+  return `${min === 0 && ["maxVelocityMps", "targetGradientPaPerM", "safetyValveBar"].includes(f.key) ? "above 0" : min} to ${max} ${f.unit}`;
 }

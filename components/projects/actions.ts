@@ -6,6 +6,8 @@ import { createSchematic } from "@/db/queries/schematics";
 import { refusal, runChecked } from "@/lib/persistence/outcome";
 import { makeVariant } from "@/lib/persistence/variants";
 import { parseSchematic } from "@/lib/schematic";
+import { projectDefaultsFrom, withProjectDefaults } from "@/lib/schematic/project-defaults";
+import { getProjectDesignConditions } from "@/db/queries/project-design";
 
 // Project page actions: a new, empty team schematic (designers, owners) and a private
 // practice copy of a team schematic (trainees; designers get a team variant).
@@ -16,7 +18,9 @@ export async function createSchematicAction(input: { projectId: string; name: st
     const { user } = await requireProjectRole(i.projectId, "schematic.edit");
     const blank = parseSchematic({ format: "loopwright/schematic", version: 1, name: i.name });
     if (!blank.ok) throw new Error("the blank schematic does not parse"); // a bug, not user input
-    const r = await createSchematic({ projectId: i.projectId, name: i.name, doc: blank.doc, userId: user.id, kind: "team" });
+    // A new schematic starts with the project's design conditions.
+    const doc = withProjectDefaults(blank.doc, projectDefaultsFrom(await getProjectDesignConditions(i.projectId)));
+    const r = await createSchematic({ projectId: i.projectId, name: i.name, doc, userId: user.id, kind: "team" });
     return r.ok ? { id: r.schematic.id } : refusal(r);
   });
 }

@@ -3,6 +3,7 @@
 import { useBoardApi } from "../board-api";
 import { useBoard } from "../store";
 import { severityStyle, sortedFindings } from "./findings";
+import { DesignFieldLinks } from "../design/design-field-links";
 
 /** Errors and warnings from the last "Size it"; clicking one selects the parts and pipes it names and brings them into view. */
 export function FindingsList() {
@@ -23,6 +24,7 @@ export function FindingsList() {
               <span className={`mr-1 text-xs font-semibold uppercase ${severityStyle[f.severity].className}`}>{severityStyle[f.severity].label}</span>
               <span className="text-ink">{f.message}</span>
             </button>
+            <DesignFieldLinks fields={f.fields} />
           </li>
         ))}
       </ul>

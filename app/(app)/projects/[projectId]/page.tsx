@@ -8,6 +8,9 @@ import { getProjectHead } from "@/db/queries/project-admin";
 import { listProjectSchematics } from "@/db/queries/schematics";
 import { NewSchematicForm } from "@/components/projects/new-schematic-form";
 import { SchematicCard } from "@/components/projects/schematic-card";
+import { ProjectDefaultsForm } from "@/components/design-conditions/project-defaults-form";
+import { projectDefaultsFrom } from "@/lib/schematic/project-defaults";
+import { getProjectDesignConditions } from "@/db/queries/project-design";
 
 export const metadata: Metadata = { title: "Project" };
 export const dynamic = "force-dynamic";
@@ -17,7 +20,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const access = await pageAccess(() => requireProjectRole(projectId, "project.read"));
   if (!access.ok) return <NotAllowed message={access.message} />;
   const { user, role } = access.value;
-  const [project, schematics] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id)]);
+  const [project, schematics, defaults] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id), getProjectDesignConditions(projectId)]);
   if (!project) notFound();
   // Variants are listed under the schematic they were made from; orphans stand on their own.
   const ids = new Set(schematics.map((s) => s.id));
@@ -59,6 +62,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ))}
         </ul>
       </section>
+      <ProjectDefaultsForm projectId={projectId} initial={projectDefaultsFrom(defaults)} canEdit={can(role, "project.update")} />
     </main>
   );
 }
