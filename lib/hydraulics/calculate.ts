@@ -82,6 +82,8 @@ function bypassSection(
     recommendedOpeningKpa: first.recommendedOpeningKpa,
     heatSourceFlowAllZonesClosedM3h: flow,
     minFlowMet,
+    zonesDpKpa: first.zonesDpKpa,
+    openZonesDpKpa: first.openZonesDpKpa,
     // the opening comes from circuit drops and a simulation: every resistance in the network
     restsOn: resistanceRefs(ctx.inputs),
   };

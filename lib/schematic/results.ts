@@ -114,6 +114,10 @@ export const resultsSchema = z.object({
       recommendedOpeningKpa: nnum,
       heatSourceFlowAllZonesClosedM3h: nnum,
       minFlowMet: z.boolean().nullable(),
+      /** the zones' largest design Δp between the bypass's ends, kPa (its working) */
+      zonesDpKpa: nnum.default(null),
+      /** the Δp the pumps put across its ends with every zone open and it shut, kPa (its working) */
+      openZonesDpKpa: nnum.default(null),
       restsOn,
     })
     .nullable(),

@@ -1,13 +1,13 @@
 "use client";
 
 import { useMemo } from "react";
-import type { ModeResult, Results, Schematic } from "@/lib/schematic";
+import { portRefLabel, type ModeResult, type Results, type Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
 import { velocityBand } from "../overlay/velocity-bands";
 import { suggestedSizeChanges } from "./apply-suggested-sizes";
 import { DataTable, type Columns } from "./data-table";
 import { Num } from "./num";
-import { pipeDpWorking, type Working } from "./working";
+import { pipeDpWorking, pipeFlowWorking, velocityWorking, type Working } from "./working";
 
 type Row = { pipe: Schematic["pipes"][number]; r: ModeResult["pipes"][number] | undefined; next: string | null };
 
@@ -21,17 +21,20 @@ export function PipeSchedule({ doc, results, mode, prefs, onShow }: { doc: Schem
       return <span className="num">{pipe.material} {pipe.size}{next && <span className="ml-1 text-warn" title="suggested size">→ {next}</span>}</span>;
     } },
     { id: "length", header: "Length", cell: ({ row }) => <Num text={`${row.original.pipe.lengthM.toFixed(1)} m`} /> },
-    { id: "flow", header: `Flow (${showFlow(0, prefs).unit})`, cell: ({ row }) => <Num text={showFlow(row.original.r?.flowM3h, prefs).value} /> },
+    { id: "flow", header: `Flow (${showFlow(0, prefs).unit})`, cell: ({ row }) =>
+      <Num text={showFlow(row.original.r?.flowM3h, prefs).value}
+        working={pipeFlowWorking(doc, results, row.original.pipe.id, mode)} onShow={onShow} /> },
     { id: "v", header: "Velocity (m/s)", cell: ({ row }) => {
       const v = row.original.r?.velocityMps;
       const band = velocityBand(v, doc.design.maxVelocityMps);
-      return <Num text={v === null || v === undefined ? "—" : Math.abs(v).toFixed(2)} tone={band === "high" ? "fault" : undefined} />;
+      return <Num text={v === null || v === undefined ? "—" : Math.abs(v).toFixed(2)} tone={band === "high" ? "fault" : undefined}
+        working={velocityWorking(doc, results, row.original.pipe.id, mode)} onShow={onShow} />;
     } },
     { id: "dp", header: `Δp (${showPressure(0, prefs).unit})`, cell: ({ row }) =>
-      <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={pipeDpWorking(doc, results, row.original.pipe.id)} onShow={onShow} /> },
+      <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={pipeDpWorking(doc, results, row.original.pipe.id, mode)} onShow={onShow} /> },
     { id: "grad", header: "Pa/m", cell: ({ row }) => <Num text={row.original.r?.gradientPaPerM?.toFixed(0) ?? "—"} /> },
-    { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{row.original.pipe.from} → {row.original.pipe.to}</span> },
-  ], [doc, results, prefs, rho, onShow]);
+    { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{portRefLabel(doc, row.original.pipe.from)} → {portRefLabel(doc, row.original.pipe.to)}</span> },
+  ], [doc, results, mode, prefs, rho, onShow]);
   const data = useMemo(() => {
     const next = new Map(suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]));
     return doc.pipes.map((pipe) => ({ pipe, r: mode.pipes.find((p) => p.id === pipe.id), next: next.get(pipe.id) ?? null }));

@@ -12,6 +12,7 @@ import { PlantSummary } from "./plant-summary";
 import { PumpDuty } from "./pump-duty";
 import { WorkingDialog } from "./working-dialog";
 import type { Working } from "./working";
+import { AssumptionsNote } from "./assumptions-note";
 
 /** The sizing report tab: every table from the last "Size it", numbers with working one click away. */
 export function SizingReport() {
@@ -29,11 +30,12 @@ export function SizingReport() {
   return (
     <div className="space-y-6 p-4" data-testid="sizing-report">
       {stale && <p role="status" className="rounded bg-warn/10 px-3 py-2 text-sm text-warn">The drawing changed since this report was computed — size it again.</p>}
+      <AssumptionsNote results={results} />
       <Section title="Pipe schedule" aside={<ApplySizesButton />}>
         <PipeSchedule doc={doc} results={results} mode={heating} prefs={prefs} onShow={onShow} />
       </Section>
       <Section title="Circuits"><CircuitsTable doc={doc} results={results} mode={heating} prefs={prefs} onShow={onShow} /></Section>
-      <Section title="Pump duty"><PumpDuty doc={doc} results={results} modes={results.modes} prefs={prefs} /></Section>
+      <Section title="Pump duty"><PumpDuty doc={doc} results={results} modes={results.modes} prefs={prefs} onShow={onShow} /></Section>
       <Section title="Bypass, vessel, volumes and hot water"><PlantSummary doc={doc} results={results} prefs={prefs} onShow={onShow} /></Section>
       <Section title="Emitters"><EmittersTable doc={doc} results={results} onShow={onShow} /></Section>
       <p className="border-t border-ink/10 pt-3 text-xs text-ink-faint">

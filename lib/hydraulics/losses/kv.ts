@@ -65,3 +65,6 @@ export function kvForLossCoefficient(k: number, innerDiameterMm: number): number
   const areaM2 = (Math.PI * (innerDiameterMm / 1000) ** 2) / 4;
   return 3600 * areaM2 * Math.sqrt((2 * DP0_PA) / (RHO0_KGM3 * k));
 }
+
+/** The citation shown with Kv workings. */
+export const KV_SOURCE = "IEC 60534-1 flow coefficient: Kv = Q·√((ρ/1000)/(Δp/1 bar)), Q in m³/h";

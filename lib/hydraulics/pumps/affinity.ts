@@ -13,6 +13,12 @@
  */
 import { pumpHeadKpa, type PumpCurve } from "./curve";
 
+/**
+ * A pump whose available head exceeds the required by more than this fraction
+ * is oversized (sizing/pumps.ts): common practice, not a standard value.
+ */
+export const PUMP_OVERSIZE_MARGIN = 0.25;
+
 /** Head (kPa) of the curve drawn when run at speed fraction n: n²·H(q/n); null off the curve. */
 export function headAtSpeedKpa(curve: PumpCurve, speedFraction: number, flowM3h: number): number | null {
   if (!(speedFraction > 0)) throw new RangeError(`speedFraction must be > 0, got ${speedFraction}`);
@@ -45,3 +51,6 @@ export function affinitySpeedFraction(curve: PumpCurve, flowM3h: number, headKpa
   }
   return (lo + hi) / 2;
 }
+
+/** The citation shown with the pump-setting working. */
+export const AFFINITY_SOURCE = "pump affinity laws Q ∝ n, H ∝ n² (Bachus & Custodio, Know and Understand Centrifugal Pumps, 2003, p. 114)";

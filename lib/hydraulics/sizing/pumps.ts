@@ -17,11 +17,8 @@ import type { EngineContext } from "./context";
 import { requiredHeads, type CircuitAnalysis } from "./circuits";
 import type { DesignSolution } from "./design-solution";
 import { pumpHeadAt } from "./part-results";
-import { affinitySpeedFraction } from "@/lib/hydraulics/pumps/affinity";
+import { affinitySpeedFraction, PUMP_OVERSIZE_MARGIN } from "@/lib/hydraulics/pumps/affinity";
 import { usableCurve } from "./laws";
-
-/** Available head more than this fraction above the required is an oversized pump (common practice). */
-export const PUMP_OVERSIZE_MARGIN = 0.25;
 
 const fin = (x: number | null): number | null => (x !== null && Number.isFinite(x) ? x : null);
 
