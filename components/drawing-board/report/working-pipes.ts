@@ -38,7 +38,7 @@ export function pipeFlowWorking(doc: Schematic, results: Results, pipeId: string
       ...(loop ? [{ label: "on a loop", value: "the split follows the resistances (gradient method)" }] : []),
       ...((x.r.flowM3h ?? 0) < 0 ? [{ label: "sign", value: "negative: the pipe is drawn against the flow" }] : []),
     ],
-    result: `${f(x.r.flowM3h, 3)} m³/h`,
+    result: `${f(x.r.flowM3h, 4)} m³/h`,
     value: x.r.flowM3h,
     source: "Continuity (conservation of mass) at every junction; loads at q = P/(ρ·cp·ΔT)",
     figures: { sumM3h: sum, flowM3h: q },
