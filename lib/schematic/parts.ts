@@ -120,10 +120,10 @@ const wordPorts: Record<string, string> = { coilFlow: "coil flow", coilReturn: "
 
 export function portLabel(type: PartType, port: string): string {
   const info = partRegistry[type];
-  if (info.role === "header") return headerPorts[port] ?? port;
+  if (info.role === "header" && headerPorts[port]) return headerPorts[port];
   if (type === "manifold" && /^p\d+$/.test(port)) return `outlet ${port.slice(1)}`;
   if ((type === "tee" || info.role === "link" || info.role === "bypass") && (port === "a" || port === "b" || port === "c")) return port.toUpperCase();
-  return wordPorts[port] ?? port;
+  return wordPorts[port] ?? port.replace(/([a-z])([A-Z])/g, "$1 $2").toLowerCase();
 }
 
 /** "buf.p1" → "buf primary flow" for messages and lists. */

@@ -81,7 +81,7 @@ export const partPropsSchemas = {
   "heat-meter": z.object({ kv: optionalKv("Kv", "flow sensor") }),
   tee: empty,
   manifold: z.object({
-    outlets: z.number().int().min(1).max(64).default(2).describe("number of outlet ports p1…pN"),
+    outlets: z.number().int().min(1).max(64).default(2).describe("number of outlets"),
   }),
   "buffer-vessel": z.object({ volumeL: volumeL("water content").default(40) }),
   "low-loss-header": z.object({ volumeL: volumeL("water content").default(2) }),

@@ -55,7 +55,7 @@ function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)
     if (dMm === undefined || epsMm === undefined) {
       findings.error(
         "input.pipe-size",
-        `pipe ${pipe.id}: no ${pipe.material} size "${pipe.size}" in the catalogue and no innerDiameterMm/roughnessMm given`,
+        `pipe ${pipe.id}: no ${pipe.material} size "${pipe.size}" in the catalogue and no inner diameter and roughness typed for it`,
         [pipe.id],
       );
       return null;
@@ -114,7 +114,7 @@ export function createContext(doc: Schematic, findings: Findings): EngineContext
   } catch (e) {
     findings.error(
       "fluid.out-of-range",
-      `fluid: no properties for ${doc.fluid.kind} at ${meanC} °C (${(e as Error).message}); hydraulic results are not computed`,
+      `fluid: no properties for ${doc.fluid.kind} at ${meanC} °C (${(e as Error).message.replace(/^tC: /, "")}); hydraulic results are not computed`,
       [],
       ["fluid.kind", "fluid.percentByVolume", "design.flowTemperatureC"],
     );
