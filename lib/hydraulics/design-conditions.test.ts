@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { designConditionIssues } from "./design-conditions";
 import { designSchema } from "@/lib/schematic/schema";
+import { calculate } from "@/lib/hydraulics/calculate";
+import { resultsSchema } from "@/lib/schematic/results";
+import { smallSystem } from "@/lib/hydraulics/testing/small-system";
 
 const base = designSchema.parse({});
 const paths = (design: object, fluid: object = { kind: "water" }) => designConditionIssues({ ...base, ...design }, fluid).map((i) => i.path);
@@ -25,5 +28,20 @@ describe("design conditions sizing could not use are refused, naming the field",
     expect(paths({ maxFlowTemperatureC: 40 })).toContain("design.maxFlowTemperatureC");
     expect(paths({ hotWaterFlowTemperatureC: 40 })).toContain("design.hotWaterFlowTemperatureC");
     expect(paths({ flowTemperatureC: "hot" })).toContain("design.flowTemperatureC");
+  });
+});
+
+describe("the same bad conditions reaching the engine (a document typed by hand): findings naming the field, never a NaN", () => {
+  it.each([
+    ["return above flow", (d: ReturnType<typeof smallSystem>) => Object.assign(d.design, { returnTemperatureC: 50 }), "design.returnTemperatureC"],
+    ["glycol outside the tables", (d: ReturnType<typeof smallSystem>) => Object.assign(d, { fluid: { kind: "propylene-glycol", percentByVolume: 55 } }), "fluid.percentByVolume"],
+    ["static height the safety valve cannot take", (d: ReturnType<typeof smallSystem>) => Object.assign(d.design, { staticHeightM: 30 }), "design.staticHeightM"],
+  ])("%s", (_what, change, field) => {
+    const d = smallSystem();
+    change(d);
+    const r = calculate(d);
+    if (!r.ok) throw new Error(JSON.stringify(r.issues));
+    resultsSchema.parse(r.results); // zod numbers reject NaN and ±Infinity
+    expect(r.results.findings.some((f) => f.fields?.includes(field))).toBe(true);
   });
 });

@@ -45,7 +45,7 @@ const COMMON = "common practice, from memory";
 export const typicalValues: readonly TypicalValue[] = [
   {
     type: "heat-pump", field: "kv", kind: "resistance", empty: "typical", rule: { kind: "dp-at-flow", dpKpa: 20 },
-    basis: "plate heat exchanger losing 20 kPa at the heat pump's rated flow (rated output at the design ΔT); makers' sheets give about 15–30 kPa",
+    basis: "plate heat exchanger losing 20 kPa at the heat pump's rated flow (rated output at the design ΔT); makers' sheets give about 15–30 kPa. If the pump curve typed is already the head left at the connections, type a Kv of 1000 so the drop is not counted twice",
     source: COMMON,
   },
   {
