@@ -21,14 +21,11 @@ const words = (field: string) => fieldWords[field] ?? field;
 export function inputFindings(doc: Schematic, inputs: ResolvedInputs, findings: Findings): void {
   const typeOf = new Map(doc.parts.map((p) => [p.id, p.type]));
   if (inputs.assumptions.length > 0) {
-    const shown = inputs.assumptions.slice(0, 12).map((a) => {
-      const v = a.kind === "water" ? `${a.value.toFixed(1)} L` : `Kv ${a.value.toFixed(2)}`;
-      return `${a.part} ${words(a.field)} ${v} (${a.basis}; ${a.source})`;
-    });
-    const more = inputs.assumptions.length > 12 ? `; and ${inputs.assumptions.length - 12} more` : "";
+    const shown = inputs.assumptions.slice(0, 20).map((a) => `${a.part} ${words(a.field)} ${a.value.toFixed(a.kind === "water" ? 1 : 2)}${a.kind === "water" ? " L" : ""}`);
+    const more = inputs.assumptions.length > 20 ? `, and ${inputs.assumptions.length - 20} more` : "";
     findings.warning(
       "input.assumed-values",
-      `typical values assumed where none was given — ${shown.join("; ")}${more}. Numbers that rest on them are marked; type the makers' values to replace them`,
+      `typical values assumed where none was given: ${shown.join(", ")}${more}. Numbers that rest on them are marked ≈ and their working gives each value's basis; type the makers' values to replace them`,
       [...new Set(inputs.assumptions.map((a) => a.part))],
     );
   }
