@@ -18,6 +18,7 @@ export function BoardTopBar(props: {
   const canRedo = useBoard((s) => s.future.length > 0 && !s.readOnly);
   const readOnly = useBoard((s) => s.readOnly);
   const dispatch = useBoard((s) => s.dispatch);
+  const showDesign = useBoard((s) => s.showDesign);
   return (
     <div className="flex flex-wrap items-center gap-1 border-b border-ink/10 bg-white px-2 py-1.5">
       {!readOnly && <button type="button" className={`${btn} md:hidden`} onClick={props.onToggleBin} aria-label="Parts bin">Parts</button>}
@@ -25,6 +26,9 @@ export function BoardTopBar(props: {
       {readOnly && <span className="rounded bg-paper-dark px-1.5 py-0.5 text-xs text-ink-soft">read-only</span>}
       <button type="button" className={btn} disabled={!canUndo} onClick={() => dispatch("undo")} title="Undo (Ctrl/⌘+Z)" aria-label="Undo">↶ Undo</button>
       <button type="button" className={btn} disabled={!canRedo} onClick={() => dispatch("redo")} title="Redo (Ctrl/⌘+Shift+Z)" aria-label="Redo">↷ Redo</button>
+      <button type="button" className={btn} onClick={() => showDesign()} data-testid="open-design" aria-label="Design conditions">
+        <span className="sm:hidden">Design</span><span className="hidden sm:inline">Design conditions</span>
+      </button>
       {props.onTab && (
         <div className="ml-2 flex rounded-md border border-ink/10 p-0.5 text-sm" role="tablist">
           {(["drawing", "report"] as const).map((t) => (

@@ -64,6 +64,13 @@ function Shell(props: DrawingBoardProps) {
   const [bin, setBin] = useState(false);
   const [details, setDetails] = useState(false);
   const [tab, setTab] = useState<"drawing" | "report">("drawing");
+  const designFocus = useBoard((s) => s.designFocus);
+  // Asked for the Design conditions (top bar, a finding's link): show the drawing and, on a phone, open the details drawer.
+  useEffect(() => {
+    if (!designFocus) return;
+    setTab("drawing");
+    setDetails(true);
+  }, [designFocus]);
   return (
     <ReactFlowProvider>
       <ApiBridge onChange={props.onChange} onReady={props.onReady} />

@@ -6,7 +6,7 @@
  */
 import { useMemo, useState, type DragEvent } from "react";
 import { useReactFlow, useStore } from "@xyflow/react";
-import { partGroups, partRegistry, partTypes, type PartType } from "@/lib/schematic";
+import { partGroups, partMatches, partRegistry, partTypes, type PartType } from "@/lib/schematic";
 import { GRID, PART_MIME } from "./canvas";
 import { layoutOf, symbols } from "./parts";
 import { freeSpotNear } from "./commands";
@@ -30,8 +30,7 @@ export function PartsBin() {
   const flow = useReactFlow();
   const size = useStore((s) => ({ w: s.width, h: s.height }), (a, b) => a.w === b.w && a.h === b.h);
   const groups = useMemo(() => {
-    const q = query.trim().toLowerCase();
-    const hit = (t: PartType) => !q || t.includes(q) || partRegistry[t].label.toLowerCase().includes(q);
+    const hit = (t: PartType) => partMatches(t, query);
     return partGroups.map((g) => ({ group: g, types: partTypes.filter((t) => partRegistry[t].group === g && hit(t)) })).filter((g) => g.types.length > 0);
   }, [query]);
 
@@ -64,7 +63,7 @@ export function PartsBin() {
                     data-part={t} title={`Drag onto the board, or click to add ${partRegistry[t].label.toLowerCase()}`}
                     className="flex w-full items-center gap-2 rounded-md px-1.5 py-1 text-left text-sm text-ink hover:bg-copper-50 disabled:cursor-default disabled:opacity-50">
                     <Thumb type={t} />
-                    <span className="truncate">{partRegistry[t].label}</span>
+                    <span className="leading-tight">{partRegistry[t].label}</span>
                   </button>
                 </li>
               ))}

@@ -29,6 +29,8 @@ export interface BoardActions {
   setHint(hint: string | null): void;
   /** E.g. after "start a new draft" on an issued revision. */
   setReadOnly(readOnly: boolean): void;
+  /** Show the Design conditions panel (clears the selection), focused on a field such as "design.safetyValveBar". */
+  showDesign(field?: string | null): void;
 }
 export type BoardStore = StoreApi<BoardState & BoardActions>;
 
@@ -74,6 +76,7 @@ export function createBoardStore(initialDoc: Schematic, opts: StoreOptions = { r
     readOnly: opts.readOnly,
     hint: null,
     pasteCount: 0,
+    designFocus: null,
     autoOrient: autoOrient(initialDoc),
     dispatch(id, ...rest) {
       const cmd = commands[id];
@@ -122,6 +125,9 @@ export function createBoardStore(initialDoc: Schematic, opts: StoreOptions = { r
     },
     setReadOnly(readOnly) {
       set({ readOnly });
+    },
+    showDesign(field = null) {
+      set({ selection: { parts: [], pipes: [] }, designFocus: { field, n: (get().designFocus?.n ?? 0) + 1 } });
     },
   }));
 }

@@ -15,7 +15,7 @@ export function ProjectForm({ initial, submitLabel, onSubmit, onCancel }: {
   initial: ProjectFields; submitLabel: string; onSubmit: (v: ProjectFields) => Promise<Result>; onCancel?: () => void;
 }) {
   const [v, setV] = useState(initial);
-  const [temps, setTemps] = useState({ flow: String(initial.design.flowTemperatureC), ret: String(initial.design.returnTemperatureC), out: String(initial.design.outdoorC) });
+  const [temps, setTemps] = useState({ flow: String(initial.design.flowTemperatureC), ret: String(initial.design.returnTemperatureC), out: initial.design.outdoorC === null ? "" : String(initial.design.outdoorC) });
   const [state, setState] = useState<{ error: string; issues: Issue[] } | null>(null);
   const [busy, setBusy] = useState(false);
   const issue = (path: string) => state?.issues.find((i) => i.path === path)?.message;
@@ -23,7 +23,7 @@ export function ProjectForm({ initial, submitLabel, onSubmit, onCancel }: {
     e.preventDefault();
     setBusy(true);
     const num = (s: string) => (s.trim() === "" ? Number.NaN : Number(s));
-    const r = await onSubmit({ ...v, design: { ...v.design, flowTemperatureC: num(temps.flow), returnTemperatureC: num(temps.ret), outdoorC: num(temps.out) } });
+    const r = await onSubmit({ ...v, design: { ...v.design, flowTemperatureC: num(temps.flow), returnTemperatureC: num(temps.ret), outdoorC: temps.out.trim() === "" ? null : num(temps.out) } });
     setBusy(false);
     setState(r.ok ? null : { error: r.error, issues: r.issues ?? [] });
   };

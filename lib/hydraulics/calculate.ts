@@ -19,10 +19,13 @@ import { sizeBypasses } from "./sizing/bypass";
 import { createContext, type EngineContext } from "./sizing/context";
 import { emitterResults, hotWaterResult } from "./sizing/emitters";
 import { runMode, type ModeRun } from "./sizing/mode";
-import { systemVolumeL, vesselResult, volumeResult } from "./sizing/vessel";
+import { noFlowFinding } from "./sizing/pipe-results";
+import { systemVolume, vesselResult, volumeResult } from "./sizing/vessel";
+import { resistanceRefs } from "./typical/resolve";
 
 // 1.1.0: findings name the mode or scenario they were found in; scenario pipes carry their velocity.
-export const ENGINE_VERSION = "1.1.0";
+// 1.2.0: typical values for what the designer left empty (assumptions, restsOn), pump settings, magnetic filter.
+export const ENGINE_VERSION = "1.2.0";
 
 export type CalculateResult = { ok: true; results: Results } | { ok: false; issues: Issue[] };
 
@@ -81,6 +84,10 @@ function bypassSection(
     recommendedOpeningKpa: first.recommendedOpeningKpa,
     heatSourceFlowAllZonesClosedM3h: flow,
     minFlowMet,
+    zonesDpKpa: first.zonesDpKpa,
+    openZonesDpKpa: first.openZonesDpKpa,
+    // the opening comes from circuit drops and a simulation: every resistance in the network
+    restsOn: resistanceRefs(ctx.inputs),
   };
 }
 
@@ -98,6 +105,7 @@ export function calculateSchematic(doc: Schematic): Results {
   const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
   const hotWater = hydraulic && hasCylinder ? inHotWater(() => runMode(ctx, "hot-water")) : null;
   if (heating) inHeating(() => minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode"));
+  noFlowFinding(ctx, [...new Set([...(heating?.noFlow ?? []), ...(hotWater?.noFlow ?? [])])]);
   const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];
   const openings = new Map(sizings.map((s) => [s.id, s.openingKpa]));
   const warm = heating ? heating.solution.q : null;
@@ -105,7 +113,7 @@ export function calculateSchematic(doc: Schematic): Results {
   const run = hydraulic ? runScenarios(ctx, specs, openings, warm) : null;
   const ownShut = doc.scenarios && doc.scenarios.length > 0 ? undefined : run?.sims.get("all zones shut");
   const bypass = hydraulic ? bypassSection(ctx, heating, warm, openings, sizings, ownShut) : null;
-  const volumeL = systemVolumeL(ctx);
+  const volume = systemVolume(ctx);
   const fluid = ctx.fluid;
   return {
     engine: ENGINE_VERSION,
@@ -119,10 +127,11 @@ export function calculateSchematic(doc: Schematic): Results {
     },
     modes: [heating, hotWater].filter((m): m is ModeRun => m !== null).map((m) => m.result),
     bypass,
-    expansionVessel: vesselResult(ctx, volumeL),
-    volume: volumeResult(ctx, volumeL),
+    expansionVessel: vesselResult(ctx, volume),
+    volume: volumeResult(ctx, volume),
     emitters: inHeating(() => emitterResults(ctx, unheated)),
     hotWater: inHotWater(() => hotWaterResult(ctx)),
     scenarios: run?.results ?? [],
+    assumptions: ctx.inputs.assumptions,
   };
 }

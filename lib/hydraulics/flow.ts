@@ -39,3 +39,6 @@ export function heatForFlowW(flowM3s: number, deltaTK: number, densityKgM3: numb
   }
   return densityKgM3 * flowM3s * specificHeatJkgK * deltaTK;
 }
+
+/** The citation shown with design-flow workings. */
+export const HEAT_BALANCE_SOURCE = "steady-flow energy balance Φ = ρ·V̇·cp·ΔT (first law of thermodynamics)";

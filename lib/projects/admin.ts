@@ -8,7 +8,7 @@ import { requestIp } from "@/lib/auth/request-context";
 import { deleteProjectRow, firmOfUser, getProjectHead, insertProject, projectNameTaken, updateProjectRow } from "@/db/queries/project-admin";
 import { demoProjects, loadDemoDocument } from "@/db/seeds/demo/projects";
 import { parseSchematic } from "@/lib/schematic";
-import { designDefaultsSchema, readDesignDefaults } from "./design-defaults";
+import { designDefaultsSchema, withDesignDefaults } from "./design-defaults";
 
 const nameField = z.string({ error: "Project name is required." }).trim().min(1, "Project name is required.").max(160, "Project name must be at most 160 characters.");
 const clientField = z.string().trim().max(160, "Client must be at most 160 characters.");
@@ -41,7 +41,7 @@ export async function createProject(raw: unknown): Promise<{ id: string; name: s
   const input = newProjectInput.parse(raw);
   const firm = await firmFor(user.id);
   if (await projectNameTaken(firm, input.name)) throw new UserError(409, `Your firm already has a project called "${input.name}". Choose another name.`);
-  const project = await insertProject(firm, user.id, input);
+  const project = await insertProject(firm, user.id, { ...input, design: withDesignDefaults({}, input.design) });
   await audit({ actorId: user.id, action: "project.created", projectId: project.id, target: project.name, ip: await requestIp() });
   return project;
 }
@@ -61,7 +61,7 @@ export async function updateProject(projectId: string, raw: unknown) {
   if (change.name && change.name.toLowerCase() !== head.name.toLowerCase() && (await projectNameTaken(head.organisationId, change.name))) {
     throw new UserError(409, `Your firm already has a project called "${change.name}". Choose another name.`);
   }
-  await updateProjectRow(projectId, change);
+  await updateProjectRow(projectId, { ...change, design: change.design ? withDesignDefaults(head.design, change.design) : undefined });
   const action = change.archived === true ? "project.archived" : change.archived === false ? "project.restored" : "project.updated";
   await audit({ actorId: user.id, action, projectId, target: change.name ?? head.name, detail: { ...change }, ip: await requestIp() });
   return { project: await getProjectHead(projectId) };
@@ -80,7 +80,7 @@ export async function copyDemoProject(): Promise<{ id: string; name: string }> {
   const demo = demoProjects.find((p) => p.name === "Orchard End")!;
   let name = `${demo.name} (demo copy)`;
   for (let n = 2; await projectNameTaken(firm, name); n++) name = `${demo.name} (demo copy ${n})`;
-  const project = await insertProject(firm, user.id, { name, client: demo.client, site: demo.site, design: readDesignDefaults(demo.design) },
+  const project = await insertProject(firm, user.id, { name, client: demo.client, site: demo.site, design: demo.design },
     demo.schematics.map((s) => ({ name: s.name, doc: demoDocument(s.file, `${demo.name} — ${s.name}`) })));
   await audit({ actorId: user.id, action: "project.created", projectId: project.id, target: project.name, detail: { copyOf: "demo" }, ip: await requestIp() });
   return project;

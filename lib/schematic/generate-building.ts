@@ -270,7 +270,7 @@ export function generateBuilding(options: BuildingOptions): Schematic {
       flowTemperatureC: tf, returnTemperatureC: tr, coldFillPressureBar: fillBar,
       safetyValveBar: svBar, staticHeightM: staticM,
       maxVelocityMps: MAX_V, targetGradientPaPerM: 300, fillTemperatureC: 10, maxFlowTemperatureC: null,
-      minOutdoorTemperatureC: null,
+      hotWaterFlowTemperatureC: null, minOutdoorTemperatureC: null,
     },
     parts,
     pipes,

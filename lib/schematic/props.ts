@@ -8,11 +8,14 @@
  */
 import { z } from "zod";
 
-const kv = (what: string) =>
-  z.number().min(0.001).max(1000).describe(`${what}, Kv in m³/h at 1 bar`);
-const optionalKv = (what: string) => kv(what).nullable().default(null);
-const powerW = (what: string) => z.number().min(0).max(5_000_000).describe(`${what}, W`);
-const volumeL = (what: string) => z.number().min(0).max(1_000_000).describe(`${what}, litres`);
+/** A Kv field: `label` is what the form shows ("Kvs", "Kv (open)"), `what` its one-line meaning. */
+const kv = (label: string, what: string) =>
+  z.number().min(0.001).max(1000).describe(`${label}, ${what} (m³/h at 1 bar)`);
+/** Empty (null): see lib/hydraulics/typical — a typical value, "not counted", or computed by sizing. */
+const optionalKv = (label: string, what: string) => kv(label, what).nullable().default(null);
+const nullText = (hint?: string) => (hint ? ` (null: ${hint})` : "");
+const powerW = (what: string, hint?: string) => z.number().min(0).max(5_000_000).describe(`${what}, W${nullText(hint)}`);
+const volumeL = (what: string, hint?: string) => z.number().min(0).max(1_000_000).describe(`${what}, litres${nullText(hint)}`);
 const deltaTK = z
   .number()
   .min(0.5)
@@ -31,9 +34,9 @@ export const pumpCurveSchema = z
 const heatSource = z.object({
   ratedOutputKw: z.number().positive().max(100_000).default(7).describe("rated heat output, kW"),
   minFlowM3h: z.number().min(0).max(10_000).default(0).describe("minimum flow through the heat source, m³/h"),
-  kv: optionalKv("heat exchanger resistance"),
-  waterVolumeL: volumeL("water content").default(0),
-  minSystemVolumeL: volumeL("minimum system water volume (defrost)").nullable().default(null),
+  kv: optionalKv("Kv (heat exchanger)", "resistance of its own heat exchanger"),
+  waterVolumeL: volumeL("water content").nullable().default(null),
+  minSystemVolumeL: volumeL("minimum system water volume (defrost)", "not checked").nullable().default(null),
   pumpCurve: pumpCurveSchema.nullable().default(null).describe("built-in pump curve, points [flow m³/h, head kPa] (null: no own pump)"),
 });
 
@@ -50,51 +53,52 @@ export const partPropsSchemas = {
     ]),
   }),
   "zone-valve": z.object({
-    kvs: kv("fully open").default(4),
+    kvs: kv("Kvs", "fully open").default(4),
     open: z.boolean().default(true).describe("open as drawn"),
   }),
   "diverter-valve": z.object({
-    kvs: kv("each way, fully open").default(4),
+    kvs: kv("Kvs", "each way, fully open").default(4),
     position: z.enum(["a", "b"]).default("a").describe("port joined to ab as drawn"),
   }),
   "dp-bypass-valve": z.object({
-    kvs: kv("fully open").default(2),
+    kvs: kv("Kvs", "fully open").default(2),
     openingKpa: z
       .number()
       .positive()
       .max(1000)
       .nullable()
       .default(null)
-      .describe("opening differential pressure, kPa (null: recommend one)"),
+      .describe("opening differential pressure, kPa (null: computed by sizing)"),
   }),
-  "balancing-valve": z.object({ kv: optionalKv("preset (null: compute the preset)") }),
+  "balancing-valve": z.object({ kv: optionalKv("Kv (preset)", "the valve's setting") }),
   "isolation-valve": z.object({
-    kv: optionalKv("open"),
+    kv: optionalKv("Kv (open)", "fully open"),
     open: z.boolean().default(true).describe("open as drawn"),
   }),
-  "check-valve": z.object({ kv: optionalKv("open") }),
-  strainer: z.object({ kv: optionalKv("clean") }),
-  "heat-meter": z.object({ kv: optionalKv("flow sensor") }),
+  "check-valve": z.object({ kv: optionalKv("Kv (open)", "held open by the flow") }),
+  strainer: z.object({ kv: optionalKv("Kv (clean)", "with a clean screen") }),
+  "magnetic-filter": z.object({ kv: optionalKv("Kv (clean)", "with a clean magnet and chamber") }),
+  "heat-meter": z.object({ kv: optionalKv("Kv", "flow sensor") }),
   tee: empty,
   manifold: z.object({
-    outlets: z.number().int().min(1).max(64).default(2).describe("number of outlet ports p1…pN"),
+    outlets: z.number().int().min(1).max(64).default(2).describe("number of outlets"),
   }),
   "buffer-vessel": z.object({ volumeL: volumeL("water content").default(40) }),
   "low-loss-header": z.object({ volumeL: volumeL("water content").default(2) }),
   cylinder: z.object({
     volumeL: volumeL("stored hot water").default(200),
-    coilKv: kv("coil").default(4),
+    coilKv: kv("Coil Kv", "the cylinder's coil").default(4),
     coilOutputKw: z.number().positive().max(10_000).default(10).describe("coil output, kW"),
     storeTemperatureC: z.number().min(30).max(95).default(60).describe("store temperature, °C"),
     coldWaterC: z.number().min(0).max(30).default(10).describe("cold feed temperature, °C"),
-    coilWaterVolumeL: volumeL("coil water content").default(0),
+    coilWaterVolumeL: volumeL("coil water content").nullable().default(null),
   }),
   radiator: z.object({
     outputAtDt50W: z.number().positive().max(100_000).default(1000).describe("EN 442 output at ΔT 50 K, W"),
     exponentN: z.number().min(1).max(2).default(1.3).describe("EN 442 exponent n"),
     roomTemperatureC: z.number().min(-10).max(40).default(20).describe("room temperature, °C"),
-    heatLoadW: powerW("room heat load").nullable().default(null),
-    valveKv: optionalKv("radiator valve (lockshield) preset"),
+    heatLoadW: powerW("room heat load", "its output at design is taken as its load").nullable().default(null),
+    valveKv: optionalKv("Valve Kv", "radiator valve and lockshield together"),
     deltaTK,
     waterVolumeL: volumeL("water content").nullable().default(null),
   }),
@@ -109,7 +113,7 @@ export const partPropsSchemas = {
       .max(10_000)
       .nullable()
       .default(null)
-      .describe("heated floor area of the loop, m² (null: the EN 1264 floor check is skipped)"),
+      .describe("heated floor area of the loop, m² (null: the floor is not checked against EN 1264)"),
     roomTemperatureC: z.number().min(-10).max(40).default(20).describe("room temperature, °C"),
     maxSurfaceTemperatureC: z
       .number()
@@ -120,19 +124,19 @@ export const partPropsSchemas = {
   }),
   "fan-coil": z.object({
     heatLoadW: powerW("heat load").default(2000),
-    kv: optionalKv("coil"),
+    kv: optionalKv("Coil Kv", "the fan coil's water coil"),
     deltaTK,
     waterVolumeL: volumeL("water content").nullable().default(null),
   }),
   "heat-load": z.object({
     heatLoadW: powerW("heat load").default(1000),
-    kv: optionalKv("load"),
+    kv: optionalKv("Kv", "resistance of the load"),
     deltaTK,
     waterVolumeL: volumeL("water content").nullable().default(null),
   }),
   "expansion-vessel": z.object({
     volumeL: volumeL("nominal volume").default(12),
-    prechargeBar: z.number().min(0).max(10).nullable().default(null).describe("pre-charge pressure, bar gauge"),
+    prechargeBar: z.number().min(0).max(10).nullable().default(null).describe("pre-charge pressure, bar gauge (null: computed by sizing)"),
   }),
   "safety-valve": z.object({ setBar: z.number().positive().max(16).default(3).describe("set pressure, bar gauge") }),
   "air-vent": empty,

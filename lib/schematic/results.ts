@@ -8,6 +8,8 @@ import { z } from "zod";
 
 const num = z.number();
 const nnum = z.number().nullable();
+/** Refs ("partId.field") of the assumed values a number rests on (see `assumptions`); empty: none. */
+const restsOn = z.array(z.string()).default([]);
 
 export const findingSchema = z.object({
   severity: z.enum(["error", "warning", "info"]),
@@ -18,6 +20,21 @@ export const findingSchema = z.object({
   mode: z.enum(["heating", "hot-water"]).optional(),
   /** The simulated scenario it was found in, by name. */
   scenario: z.string().optional(),
+  /** Design conditions the finding is about, as document paths (e.g. "design.minOutdoorTemperatureC"). */
+  fields: z.array(z.string()).optional(),
+});
+
+/** A value the designer left empty, for which the engine used a typical value (lib/hydraulics/typical). */
+export const assumptionSchema = z.object({
+  ref: z.string(),
+  part: z.string(),
+  field: z.string(),
+  kind: z.enum(["resistance", "water"]),
+  value: num,
+  unit: z.string(),
+  basis: z.string(),
+  working: z.string(),
+  source: z.string(),
 });
 
 export const pipeResultSchema = z.object({
@@ -31,7 +48,7 @@ export const pipeResultSchema = z.object({
   suggestedSize: z.string().nullable(),
 });
 
-export const partResultSchema = z.object({ id: z.string(), flowM3h: nnum, pressureDropKpa: nnum });
+export const partResultSchema = z.object({ id: z.string(), flowM3h: nnum, pressureDropKpa: nnum, restsOn });
 
 export const circuitSchema = z.object({
   load: z.string(),
@@ -41,6 +58,7 @@ export const circuitSchema = z.object({
   index: z.boolean(),
   excessKpa: nnum,
   balancingKv: nnum,
+  restsOn,
 });
 
 export const pumpDutySchema = z.object({
@@ -49,6 +67,13 @@ export const pumpDutySchema = z.object({
   requiredHeadKpa: nnum,
   availableHeadKpa: nnum,
   ok: z.boolean().nullable(),
+  /** available − required at the design flow, kPa */
+  surplusKpa: nnum.default(null),
+  /** speed, as a fraction of the curve drawn, at which the pump meets the duty (affinity laws); null when not oversized or not computable */
+  speedFraction: nnum.default(null),
+  /** head to set in a constant-pressure mode: the head required, kPa */
+  constantPressureHeadKpa: nnum.default(null),
+  restsOn,
 });
 
 export const modeResultSchema = z.object({
@@ -73,6 +98,7 @@ export const scenarioResultSchema = z.object({
   emitters: z.array(
     z.object({ id: z.string(), flowM3h: nnum, outputW: nnum, returnTemperatureC: nnum }),
   ),
+  restsOn,
 });
 
 export const resultsSchema = z.object({
@@ -92,6 +118,11 @@ export const resultsSchema = z.object({
       recommendedOpeningKpa: nnum,
       heatSourceFlowAllZonesClosedM3h: nnum,
       minFlowMet: z.boolean().nullable(),
+      /** the zones' largest design Δp between the bypass's ends, kPa (its working) */
+      zonesDpKpa: nnum.default(null),
+      /** the Δp the pumps put across its ends with every zone open and it shut, kPa (its working) */
+      openZonesDpKpa: nnum.default(null),
+      restsOn,
     })
     .nullable(),
   expansionVessel: z
@@ -102,17 +133,20 @@ export const resultsSchema = z.object({
       recommendedPrechargeBar: nnum,
       providedVolumeL: nnum,
       ok: z.boolean().nullable(),
+      restsOn,
     })
     .nullable(),
-  volume: z.object({ systemL: nnum, minimumL: nnum, bufferRecommended: z.boolean().nullable() }),
+  volume: z.object({ systemL: nnum, minimumL: nnum, bufferRecommended: z.boolean().nullable(), restsOn }),
   emitters: z.array(
     z.object({ id: z.string(), outputAtDesignW: nnum, heatLoadW: nnum, ok: z.boolean().nullable() }),
   ),
   hotWater: z.object({ id: z.string(), reheatMinutes: nnum }).nullable(),
   scenarios: z.array(scenarioResultSchema),
+  assumptions: z.array(assumptionSchema).default([]),
 });
 
 export type Finding = z.output<typeof findingSchema>;
+export type Assumption = z.output<typeof assumptionSchema>;
 export type Severity = Finding["severity"];
 export type PipeResult = z.output<typeof pipeResultSchema>;
 export type PartResult = z.output<typeof partResultSchema>;

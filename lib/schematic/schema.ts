@@ -38,6 +38,7 @@ export const partSchema = z.discriminatedUnion("type", [
   part("isolation-valve", P["isolation-valve"]),
   part("check-valve", P["check-valve"]),
   part("strainer", P.strainer),
+  part("magnetic-filter", P["magnetic-filter"]),
   part("heat-meter", P["heat-meter"]),
   part("tee", P.tee),
   part("manifold", P.manifold),
@@ -110,6 +111,13 @@ export const designSchema = z.object({
     .nullable()
     .default(null)
     .describe("highest flow temperature ever reached (hot water, legionella cycle), °C; null: design flow"),
+  hotWaterFlowTemperatureC: z
+    .number()
+    .min(5)
+    .max(110)
+    .nullable()
+    .default(null)
+    .describe("flow temperature the heat source reaches for hot water, °C; null: maxFlowTemperatureC"),
   minOutdoorTemperatureC: z
     .number()
     .min(-60)

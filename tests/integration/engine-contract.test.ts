@@ -837,7 +837,8 @@ function case7(header: "buffer-vessel" | "low-loss-header"): Json {
       P("hp", "heat-pump", { ratedOutputKw: 6, kv: 5, waterVolumeL: 2, pumpCurve: CURVE5 }),
       P("bv", header, { volumeL: 50 }),
       P("pu", "pump", { curve: [[0, 30], [0.5, 25], [1, 15], [1.5, 0]] }),
-      P("rad", "radiator", { outputAtDt50W: 14000, heatLoadW: 4000, valveKv: 2.5 }),
+      // waterVolumeL stated (0 L) since an empty one now takes a typical 3.5 L/kW; the hand volume below counts none.
+      P("rad", "radiator", { outputAtDt50W: 14000, heatLoadW: 4000, valveKv: 2.5, waterVolumeL: 0 }),
     ],
     [
       cu("q1", "hp.flow", "bv.p1", "22", 2),

@@ -221,7 +221,8 @@ function caseA(ratedKw: number, scenarios?: unknown[]): Json {
       P("ps", "pump", { curve: PS_A }),
       P("mf", "manifold", { outlets: 2 }),
       P("mr", "manifold", { outlets: 2 }),
-      P("fc", "fan-coil", { heatLoadW: 3000, kv: 2 }),
+      // water volumes stated (0 L): empty ones now take typical values; the hand volume counts none.
+      P("fc", "fan-coil", { heatLoadW: 3000, kv: 2, waterVolumeL: 0 }),
       P("hl", "heat-load", { heatLoadW: 2000, kv: 4, deltaTK: 5 }),
     ],
     [
@@ -380,15 +381,16 @@ function caseB(opts: { fluid?: Json; maxFlowC?: number | null; coilKw?: number; 
       P("hp", "heat-pump", { ratedOutputKw: 6, kv: 3, waterVolumeL: 3, pumpCurve: HP_B }),
       P("dv", "diverter-valve", { kvs: 5, position: "a" }),
       P("buf", "buffer-vessel", { volumeL: 50 }),
-      P("cyl", "cylinder", { volumeL: 150, coilKv: 2.5, coilOutputKw: opts.coilKw ?? 10, storeTemperatureC: opts.store ?? 50, coldWaterC: 10 }),
+      // coil and radiator water volumes stated (0 L): empty ones now take typical values; the hand volume counts none.
+      P("cyl", "cylinder", { volumeL: 150, coilKv: 2.5, coilOutputKw: opts.coilKw ?? 10, storeTemperatureC: opts.store ?? 50, coldWaterC: 10, coilWaterVolumeL: 0 }),
       P("tr", "tee"),
       P("ps", "pump", { curve: PS_B }),
       P("mf", "manifold", { outlets: 2 }),
       P("mr", "manifold", { outlets: 2 }),
       P("zv1", "zone-valve", { kvs: 4 }),
       P("zv2", "zone-valve", { kvs: 4 }),
-      P("r1", "radiator", { outputAtDt50W: 6000, heatLoadW: 1500, valveKv: 1.2 }),
-      P("r2", "radiator", { outputAtDt50W: 4000, heatLoadW: 1000, valveKv: 1.0 }),
+      P("r1", "radiator", { outputAtDt50W: 6000, heatLoadW: 1500, valveKv: 1.2, waterVolumeL: 0 }),
+      P("r2", "radiator", { outputAtDt50W: 4000, heatLoadW: 1000, valveKv: 1.0, waterVolumeL: 0 }),
     ],
     [
       pipe("d0", "hp.flow", "dv.ab", "28", 2),

@@ -57,6 +57,9 @@ const authActions = () => import("@/components/auth/actions");
 const projectActions = () => import("@/components/projects/actions");
 const boardActions = () => import("@/components/drawing-board/actions");
 const unitActions = () => import("@/components/units/actions");
+const designRoute = () => import("@/app/api/v1/projects/[projectId]/design-conditions/route");
+const designActions = () => import("@/components/design-conditions/actions");
+const projectDefaults = { fluid: { kind: "water" }, design: { flowTemperatureC: 50, returnTemperatureC: 43 } };
 
 export const rows: Row[] = [
   // ——— session ———
@@ -89,6 +92,20 @@ export const rows: Row[] = [
   {
     name: "DELETE /api/v1/projects/[projectId]", kind: "route", expect: allow(["owner"], 204),
     call: async (f, cookie) => callRoute((await projectItemRoute()).DELETE as never, { method: "DELETE", path: `/api/v1/projects/${f.projectId}`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    name: "GET /api/v1/projects/[projectId]/design-conditions", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await designRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/design-conditions`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    name: "PUT /api/v1/projects/[projectId]/design-conditions", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await designRoute()).PUT as never, {
+      method: "PUT", path: `/api/v1/projects/${f.projectId}/design-conditions`, cookie, params: { projectId: f.projectId }, body: projectDefaults,
+    }),
+  },
+  {
+    name: "action saveProjectDefaultsAction", kind: "action", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callAction(async () => (await designActions()).saveProjectDefaultsAction({ projectId: f.projectId, defaults: projectDefaults }), cookie),
   },
 
   {

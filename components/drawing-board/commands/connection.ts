@@ -3,7 +3,7 @@
  * canvas's live check while a pipe is dragged: a port takes one pipe, a pipe
  * joins two different parts, and both ports must exist.
  */
-import { splitPortRef, type Schematic } from "@/lib/schematic";
+import { portRefLabel, splitPortRef, type Schematic } from "@/lib/schematic";
 import { partPorts } from "./ports";
 
 /** Why from→to cannot be piped, or null when it can. */
@@ -19,7 +19,7 @@ export function connectionProblem(doc: Schematic, from: string, to: string): str
   const busy = doc.pipes.find((p) => p.from === from || p.to === from || p.from === to || p.to === to);
   if (busy) {
     const port = busy.from === from || busy.to === from ? from : to;
-    return `Port ${port} already has a pipe (${busy.id}); a port takes one pipe.`;
+    return `The ${portRefLabel(doc, port)} port already has a pipe (${busy.id}); a port takes one pipe.`;
   }
   return null;
 }

@@ -8,7 +8,7 @@ import type { PartType, Schematic } from "@/lib/schematic";
 export const idPrefix: Record<PartType, string> = {
   "heat-pump": "hp", boiler: "blr", pump: "pump", "zone-valve": "zv", "diverter-valve": "dv",
   "dp-bypass-valve": "bp", "balancing-valve": "bv", "isolation-valve": "iso", "check-valve": "cv",
-  strainer: "str", "heat-meter": "hm", tee: "t", manifold: "mf", "buffer-vessel": "buf",
+  strainer: "str", "magnetic-filter": "mag", "heat-meter": "hm", tee: "t", manifold: "mf", "buffer-vessel": "buf",
   "low-loss-header": "llh", cylinder: "cyl", radiator: "rad", "ufh-loop": "ufh", "fan-coil": "fc",
   "heat-load": "load", "expansion-vessel": "ev", "safety-valve": "sv", "air-vent": "av",
   "drain-cock": "dc", "pressure-gauge": "pg", "temperature-sensor": "ts", "filling-loop": "fl",

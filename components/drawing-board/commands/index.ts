@@ -19,6 +19,7 @@ import { undo } from "./undo";
 import { updatePart } from "./update-part";
 import { updatePartProps } from "./update-part-props";
 import { updatePipe } from "./update-pipe";
+import { updateDesign } from "./update-design";
 import type { Command } from "./types";
 
 export const commands = {
@@ -33,6 +34,7 @@ export const commands = {
   "update-part-props": updatePartProps,
   "update-part": updatePart,
   "update-pipe": updatePipe,
+  "update-design": updateDesign,
   "tidy-selection": tidySelection,
   "rotate-selection": rotateSelection,
   "flip-selection": flipSelection,

@@ -39,6 +39,8 @@ export interface BoardState {
   autoOrient: Map<string, Orientation>;
   /** Successive pastes step further away from the original. */
   pasteCount: number;
+  /** The Design conditions panel was asked for (a finding's link, the top bar): which field, and a counter so a repeat asks again. */
+  designFocus: { field: string | null; n: number } | null;
 }
 
 export type CommandOutcome = Partial<BoardState> | { refused: string } | null;

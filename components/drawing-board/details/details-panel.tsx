@@ -2,6 +2,7 @@
 import { useBoard } from "../store";
 import { PartForm } from "./part-form";
 import { PipeForm } from "./pipe-form";
+import { DesignPanel } from "../design/design-panel";
 
 /** Right-hand details: the selected part or pipe; a summary for several; a prompt for none. */
 export function DetailsPanel() {
@@ -25,7 +26,10 @@ export function DetailsPanel() {
         </div>
       )}
       {sel.parts.length + sel.pipes.length === 0 && (
-        <p className="text-sm text-ink-faint">Select a part or pipe to see its details. Drag from one port to another to lay a pipe; press ? for shortcuts.</p>
+        <>
+          <p className="pb-3 text-sm text-ink-faint">Select a part or pipe to see its details. Drag from one port to another to lay a pipe; press ? for shortcuts.</p>
+          <DesignPanel />
+        </>
       )}
     </div>
   );

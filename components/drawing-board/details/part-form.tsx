@@ -8,6 +8,7 @@ import { partPropsSchemas, partRegistry, type Part } from "@/lib/schematic";
 import { useBoard } from "../store";
 import { NumberField } from "./number-field";
 import { fieldsOf, issueMessage, type FieldInfo } from "./schema-fields";
+import { emptyText } from "./empty-text";
 import { TextField } from "./text-field";
 import dynamic from "next/dynamic";
 
@@ -48,7 +49,7 @@ export function PartForm({ part }: { part: Part }) {
         const value = props[f.name];
         if (f.kind === "number")
           return <NumberField key={f.name} name={f.name} label={f.label} unit={f.unit} help={f.help} value={value as number | null} nullable={f.nullable}
-            nullLabel={f.nullHint} readOnly={readOnly} commit={(v) => commit(f, v)} />;
+            emptyText={f.nullable ? emptyText(part.type, f.name, f.nullHint) : undefined} readOnly={readOnly} commit={(v) => commit(f, v)} />;
         if (f.kind === "boolean")
           return (
             <label key={f.name} className="flex items-center gap-2 py-1 text-sm">

@@ -4,7 +4,7 @@
  * only, the typed length, fitting counts and optional overrides. Values are
  * validated with the pipe schema before the update-pipe command.
  */
-import { pipeSchema, type Pipe, type PipeMaterial } from "@/lib/schematic";
+import { pipeSchema, portRefLabel, type Pipe, type PipeMaterial } from "@/lib/schematic";
 import { pipeCatalogue, pipeMaterials } from "@/lib/hydraulics/pipes/catalogue";
 import { useBoard } from "../store";
 import { NumberField } from "./number-field";
@@ -23,6 +23,7 @@ export function nearestSize(material: PipeMaterial, innerMm: number | undefined)
 export function PipeForm({ pipe }: { pipe: Pipe }) {
   const dispatch = useBoard((s) => s.dispatch);
   const readOnly = useBoard((s) => s.readOnly);
+  const doc = useBoard((s) => s.doc);
   const update = (patch: Partial<Pipe>, unit = ""): string | null => {
     const r = pipeSchema.safeParse({ ...pipe, ...patch });
     if (!r.success) return issueMessage(r.error.issues[0]!, unit);
@@ -37,7 +38,7 @@ export function PipeForm({ pipe }: { pipe: Pipe }) {
     <div data-testid="pipe-form">
       <p className="text-xs uppercase tracking-wide text-ink-faint">Pipe</p>
       <p className="num text-lg font-semibold text-ink">{pipe.id}</p>
-      <p className="num text-xs text-ink-soft">{pipe.from} → {pipe.to}</p>
+      <p className="text-xs text-ink-soft">{portRefLabel(doc, pipe.from)} → {portRefLabel(doc, pipe.to)}</p>
       <label className="block py-1 text-xs text-ink-soft">Material
         <select name="material" className={select} disabled={readOnly} value={pipe.material}
           onChange={(e) => {
@@ -53,7 +54,8 @@ export function PipeForm({ pipe }: { pipe: Pipe }) {
           {sizes.map((s) => <option key={s.size} value={s.size}>{s.size} — bore {s.innerDiameterMm} mm</option>)}
         </select>
       </label>
-      <NumberField name="lengthM" label="Length" unit="m" value={pipe.lengthM} readOnly={readOnly} commit={(v) => update({ lengthM: v ?? 0 }, "m")} />
+      <NumberField name="lengthM" label="Length" unit="m" value={pipe.lengthM} readOnly={readOnly}
+        commit={(v) => (v === null || !(v > 0) ? "A pipe's length must be more than 0 m." : update({ lengthM: v }, "m"))} />
       <fieldset className="mt-2 grid grid-cols-2 gap-x-2">
         <legend className="text-xs font-medium text-ink-soft">Fittings</legend>
         {(Object.keys(fittingLabel) as (keyof typeof fittingLabel)[]).map((k) => (
@@ -62,7 +64,7 @@ export function PipeForm({ pipe }: { pipe: Pipe }) {
         ))}
       </fieldset>
       <NumberField name="innerDiameterMm" label="Inner diameter override" unit="mm" help={current ? `catalogue: ${current.innerDiameterMm} mm` : undefined}
-        value={pipe.innerDiameterMm ?? null} nullable nullLabel="catalogue bore" readOnly={readOnly} commit={(v) => update({ innerDiameterMm: v ?? undefined }, "mm")} />
+        value={pipe.innerDiameterMm ?? null} nullable emptyText="Empty: the catalogue bore of the size chosen." readOnly={readOnly} commit={(v) => update({ innerDiameterMm: v ?? undefined }, "mm")} />
     </div>
   );
 }

@@ -5,6 +5,7 @@
  * name); label and hint from the field's `.describe()` text.
  */
 import type { z } from "zod";
+import { readNumber } from "@/lib/units/read-number";
 
 export type FieldKind = "number" | "boolean" | "enum" | "curve" | "other";
 export interface FieldInfo {
@@ -25,7 +26,7 @@ type ZodLike = { _zod: { def: Def }; description?: string; isInt?: boolean };
 
 const suffixes: [RegExp, string][] = [
   [/M3h$/, "m³/h"], [/Kpa$/, "kPa"], [/Kw$/, "kW"], [/Bar$/, "bar"], [/Mm$/, "mm"], [/Mps$/, "m/s"],
-  [/^(kv|kvs)$|Kv$/, "Kv"], [/Dt50W$|W$/, "W"], [/L$/, "L"], [/C$/, "°C"], [/K$/, "K"], [/M$/, "m"],
+  [/^(kv|kvs)$|Kv$/, ""], [/Dt50W$|W$/, "W"], [/L$/, "L"], [/C$/, "°C"], [/K$/, "K"], [/M$/, "m"],
 ];
 export const unitOf = (name: string) => suffixes.find(([re]) => re.test(name))?.[1] ?? "";
 
@@ -54,7 +55,7 @@ export function describeField(name: string, schema: ZodLike): FieldInfo {
     label: cap(head || words(name)),
     unit: unitOf(name),
     // the tail after the comma is often just the unit, already shown beside the input
-    help: comma > 0 && !["litres", unitOf(name), "W", "m"].includes(text.slice(comma + 2)) ? text.slice(comma + 2) : "",
+    help: comma > 0 && !["litres", unitOf(name), "W", "m", "kW", "°C", "m³/h", "kPa", "mm", "K", "m²"].includes(text.slice(comma + 2)) ? text.slice(comma + 2) : "",
     nullable,
     nullHint,
     integer: node?.isInt === true,
@@ -68,17 +69,18 @@ export function fieldsOf(schema: z.ZodObject): FieldInfo[] {
 
 /** A zod issue in words a designer reads beside the field. */
 export function issueMessage(issue: z.core.$ZodIssue, unit: string): string {
-  const u = unit && unit !== "Kv" ? ` ${unit}` : "";
+  const u = unit ? ` ${unit}` : "";
   if (issue.code === "too_small") return `Must be ${issue.inclusive ? "at least" : "more than"} ${String(issue.minimum)}${u}.`;
   if (issue.code === "too_big") return `Must be ${issue.inclusive ? "at most" : "less than"} ${String(issue.maximum)}${u}.`;
   if (issue.code === "invalid_type") return issue.expected === "int" ? "Must be a whole number." : "Enter a number.";
   return issue.message;
 }
 
-/** "1,5" and " 2 " are fine; "", "abc" and "1e999" are not numbers. */
-export function parseNumber(text: string): number | null {
-  const t = text.trim().replace(",", ".");
-  if (t === "" || !/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return null;
-  const n = Number(t);
-  return Number.isFinite(n) ? n : null;
+/** The browser's locale, which decides how "1,500" reads (lib/units/read-number.ts); en-GB outside a browser. */
+export const typingLocale = (): string => (typeof navigator !== "undefined" && navigator.language ? navigator.language : "en-GB");
+
+/** A typed number in the user's locale, or null when it is not one or can be read two ways. */
+export function parseNumber(text: string, locale: string = typingLocale()): number | null {
+  const r = readNumber(text, locale);
+  return r.ok ? r.value : null;
 }

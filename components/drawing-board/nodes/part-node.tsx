@@ -7,7 +7,7 @@
  */
 import { memo } from "react";
 import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
-import { partRegistry, type Part } from "@/lib/schematic";
+import { partRegistry, portLabel, type Part } from "@/lib/schematic";
 import { useUnits } from "@/components/units/units-context";
 import { partBadge } from "../overlay/part-badges";
 import { useBoard } from "../store";
@@ -32,12 +32,12 @@ function tagSide(ports: PortSpot[]): string {
   return (["bottom", "top", "right", "left"] as const).find((s) => !used.has(s)) ?? "corner";
 }
 
-function PortHandle({ name, spot, readOnly, labelled }: { name: string; spot: PortSpot; readOnly: boolean; labelled: boolean }) {
+function PortHandle({ name, text, spot, readOnly, labelled }: { name: string; text: string; spot: PortSpot; readOnly: boolean; labelled: boolean }) {
   const along = `${(spot.at * 100).toFixed(2)}%`;
   const style = spot.side === "left" || spot.side === "right" ? { top: along } : { left: along };
   return (
     <Handle id={name} type="source" position={position[spot.side]} style={style} isConnectable={!readOnly} className="lw-port" data-port={name}>
-      {labelled && <span className={`lw-port-label lw-port-label-${spot.side}`}>{name}</span>}
+      {labelled && <span className={`lw-port-label lw-port-label-${spot.side}`}>{text}</span>}
     </Handle>
   );
 }
@@ -86,7 +86,7 @@ export const PartNodeView = memo(function PartNodeView({ id, data, selected }: N
       </svg>
       {ports.map(([name, spot]) => (
         // a lone "connection" port needs no name
-        <PortHandle key={name} name={name} spot={spot} readOnly={readOnly} labelled={ports.length > 1} />
+        <PortHandle key={name} name={name} text={portLabel(part.type, name)} spot={spot} readOnly={readOnly} labelled={ports.length > 1} />
       ))}
       <Tag part={part} side={tagSide(ports.map(([, p]) => p))} />
       <Badge part={part} />

@@ -6,6 +6,7 @@ import { useBoardApi } from "../board-api";
 import { useBoard } from "../store";
 import { groupFindings, severityStyle, sortedFindings, type FindingGroup } from "./findings";
 import { viewLabel, viewOfFinding } from "./results-view";
+import { DesignFieldLinks } from "../design/design-field-links";
 
 /**
  * Findings from the results shown, one line per check with its count, opened to list
@@ -63,6 +64,7 @@ function Item({ f }: { f: Finding }) {
         <span className="text-ink">{f.message}</span>
         <span className="ml-1 whitespace-nowrap rounded bg-copper-50 px-1 text-[10px] text-copper-700" data-testid="finding-view">{viewLabel(results, view)}</span>
       </button>
+      <DesignFieldLinks fields={f.fields} />
     </li>
   );
 }

@@ -19,6 +19,7 @@ import { HeatMeterSymbol } from "./heat-meter/symbol";
 import { HeatPumpSymbol } from "./heat-pump/symbol";
 import { IsolationValveSymbol } from "./isolation-valve/symbol";
 import { LowLossHeaderSymbol } from "./low-loss-header/symbol";
+import { MagneticFilterSymbol } from "./magnetic-filter/symbol";
 import { ManifoldSymbol } from "./manifold/symbol";
 import { PressureGaugeSymbol } from "./pressure-gauge/symbol";
 import { PumpSymbol } from "./pump/symbol";
@@ -48,6 +49,7 @@ export const symbols: Record<PartType, ComponentType<SymbolProps>> = {
   "heat-pump": HeatPumpSymbol,
   "isolation-valve": IsolationValveSymbol,
   "low-loss-header": LowLossHeaderSymbol,
+  "magnetic-filter": MagneticFilterSymbol,
   "manifold": ManifoldSymbol,
   "pressure-gauge": PressureGaugeSymbol,
   "pump": PumpSymbol,

@@ -42,6 +42,7 @@ const fixed: Record<Exclude<PartType, "manifold">, SymbolLayout> = {
   "isolation-valve": link(40),
   "check-valve": link(40),
   strainer: link(60),
+  "magnetic-filter": { w: 60, h: 80, ports: { a: L(0.3), b: R(0.3) }, turns: "all" },
   "heat-meter": link(40),
   tee: { w: 40, h: 40, ports: { a: L(), b: R(), c: B() }, turns: "all" },
   "buffer-vessel": header(80),

@@ -1,23 +1,23 @@
 "use client";
 
 import { useMemo } from "react";
-import type { Results, Schematic } from "@/lib/schematic";
+import { portRefLabel, type ModeResult, type Results, type Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
 import type { ViewPipe } from "../overlay/results-view";
 import { velocityBand } from "../overlay/velocity-bands";
 import { suggestedSizeChanges } from "./apply-suggested-sizes";
 import { DataTable, type Columns } from "./data-table";
 import { Num } from "./num";
-import { pipeDpWorking, type Working } from "./working";
+import { pipeDpWorking, pipeFlowWorking, velocityWorking, type Working } from "./working";
 
 type Row = { pipe: Schematic["pipes"][number]; r: ViewPipe | undefined; next: string | null };
 
 /**
  * Every pipe with its size, flow, velocity and pressure drop in the results view shown;
- * Δp opens its working where there is one (onShow), suggested sizes only in a design view.
+ * numbers open their working in a design mode (onShow), suggested sizes only in a design view.
  */
-export function PipeSchedule({ doc, results, pipes, design, prefs, onShow }: {
-  doc: Schematic; results: Results; pipes: ViewPipe[]; design: boolean; prefs: UnitPrefs; onShow?: (w: Working) => void;
+export function PipeSchedule({ doc, results, pipes, mode, prefs, onShow }: {
+  doc: Schematic; results: Results; pipes: ViewPipe[]; mode: ModeResult | null; prefs: UnitPrefs; onShow?: (w: Working) => void;
 }) {
   const rho = results.fluid.densityKgM3;
   const columns = useMemo<Columns<Row>>(() => [
@@ -27,21 +27,24 @@ export function PipeSchedule({ doc, results, pipes, design, prefs, onShow }: {
       return <span className="num">{pipe.material} {pipe.size}{next && <span className="ml-1 text-warn" title="suggested size">→ {next}</span>}</span>;
     } },
     { id: "length", header: "Length", cell: ({ row }) => <Num text={`${row.original.pipe.lengthM.toFixed(1)} m`} /> },
-    { id: "flow", header: `Flow (${showFlow(0, prefs).unit})`, cell: ({ row }) => <Num text={showFlow(row.original.r?.flowM3h, prefs).value} /> },
+    { id: "flow", header: `Flow (${showFlow(0, prefs).unit})`, cell: ({ row }) =>
+      <Num text={showFlow(row.original.r?.flowM3h, prefs).value}
+        working={pipeFlowWorking(doc, results, row.original.pipe.id, mode)} onShow={onShow} /> },
     { id: "v", header: "Velocity (m/s)", cell: ({ row }) => {
       const v = row.original.r?.velocityMps;
       const band = velocityBand(v, doc.design.maxVelocityMps);
-      return <Num text={v === null || v === undefined ? "—" : Math.abs(v).toFixed(2)} tone={band === "high" ? "fault" : undefined} />;
+      return <Num text={v === null || v === undefined ? "—" : Math.abs(v).toFixed(2)} tone={band === "high" ? "fault" : undefined}
+        working={onShow && velocityWorking(doc, results, row.original.pipe.id, mode)} onShow={onShow} />;
     } },
     { id: "dp", header: `Δp (${showPressure(0, prefs).unit})`, cell: ({ row }) =>
-      <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={onShow ? pipeDpWorking(doc, results, row.original.pipe.id) : null} onShow={onShow} /> },
+      <Num text={showPressure(row.original.r?.pressureDropKpa, prefs, rho).value} working={onShow && pipeDpWorking(doc, results, row.original.pipe.id, mode)} onShow={onShow} /> },
     { id: "grad", header: "Pa/m", cell: ({ row }) => <Num text={row.original.r?.gradientPaPerM?.toFixed(0) ?? "—"} /> },
-    { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{row.original.pipe.from} → {row.original.pipe.to}</span> },
-  ], [doc, results, prefs, rho, onShow]);
+    { id: "run", header: "From → to", cell: ({ row }) => <span className="text-xs text-ink-soft">{portRefLabel(doc, row.original.pipe.from)} → {portRefLabel(doc, row.original.pipe.to)}</span> },
+  ], [doc, results, mode, prefs, rho, onShow]);
   const data = useMemo(() => {
-    const next = new Map(design ? suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]) : []);
+    const next = new Map(mode ? suggestedSizeChanges(doc, results).map((c) => [c.id, c.to]) : []);
     const byId = new Map(pipes.map((p) => [p.id, p]));
     return doc.pipes.map((pipe) => ({ pipe, r: byId.get(pipe.id), next: next.get(pipe.id) ?? null }));
-  }, [doc, results, pipes, design]);
+  }, [doc, results, pipes, mode]);
   return <DataTable columns={columns} data={data} caption="Pipe schedule" testId="pipe-schedule" />;
 }

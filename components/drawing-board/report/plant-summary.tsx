@@ -4,7 +4,7 @@ import type { ReactNode } from "react";
 import type { Results, Schematic } from "@/lib/schematic";
 import { showFlow, showPressure, type UnitPrefs } from "@/lib/units/display";
 import { Num } from "./num";
-import { vesselWorking, type Working } from "./working";
+import { bypassOpeningWorking, minVolumeWorking, prechargeWorking, reheatWorking, shutFlowWorking, systemVolumeWorking, vesselWorking, type Working } from "./working";
 
 const yesNo = (ok: boolean | null, yes: string, no: string) =>
   ok === null ? <span className="text-ink-faint">—</span> : <span className={ok ? "text-ok" : "font-medium text-fault"}>{ok ? yes : no}</span>;
@@ -20,7 +20,8 @@ function Card({ title, children, testId }: { title: string; children: ReactNode;
 const Item = ({ k, children }: { k: string; children: ReactNode }) => (
   <><dt className="text-ink-soft">{k}</dt><dd className="text-right">{children}</dd></>
 );
-const litres = (n: number | null) => <Num text={n === null ? "—" : `${n.toFixed(1)} L`} />;
+const litres = (n: number | null, working?: Working | null, onShow?: (w: Working) => void) =>
+  <Num text={n === null ? "—" : `${n.toFixed(1)} L`} working={working} onShow={onShow} />;
 
 /** Bypass, expansion vessel, system volume and hot water: one card each. */
 export function PlantSummary({ doc, results, prefs, onShow }: { doc: Schematic; results: Results; prefs: UnitPrefs; onShow: (w: Working) => void }) {
@@ -30,26 +31,26 @@ export function PlantSummary({ doc, results, prefs, onShow }: { doc: Schematic; 
     <div className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4">
       <Card title="Bypass" testId="report-bypass">
         {bypass ? <>
-          <Item k="Opening setting"><Num text={showPressure(bypass.recommendedOpeningKpa, prefs, rho).text} /></Item>
-          <Item k="Heat-source flow, all zones shut"><Num text={showFlow(bypass.heatSourceFlowAllZonesClosedM3h, prefs).text} /></Item>
+          <Item k="Opening setting"><Num text={showPressure(bypass.recommendedOpeningKpa, prefs, rho).text} working={bypassOpeningWorking(doc, results)} onShow={onShow} /></Item>
+          <Item k="Heat-source flow, all zones shut"><Num text={showFlow(bypass.heatSourceFlowAllZonesClosedM3h, prefs).text} working={shutFlowWorking(doc, results)} onShow={onShow} /></Item>
           <Item k="Minimum flow met">{yesNo(bypass.minFlowMet, "yes", "no")}</Item>
         </> : <Item k="No bypass valve drawn">—</Item>}
       </Card>
       <Card title="Expansion vessel" testId="report-vessel">
         {ev ? <>
           <Item k="Required"><Num text={ev.requiredVolumeL === null ? "—" : `${ev.requiredVolumeL.toFixed(1)} L`} working={vesselWorking(doc, results)} onShow={onShow} /></Item>
-          <Item k="Drawn">{litres(ev.providedVolumeL)}</Item>
-          <Item k="Pre-charge"><Num text={ev.recommendedPrechargeBar === null ? "—" : `${ev.recommendedPrechargeBar.toFixed(2)} bar`} /></Item>
+          <Item k="Fitted (as drawn)">{litres(ev.providedVolumeL)}</Item>
+          <Item k="Pre-charge to set"><Num text={ev.recommendedPrechargeBar === null ? "—" : `${ev.recommendedPrechargeBar.toFixed(2)} bar`} working={prechargeWorking(doc, results)} onShow={onShow} /></Item>
           <Item k="Big enough">{yesNo(ev.ok, "yes", "no")}</Item>
         </> : <Item k="No expansion vessel drawn">—</Item>}
       </Card>
       <Card title="Volumes" testId="report-volume">
-        <Item k="System water">{litres(volume.systemL)}</Item>
-        <Item k="Heat source minimum">{litres(volume.minimumL)}</Item>
+        <Item k="System water">{litres(volume.systemL, systemVolumeWorking(doc, results), onShow)}</Item>
+        <Item k="Min. system volume">{volume.minimumL === null ? <span className="text-ink-faint" title="No minimum stated on the heat source">not checked</span> : litres(volume.minimumL, minVolumeWorking(doc, results), onShow)}</Item>
         <Item k="Buffer">{volume.bufferRecommended === null ? "—" : volume.bufferRecommended ? <span className="text-warn">recommended</span> : "not needed"}</Item>
       </Card>
       <Card title="Hot water" testId="report-hot-water">
-        {hotWater ? <Item k="Cylinder reheat"><Num text={hotWater.reheatMinutes === null ? "—" : `${hotWater.reheatMinutes.toFixed(0)} min`} /></Item>
+        {hotWater ? <Item k="Cylinder reheat"><Num text={hotWater.reheatMinutes === null ? "—" : `${hotWater.reheatMinutes.toFixed(0)} min`} working={reheatWorking(doc, results)} onShow={onShow} /></Item>
           : <Item k="No cylinder drawn">—</Item>}
       </Card>
     </div>

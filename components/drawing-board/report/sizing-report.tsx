@@ -12,6 +12,7 @@ import { PlantSummary } from "./plant-summary";
 import { PumpDuty } from "./pump-duty";
 import { WorkingDialog } from "./working-dialog";
 import type { Working } from "./working";
+import { AssumptionsNote } from "./assumptions-note";
 
 /**
  * The sizing report tab: every table for the results kept or last sized, in the mode or
@@ -35,20 +36,21 @@ export function SizingReport() {
     );
   }
   const mode = results.modes.find((m) => m.mode === view) ?? null;
-  // "show working" explains the heating design numbers (report/working.ts)
-  const showWorking = view === "heating" ? onShow : undefined;
+  // "show working" explains the numbers of a design mode (report/working*.ts); a scenario's are simulated
+  const showWorking = mode ? onShow : undefined;
   const emitters = emittersInView(results, view);
   return (
     <div className="space-y-6 p-4" data-testid="sizing-report" data-view={view}>
       {stale && <p role="status" className="rounded bg-warn/10 px-3 py-2 text-sm text-warn">The drawing changed since this report was computed — size it again.</p>}
+      <AssumptionsNote results={results} />
       <Section title="Pipe schedule" aside={mode ? <ApplySizesButton /> : null}>
-        <PipeSchedule doc={doc} results={results} pipes={pipesInView(results, view)} design={mode !== null} prefs={prefs} onShow={showWorking} />
+        <PipeSchedule doc={doc} results={results} pipes={pipesInView(results, view)} mode={mode} prefs={prefs} onShow={showWorking} />
       </Section>
       {mode && <Section title="Circuits"><CircuitsTable doc={doc} results={results} mode={mode} prefs={prefs} onShow={showWorking} /></Section>}
-      <Section title="Pump duty"><PumpDuty doc={doc} results={results} modes={results.modes} prefs={prefs} /></Section>
+      <Section title="Pump duty"><PumpDuty doc={doc} results={results} modes={results.modes} prefs={prefs} onShow={onShow} /></Section>
       <Section title="Bypass, vessel, volumes and hot water"><PlantSummary doc={doc} results={results} prefs={prefs} onShow={onShow} /></Section>
       <Section title="Emitters">
-        {emitters.length > 0 ? <EmittersTable doc={doc} results={results} rows={emitters} prefs={prefs} onShow={showWorking} />
+        {emitters.length > 0 ? <EmittersTable doc={doc} results={results} rows={emitters} prefs={prefs} onShow={view === "heating" ? onShow : undefined} />
           : <p className="text-sm text-ink-soft">No emitters are served in this mode.</p>}
       </Section>
       <p className="border-t border-ink/10 pt-3 text-xs text-ink-faint">

@@ -11,7 +11,8 @@ export const demoProjects: { id: string; name: string; client: string; site: str
     name: "Millbrook Community Hall",
     client: "Millbrook Hall Trust",
     site: "Hall and annexe, 3 Weir Lane, Millbrook (invented)",
-    design: { outdoorC: -3, flowTemperatureC: 45, returnTemperatureC: 40, heatSource: "14 kW air-to-water heat pump" },
+    // the project's design conditions: what its new schematics start with (lib/schematic/project-defaults.ts)
+    design: { fluid: { kind: "water" }, design: { flowTemperatureC: 45, returnTemperatureC: 40, minOutdoorTemperatureC: -3, hotWaterFlowTemperatureC: 55 } },
     schematics: [{ name: "Plant room", file: "millbrook-hall.json", status: "issued" }],
   },
   {
@@ -19,7 +20,7 @@ export const demoProjects: { id: string; name: string; client: string; site: str
     name: "Orchard End",
     client: "The Orchard End household",
     site: "Detached house, Orchard End, Lower Alder (invented)",
-    design: { outdoorC: -2, flowTemperatureC: 45, returnTemperatureC: 40, heatSource: "7 kW air-to-water heat pump" },
+    design: { fluid: { kind: "water" }, design: { flowTemperatureC: 45, returnTemperatureC: 40, minOutdoorTemperatureC: -2, hotWaterFlowTemperatureC: 55 } },
     schematics: [
       { name: "Bypass only", file: "orchard-end-bypass-only.json", status: "in-review" },
       { name: "With 40 L buffer", file: "orchard-end-buffer-40l.json", status: "draft" },

@@ -74,3 +74,6 @@ export function en442OutputArithmetic(input: En442Input): number {
   const dt = arithmeticExcessK(input.flowC, input.returnC, input.roomC);
   return dt <= 0 ? 0 : input.outputAtDt50W * (dt / 50) ** input.exponentN;
 }
+
+/** The citation shown with this formula's working. */
+export const EN442_SOURCE = "EN 442-2:2014, characteristic equation Φ = Φ50·(ΔT_ln/ΔT_n)^n with the logarithmic mean excess temperature";

@@ -7,8 +7,8 @@ import type { Finding, Severity } from "@/lib/schematic/results";
 
 export type { Finding, Severity };
 
-export function finding(severity: Severity, code: string, message: string, refs: readonly string[] = []): Finding {
-  return { severity, code, message, refs: [...refs] };
+export function finding(severity: Severity, code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]): Finding {
+  return fields && fields.length > 0 ? { severity, code, message, refs: [...refs], fields: [...fields] } : { severity, code, message, refs: [...refs] };
 }
 
 /** What a finding was found in: a design mode, or a simulated scenario (with its mode). */
@@ -32,23 +32,24 @@ export class Findings {
       this.context = outer;
     }
   }
-  add(severity: Severity, code: string, message: string, refs: readonly string[] = []): void {
+  /** `fields`: the design conditions the finding is about ("design.safetyValveBar"), so the board can link to them. */
+  add(severity: Severity, code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]): void {
     const { mode, scenario } = this.context;
     const key = `${code}|${refs.join(",")}|${message}|${mode ?? ""}|${scenario ?? ""}`;
     if (this.seen.has(key)) return;
     this.seen.add(key);
-    const f = finding(severity, code, message, refs);
+    const f = finding(severity, code, message, refs, fields);
     if (mode) f.mode = mode;
     if (scenario !== undefined) f.scenario = scenario;
     this.list.push(f);
   }
-  error(code: string, message: string, refs: readonly string[] = []) {
-    this.add("error", code, message, refs);
+  error(code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]) {
+    this.add("error", code, message, refs, fields);
   }
-  warning(code: string, message: string, refs: readonly string[] = []) {
-    this.add("warning", code, message, refs);
+  warning(code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]) {
+    this.add("warning", code, message, refs, fields);
   }
-  info(code: string, message: string, refs: readonly string[] = []) {
-    this.add("info", code, message, refs);
+  info(code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]) {
+    this.add("info", code, message, refs, fields);
   }
 }

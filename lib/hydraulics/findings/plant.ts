@@ -23,7 +23,7 @@ export function plantFindings(doc: Schematic, model: NetworkModel, f: Findings):
     if (l.role !== "heat-source") continue;
     const ret = walkChain(model, adj, l.from, k).parts;
     const flow = walkChain(model, adj, l.to, k).parts;
-    if (!ret.some((p) => p.type === "strainer")) {
+    if (!ret.some((p) => p.type === "strainer" || p.type === "magnetic-filter")) {
       f.warning("heat-source.no-strainer", `${l.id}: no strainer or filter on its return before the first branch`, [l.id]);
     }
     const missing = [
@@ -53,11 +53,13 @@ export function plantFindings(doc: Schematic, model: NetworkModel, f: Findings):
     f.error(
       "input.fill-pressure",
       `design: cold fill ${design.coldFillPressureBar} bar is not below the safety valve's ${design.safetyValveBar} bar`,
+      [],
+      ["design.coldFillPressureBar", "design.safetyValveBar"],
     );
   }
   for (const sv of doc.parts) {
     if (sv.type === "safety-valve" && sv.props.setBar !== design.safetyValveBar) {
-      f.warning("safety-valve.setting", `${sv.id}: set at ${sv.props.setBar} bar, the design says ${design.safetyValveBar} bar`, [sv.id]);
+      f.warning("safety-valve.setting", `${sv.id}: set at ${sv.props.setBar} bar, the design says ${design.safetyValveBar} bar`, [sv.id], ["design.safetyValveBar"]);
     }
   }
   const outdoor = doc.parts.filter((p) => p.type === "heat-pump");
@@ -75,12 +77,14 @@ export function plantFindings(doc: Schematic, model: NetworkModel, f: Findings):
         "fluid.frost-protection",
         `${doc.fluid.kind} freezes at ${fp.toFixed(1)} °C, above the site's ${tMin} °C: protect the outdoor circuit (glycol, frost valves)`,
         ids,
+        ["design.minOutdoorTemperatureC", "fluid.kind"],
       );
     } else if (doc.fluid.kind === "water" && tMin === null) {
       f.info(
         "fluid.frost-protection",
-        "plain water in a heat-pump circuit: the outdoor pipes need frost protection (glycol or anti-freeze valves); give the design's minimum outdoor temperature (design.minOutdoorTemperatureC) to have it checked",
+        "plain water in a heat-pump circuit: the outdoor pipes need frost protection (glycol or anti-freeze valves); state the minimum outdoor temperature in Design conditions to have it checked",
         ids,
+        ["design.minOutdoorTemperatureC"],
       );
     }
   }

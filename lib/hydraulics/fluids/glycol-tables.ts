@@ -79,3 +79,7 @@ export const ethyleneGlycolByVolume: GlycolDataset = {
   ],
   freezingPointC: [0, -3.62, -8.98, -15.7, -24.8, -37.11],
 };
+
+/** The citation shown with glycol mixture properties. */
+export const GLYCOL_SOURCE =
+  "ASHRAE Handbook—Fundamentals 2001, ch. 21 propylene/ethylene glycol tables by volume (ASHRAE-2001 fits), interpolated; IAPWS water as the 0 % row";

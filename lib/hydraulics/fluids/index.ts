@@ -6,10 +6,12 @@
  * RangeError naming the argument outside them, never return NaN.
  */
 import { glycolFreezingPointC, glycolProperties, glycolValidity } from "./glycol";
-import { WATER_MAX_C, WATER_MIN_C, waterDensityKgM3, waterDynamicViscosityPas, waterSpecificHeatJkgK } from "./water";
+import { WATER_MAX_C, WATER_MIN_C, WATER_SOURCE, waterDensityKgM3, waterDynamicViscosityPas, waterSpecificHeatJkgK } from "./water";
+import { GLYCOL_SOURCE } from "./glycol-tables";
 
 export * from "./water";
 export * from "./glycol";
+export { GLYCOL_SOURCE } from "./glycol-tables";
 export { iapws2008ViscosityPas } from "./iapws-2008-viscosity";
 export { if97Region1 } from "./iapws-if97-region1";
 
@@ -72,4 +74,9 @@ export function expansionFraction(fluid: FluidSpec, fillC: number, maxC: number)
 export function freezingPointC(fluid: FluidSpec): number {
   if (fluid.kind === "water") return 0;
   return glycolFreezingPointC(fluid.kind, fluid.percentByVolume);
+}
+
+/** Where the properties of this fluid come from: the glycol tables for a mixture, not water's. */
+export function fluidSource(fluid: FluidSpec): string {
+  return fluid.kind === "water" ? WATER_SOURCE : GLYCOL_SOURCE;
 }

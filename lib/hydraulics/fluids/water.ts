@@ -45,3 +45,6 @@ export function waterDynamicViscosityPas(tC: number): number {
 export function waterKinematicViscosityM2s(tC: number): number {
   return waterDynamicViscosityPas(tC) / waterDensityKgM3(tC);
 }
+
+/** The citation shown with water properties. */
+export const WATER_SOURCE = "IAPWS-IF97 region 1 (IAPWS R7-97) for density and specific heat; IAPWS 2008 (R12-08) for viscosity";

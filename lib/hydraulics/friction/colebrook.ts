@@ -104,3 +104,7 @@ export function fullyRoughFrictionFactor(relRoughness: number): number {
   const l = Math.log10(relRoughness / 3.7);
   return 0.25 / (l * l);
 }
+
+/** The citation shown with the friction factor's working (regimes: friction/darcy.ts). */
+export const COLEBROOK_SOURCE =
+  "C. F. Colebrook (1939), J. Inst. Civ. Eng. 11, 133–156 (Re ≥ 4000); laminar f = 64/Re below 2300; linear between (the engine's convention)";

@@ -15,3 +15,6 @@ export function reynolds(velocityMps: number, innerDiameterM: number, kinematicV
   }
   return (Math.abs(velocityMps) * innerDiameterM) / kinematicViscosityM2s;
 }
+
+/** The citation shown with this formula's working. */
+export const REYNOLDS_SOURCE = "Reynolds number Re = v·d/ν, defining equation (O. Reynolds, 1883)";

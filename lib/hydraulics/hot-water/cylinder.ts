@@ -38,3 +38,7 @@ export function cylinderReheatMinutes(input: CylinderReheatInput): number {
   const energyJ = (volumeL / 1000) * rho * cp * (storeTemperatureC - coldWaterC);
   return energyJ / (coilOutputKw * 1000) / 60;
 }
+
+/** The citation shown with the reheat working. */
+export const REHEAT_SOURCE =
+  "energy balance Q = m·cp·ΔT delivered at the coil output (a lower bound: standing losses and the coil's fall in output as the store warms are ignored)";

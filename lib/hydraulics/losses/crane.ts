@@ -54,3 +54,6 @@ export function craneFt(innerDiameterMm: number): number {
   }
   return best.fT;
 }
+
+/** The citation shown with fitting K values. */
+export const CRANE_SOURCE = "Crane Co., Technical Paper No. 410, Appendix A (K = n·fT)";

@@ -52,3 +52,19 @@ export function kvDpDerivativePaPerM3h(flowM3h: number, kv: number, densityKgM3:
 export const cvToKv = (cv: number): number => cv * KV_PER_CV;
 /** Kv → Cv: Cv = 1.1561·Kv. */
 export const kvToCv = (kv: number): number => kv / KV_PER_CV;
+
+/**
+ * The Kv (m³/h) of a fitting with loss coefficient K (velocity heads, Δp = K·ρv²/2)
+ * in a bore of innerDiameterMm (mm): from the Kv definition above with v = Q/A,
+ *   Kv = 3600·A·√(2·1e5/(1000·K)) = 3600·A·√(200/K),  A = πd²/4 in m² —
+ * independent of the fluid's density (both laws scale with ρ). K 0.075 in 20.2 mm → 59.6.
+ */
+export function kvForLossCoefficient(k: number, innerDiameterMm: number): number {
+  positive("k", k);
+  positive("innerDiameterMm", innerDiameterMm);
+  const areaM2 = (Math.PI * (innerDiameterMm / 1000) ** 2) / 4;
+  return 3600 * areaM2 * Math.sqrt((2 * DP0_PA) / (RHO0_KGM3 * k));
+}
+
+/** The citation shown with Kv workings. */
+export const KV_SOURCE = "IEC 60534-1 flow coefficient: Kv = Q·√((ρ/1000)/(Δp/1 bar)), Q in m³/h";

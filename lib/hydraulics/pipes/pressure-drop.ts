@@ -136,3 +136,6 @@ export function pipeDpDerivative(input: PipePressureDropInput): number {
   const down = pipePressureDrop({ ...input, flowM3s: q - h }).dpPa;
   return Math.max(0, (up - down) / (2 * h));
 }
+
+/** The citation shown with this formula's working. */
+export const DARCY_WEISBACH_SOURCE = "Darcy–Weisbach equation Δp = (f·L/d + ΣK)·ρv²/2 (e.g. F. M. White, Fluid Mechanics, ch. 6)";

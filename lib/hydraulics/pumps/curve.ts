@@ -101,3 +101,6 @@ export function pumpOperatingPoint(curve: PumpCurve, systemDpKpaAtFlow: (qM3h: n
   const q = (lo + hi) / 2;
   return { flowM3h: q, headKpa: pumpHeadKpa(curve, q)! };
 }
+
+/** How the head available is read off a curve. */
+export const PUMP_CURVE_SOURCE = "the maker's curve as drawn, read by linear interpolation between its points (no extrapolation)";

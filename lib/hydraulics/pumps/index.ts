@@ -4,3 +4,4 @@
  * operating point by bisection.
  */
 export * from "./curve";
+export * from "./affinity";

@@ -11,6 +11,7 @@ import type { ScenarioResult } from "@/lib/schematic/results";
 import type { ScenarioSpec } from "./list";
 import { simulate, type Simulation } from "./simulate";
 import { thermal } from "./thermal";
+import { resistanceRefs } from "@/lib/hydraulics/typical/resolve";
 
 const fin = (x: number | null | undefined): number | null => (x !== null && x !== undefined && Number.isFinite(x) ? x : null);
 
@@ -81,6 +82,8 @@ export function scenarioResult(ctx: EngineContext, spec: ScenarioSpec, sim: Simu
     pipes,
     parts: partResults(ctx, sim.state, sim.laws, sim.q, sim.head),
     emitters,
+    // what really flows depends on every resistance in the network
+    restsOn: resistanceRefs(ctx.inputs),
   };
 }
 

@@ -17,8 +17,8 @@ import { simulate } from "@/lib/hydraulics/scenarios/simulate";
 import type { EngineContext } from "./context";
 import { bypassBranchPoints, type ModeRun } from "./mode";
 
-export const BYPASS_MARGIN_FRACTION = 0.1;
-export const BYPASS_MARGIN_MIN_KPA = 2;
+export { BYPASS_MARGIN_FRACTION, BYPASS_MARGIN_MIN_KPA, BYPASS_RULE } from "./bypass-margin";
+import { BYPASS_MARGIN_FRACTION, BYPASS_MARGIN_MIN_KPA } from "./bypass-margin";
 
 export interface BypassSizing {
   id: string;

@@ -21,7 +21,7 @@ import type { DesignSolution } from "./design-solution";
 import { isCut } from "./laws";
 import type { DesignLoad } from "./loads";
 
-export interface TracedCircuit extends Circuit {
+export interface TracedCircuit extends Omit<Circuit, "restsOn"> {
   side: number;
   rootLink: number | null;
   flowM3h: number;

@@ -10,6 +10,8 @@ import { buildModel, type NetworkModel } from "@/lib/hydraulics/network/model";
 import type { PipeGeometry } from "@/lib/hydraulics/network/behaviour";
 import { findPipeSize } from "@/lib/hydraulics/pipes";
 import type { Findings } from "@/lib/hydraulics/findings/finding";
+import { resolveInputs, type ResolvedInputs } from "@/lib/hydraulics/typical/resolve";
+import { inputFindings } from "@/lib/hydraulics/typical/findings";
 import type { Schematic } from "@/lib/schematic/schema";
 
 export interface FluidState {
@@ -30,6 +32,8 @@ export interface EngineContext {
   deltaTK: number | null;
   /** by doc.pipes index; null when the pipe's geometry is unusable (input.* finding) */
   pipeGeom: (PipeGeometry | null)[];
+  /** Kv and water content each part is sized with: given, typical (an assumption), or not counted */
+  inputs: ResolvedInputs;
   findings: Findings;
 }
 
@@ -51,7 +55,7 @@ function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)
     if (dMm === undefined || epsMm === undefined) {
       findings.error(
         "input.pipe-size",
-        `pipe ${pipe.id}: no ${pipe.material} size "${pipe.size}" in the catalogue and no innerDiameterMm/roughnessMm given`,
+        `pipe ${pipe.id}: no ${pipe.material} size "${pipe.size}" in the catalogue and no inner diameter and roughness typed for it`,
         [pipe.id],
       );
       return null;
@@ -93,6 +97,8 @@ export function createContext(doc: Schematic, findings: Findings): EngineContext
     findings.error(
       "input.delta-t",
       `design: flow ${flowC} °C is not above return ${returnC} °C, so no design flow can be computed (ΔT must be > 0)`,
+      [],
+      ["design.flowTemperatureC", "design.returnTemperatureC"],
     );
   }
   const meanC = (flowC + returnC) / 2;
@@ -108,8 +114,13 @@ export function createContext(doc: Schematic, findings: Findings): EngineContext
   } catch (e) {
     findings.error(
       "fluid.out-of-range",
-      `fluid: no properties for ${doc.fluid.kind} at ${meanC} °C (${(e as Error).message}); hydraulic results are not computed`,
+      `fluid: no properties for ${doc.fluid.kind} at ${meanC} °C (${(e as Error).message.replace(/^tC: /, "")}); hydraulic results are not computed`,
+      [],
+      ["fluid.kind", "fluid.percentByVolume", "design.flowTemperatureC"],
     );
   }
-  return { doc, model, prep, fluid, flowC, returnC, deltaTK, pipeGeom: pipeGeometry(doc, findings), findings };
+  const pipeGeom = pipeGeometry(doc, findings);
+  const inputs = resolveInputs(doc, pipeGeom, fluid, deltaTK);
+  inputFindings(doc, inputs, findings);
+  return { doc, model, prep, fluid, flowC, returnC, deltaTK, pipeGeom, inputs, findings };
 }

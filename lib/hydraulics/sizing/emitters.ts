@@ -100,7 +100,7 @@ export function emitterResults(ctx: EngineContext, unheated: ReadonlySet<string>
   if (unchecked.length > 0) {
     ctx.findings.info(
       "emitter.ufh-not-checked",
-      `${unchecked.join(", ")}: no floor area, so the output shown is the heat load its design flow carries at the design ΔT and the floor is not checked against EN 1264 (set floorAreaM2)`,
+      `${unchecked.join(", ")}: no floor area, so the output shown is the heat load its design flow carries at the design ΔT and the floor is not checked against EN 1264 (give the heated floor area)`,
       unchecked,
     );
   }
@@ -116,14 +116,25 @@ export function hotWaterResult(ctx: EngineContext): Results["hotWater"] {
   // A heat source usually runs hotter for hot water than for heating, so the
   // heating flow temperature says nothing here; a stated highest flow
   // temperature does: water at that temperature cannot bring the store above it.
-  const hottestC = ctx.doc.design.maxFlowTemperatureC;
+  const { hotWaterFlowTemperatureC: hw, maxFlowTemperatureC: max } = ctx.doc.design;
+  const hottestC = hw ?? max;
+  const field = hw !== null && hw !== undefined ? "design.hotWaterFlowTemperatureC" : "design.maxFlowTemperatureC";
   if (hottestC !== null && hottestC !== undefined && cyl.props.storeTemperatureC >= hottestC) {
     ctx.findings.warning(
       "hot-water.flow-too-cool",
-      `${cyl.id}: store set to ${cyl.props.storeTemperatureC} °C but the hottest flow (design.maxFlowTemperatureC) is ${hottestC} °C, so the coil cannot reheat it (no reheat time); raise that flow temperature or lower the store setting`,
+      `${cyl.id}: store set to ${cyl.props.storeTemperatureC} °C but the hot-water flow is ${hottestC} °C, so the coil cannot reheat it (no reheat time); raise that flow temperature in Design conditions or lower the store setting`,
       [cyl.id],
+      [field],
     );
   } else {
+    if (hottestC === null || hottestC === undefined) {
+      ctx.findings.info(
+        "hot-water.flow-unknown",
+        `${cyl.id}: no hot-water flow temperature stated, so the reheat time assumes the heat source can bring the store to ${cyl.props.storeTemperatureC} °C; state it in Design conditions to have that checked`,
+        [cyl.id],
+        ["design.hotWaterFlowTemperatureC"],
+      );
+    }
     try {
       minutes = cylinderReheatMinutes({
         volumeL: cyl.props.volumeL,

@@ -9,5 +9,5 @@
 export { createContext, type EngineContext, type FluidState } from "./context";
 export { runMode, type ModeRun } from "./mode";
 export { sizeBypasses, BYPASS_MARGIN_FRACTION, BYPASS_MARGIN_MIN_KPA } from "./bypass";
-export { systemVolumeL, vesselResult, volumeResult } from "./vessel";
+export { systemVolume, vesselResult, volumeResult } from "./vessel";
 export { emitterResults, hotWaterResult } from "./emitters";

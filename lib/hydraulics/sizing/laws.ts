@@ -44,12 +44,15 @@ function setLoadKv(t: LinkTable, k: number, v: number | null, rho: number, solve
   t.set(k, solver ?? (v === null ? LAW.zero : LAW.kv), v === null ? LAW.zero : LAW.kv);
 }
 
+/** The Kv a part is sized with: the designer's, else the typical one (typical/resolve.ts); null: not counted. */
+const kvOf = (ctx: EngineContext, part: Part): number | null => ctx.inputs.kv.get(part.id) ?? null;
+
 function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design: boolean): void {
   const rho = ctx.fluid!.densityKgM3;
   const solver = design ? LAW.closed : undefined;
   switch (part.type) {
     case "radiator":
-      return setLoadKv(t, k, part.props.valveKv, rho, solver);
+      return setLoadKv(t, k, kvOf(ctx, part), rho, solver);
     case "ufh-loop": {
       const p = part.props;
       const g = { innerDiameterM: p.innerDiameterMm / 1000, roughnessM: UFH_ROUGHNESS_MM / 1000, lengthM: p.loopLengthM, sumK: 0 };
@@ -57,7 +60,7 @@ function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design
     }
     case "fan-coil":
     case "heat-load":
-      return setLoadKv(t, k, part.props.kv, rho, solver);
+      return setLoadKv(t, k, kvOf(ctx, part), rho, solver);
     case "cylinder":
       return setLoadKv(t, k, part.props.coilKv, rho, solver);
     default:
@@ -72,22 +75,23 @@ function setDeviceKv(t: LinkTable, k: number, v: number | null, rho: number, che
 }
 
 /** Set a two-port valve/device part (role "link") on link k. */
-function setDevice(t: LinkTable, k: number, part: Part, state: NetworkState, rho: number): void {
+function setDevice(ctx: EngineContext, t: LinkTable, k: number, part: Part, state: NetworkState, rho: number): void {
   switch (part.type) {
     case "zone-valve":
       setDeviceKv(t, k, part.props.kvs, rho, false);
       if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
       return;
     case "isolation-valve":
-      setDeviceKv(t, k, part.props.kv, rho, false);
+      setDeviceKv(t, k, kvOf(ctx, part), rho, false);
       if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
       return;
     case "check-valve":
-      return setDeviceKv(t, k, part.props.kv, rho, true);
+      return setDeviceKv(t, k, kvOf(ctx, part), rho, true);
     case "balancing-valve":
     case "strainer":
+    case "magnetic-filter":
     case "heat-meter":
-      return setDeviceKv(t, k, part.props.kv, rho, false);
+      return setDeviceKv(t, k, kvOf(ctx, part), rho, false);
     default:
       t.set(k, LAW.zero);
   }
@@ -110,7 +114,7 @@ export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
     switch (link.role) {
       case "heat-source": {
         const p = (part as PartOf<"heat-pump">).props;
-        const c = kvCoefficient(p.kv, rho);
+        const c = kvCoefficient(kvOf(ctx, part), rho);
         const curve = usableCurve(p.pumpCurve);
         t.c[k] = c;
         if (curve) t.setPump(k, curve, c, design ? LAW.kv : LAW.pump);
@@ -125,7 +129,7 @@ export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
         return;
       }
       case "link":
-        return setDevice(t, k, part, state, rho);
+        return setDevice(ctx, t, k, part, state, rho);
       case "bypass": {
         const opening = state.bypassOpeningKpa.get(part.id) ?? null;
         t.c[k] = kvCoefficient((part as PartOf<"dp-bypass-valve">).props.kvs, rho);

@@ -12,9 +12,12 @@ import type { NetworkState } from "./laws";
 import { partResults } from "./part-results";
 import { pipeResults } from "./pipe-results";
 import { pumpDuties } from "./pumps";
+import { resistanceRefs } from "@/lib/hydraulics/typical/resolve";
 
 export interface ModeRun {
   result: ModeResult;
+  /** pipes without flow in this mode (one pipe.no-flow finding covers every mode) */
+  noFlow: string[];
   solution: DesignSolution;
   circuits: CircuitAnalysis;
 }
@@ -68,12 +71,14 @@ export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun
       unpumped,
     );
   }
-  const pumps = pumpDuties(ctx, sol, ca);
+  // A circuit's drop rests on the assumed Kv of every part on its path (and of the pump's heat source).
+  const restsOn = ca.circuits.map((c) => resistanceRefs(ctx.inputs, c.pump ? [...c.path, c.pump] : c.path));
+  const pumps = pumpDuties(ctx, sol, ca, restsOn);
   let sourceFlow: number | null = null;
   ctx.model.links.forEach((l, k) => {
     if (l.role === "heat-source") sourceFlow = (sourceFlow ?? 0) + Math.abs(sol.q[k]!);
   });
-  const circuits: Circuit[] = ca.circuits.map((c) => ({
+  const circuits: Circuit[] = ca.circuits.map((c, i) => ({
     load: c.load,
     pump: c.pump,
     path: c.path,
@@ -81,19 +86,21 @@ export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun
     index: c.index,
     excessKpa: c.excessKpa,
     balancingKv: c.balancingKv,
+    restsOn: restsOn[i]!,
   }));
   const pump = pumps.reduce<(typeof pumps)[number] | null>(
     (best, p) => (best === null || (p.requiredHeadKpa ?? -1) > (best.requiredHeadKpa ?? -1) ? p : best),
     null,
   );
+  const noFlow: string[] = [];
   const result: ModeResult = {
     mode,
     heatSourceFlowM3h: sourceFlow !== null && Number.isFinite(sourceFlow) ? sourceFlow : null,
-    pipes: pipeResults(ctx, sol.q, mode),
+    pipes: pipeResults(ctx, sol.q, mode, noFlow),
     parts: partResults(ctx, sol.state, sol.laws, sol.q, sol.head),
     circuits,
     pump,
     pumps,
   };
-  return { result, solution: sol, circuits: ca };
+  return { result, noFlow, solution: sol, circuits: ca };
 }

@@ -62,7 +62,9 @@ export function partResults(
       laws.evaluate(k, flow, tmp);
       dp = tmp[0]!;
     }
-    out.push({ id: part.id, flowM3h: fin(flow), pressureDropKpa: dp === null ? null : fin(dp) });
+    const ref = ctx.inputs.kvRefOfPart.get(part.id);
+    const restsOn = ref ? [ref] : [];
+    out.push({ id: part.id, flowM3h: fin(flow), pressureDropKpa: dp === null ? null : fin(dp), restsOn });
   }
   return out;
 }

@@ -10,7 +10,8 @@
  * reported as exactly 0. Such a pipe has no Reynolds number or friction factor
  * (f = 64/Re is meaningless at Re → 0): both are null, its velocity, drop and
  * gradient are 0, no size is suggested (null, not the smallest size), and one
- * info finding `pipe.no-flow` per mode names all of them.
+ * info finding `pipe.no-flow` names all of them, once for every mode (calculate.ts
+ * gathers the modes' lists; called alone, pipeResults says it itself).
  */
 import { pipeCatalogue, pipePressureDrop } from "@/lib/hydraulics/pipes";
 import { PIPE_DROP_SLOTS, pipeDropInto } from "@/lib/hydraulics/pipes/pressure-drop";
@@ -106,7 +107,19 @@ function pipeDrop(geom: PipeGeometry, flowM3s: number, densityKgM3: number, kine
   return { velocityMps: out[4]!, reynolds: out[2]!, frictionFactor: out[3]!, dpPa: out[0]! + out[1]!, gradientPaPerM: out[5]! };
 }
 
-export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): PipeResult[] {
+/** The one `pipe.no-flow` note, in plain words. */
+export function noFlowFinding(ctx: EngineContext, ids: readonly string[]): void {
+  if (ids.length === 0) return;
+  const n = ids.length;
+  ctx.findings.info(
+    "pipe.no-flow",
+    `${n} pipe${n > 1 ? "s carry" : " carries"} no water when sized — legs to the expansion vessel and other accessories, shut valves, or circuits a mode does not use — so ${n > 1 ? "they have" : "it has"} no Reynolds number, friction factor or size suggestion`,
+    ids,
+  );
+}
+
+/** `noFlow`: where to gather the ids of pipes without flow; without it the finding is raised here. */
+export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, noFlowSink?: string[]): PipeResult[] {
   const fluid = ctx.fluid!;
   const { design } = ctx.doc;
   const noFlow: string[] = [];
@@ -131,6 +144,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
         "pipe.velocity-high",
         `pipe ${pipe.id}: ${Math.abs(r.velocityMps).toFixed(2)} m/s in ${mode} mode is above the ${design.maxVelocityMps} m/s limit${suggested ? `; ${suggested} would do` : ""}`,
         [pipe.id],
+        ["design.maxVelocityMps"],
       );
     }
     if (r.gradientPaPerM > design.targetGradientPaPerM) {
@@ -138,6 +152,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
         "pipe.gradient-high",
         `pipe ${pipe.id}: ${r.gradientPaPerM.toFixed(0)} Pa/m in ${mode} mode is above the ${design.targetGradientPaPerM} Pa/m target${suggested ? `; ${suggested} would do` : ""}`,
         [pipe.id],
+        ["design.targetGradientPaPerM"],
       );
     }
     if (suggested === null && Math.abs(flowM3h) > 1e-9) {
@@ -145,6 +160,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
         "pipe.no-size",
         `pipe ${pipe.id}: no ${pipe.material} size in the catalogue meets ${design.maxVelocityMps} m/s and ${design.targetGradientPaPerM} Pa/m at ${Math.abs(flowM3h).toFixed(3)} m³/h`,
         [pipe.id],
+        ["design.maxVelocityMps", "design.targetGradientPaPerM"],
       );
     }
     return {
@@ -158,12 +174,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string): 
       suggestedSize: suggested,
     };
   });
-  if (noFlow.length > 0) {
-    ctx.findings.info(
-      "pipe.no-flow",
-      `${noFlow.length} pipe${noFlow.length > 1 ? "s carry" : " carries"} no flow in ${mode} mode (legs to vessels and accessories, shut valves, circuits this mode does not serve): Reynolds number, friction factor and suggested size are left blank`,
-      noFlow,
-    );
-  }
+  if (noFlowSink) noFlowSink.push(...noFlow);
+  else noFlowFinding(ctx, noFlow);
   return out;
 }

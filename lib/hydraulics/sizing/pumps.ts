@@ -3,12 +3,22 @@
  * (its index circuit's pressure drop) and the head available — the sum of the
  * heads of the pumps in series on that side at their design flows (a heat
  * source's own pump curve counts), read off the curves (pumps/curve.ts).
+ *
+ * Pump setting, when the available head exceeds the required: the surplus,
+ * the speed as a fraction of the curve drawn at which the pump meets the duty
+ * (affinity laws, pumps/affinity.ts; one pump on the side only), and for a
+ * constant-pressure mode the head to set (the head required). More than
+ * PUMP_OVERSIZE_MARGIN above the head required is a `pump.oversized` finding:
+ * the surplus is burnt in valves (noise, TRVs that cannot close, a bypass that
+ * lifts) and in electricity. The margin is common practice, not a standard value.
  */
 import type { PumpDuty } from "@/lib/schematic/results";
 import type { EngineContext } from "./context";
 import { requiredHeads, type CircuitAnalysis } from "./circuits";
 import type { DesignSolution } from "./design-solution";
 import { pumpHeadAt } from "./part-results";
+import { affinitySpeedFraction, PUMP_OVERSIZE_MARGIN } from "@/lib/hydraulics/pumps/affinity";
+import { usableCurve } from "./laws";
 
 const fin = (x: number | null): number | null => (x !== null && Number.isFinite(x) ? x : null);
 
@@ -19,7 +29,7 @@ function curveOf(ctx: EngineContext, linkIndex: number): [number, number][] | nu
   return null;
 }
 
-export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitAnalysis): PumpDuty[] {
+export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitAnalysis, restsOn: string[][] = []): PumpDuty[] {
   const duties: PumpDuty[] = [];
   const heads = requiredHeads(ca);
   for (const [side, root] of ca.rootOfSide) {
@@ -52,12 +62,36 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
         [rootId, ...circuits.filter((c) => c.index).map((c) => c.load)],
       );
     }
+    const designFlow = Math.abs(sol.q[root]!);
+    const pumps = ca.pumpsOfSide.get(side) ?? [];
+    const surplus = available !== null && ok ? available - required : null;
+    const curve = pumps.length === 1 ? usableCurve(curveOf(ctx, pumps[0]!)) : null;
+    const speed = surplus !== null && surplus > 0 && curve ? affinitySpeedFraction(curve, designFlow, required) : null;
+    if (surplus !== null && required > 0 && surplus > PUMP_OVERSIZE_MARGIN * required) {
+      const setting = [
+        speed !== null ? `run it at about ${(speed * 100).toFixed(0)} % speed of the curve drawn (affinity laws)` : null,
+        `set ${required.toFixed(1)} kPa in a constant-pressure mode`,
+      ].filter(Boolean).join(", or ");
+      ctx.findings.info(
+        "pump.oversized",
+        `${rootId}: gives ${available!.toFixed(1)} kPa at ${designFlow.toFixed(3)} m³/h in ${sol.mode} mode, ${surplus.toFixed(1)} kPa (${((surplus / required) * 100).toFixed(0)} %) more than the ${required.toFixed(1)} kPa needed — more than the ${PUMP_OVERSIZE_MARGIN * 100} % margin; ${setting}`,
+        [rootId],
+      );
+    }
+    const refs = new Set<string>();
+    ca.circuits.forEach((c, i) => {
+      if (c.side === side) for (const r of restsOn[i] ?? []) refs.add(r);
+    });
     duties.push({
       id: rootId,
-      designFlowM3h: fin(Math.abs(sol.q[root]!)),
+      designFlowM3h: fin(designFlow),
       requiredHeadKpa: fin(required),
       availableHeadKpa: fin(available),
       ok,
+      surplusKpa: fin(surplus),
+      speedFraction: fin(speed),
+      constantPressureHeadKpa: fin(required),
+      restsOn: [...refs],
     });
   }
   return duties;

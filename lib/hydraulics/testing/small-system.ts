@@ -37,8 +37,9 @@ export function smallSystem() {
       { id: "tr", type: "tee" },
       { id: "te", type: "tee" },
       { id: "ts", type: "tee" },
-      { id: "r1", type: "radiator", props: { outputAtDt50W: 3000, heatLoadW: 1000, valveKv: 1 } },
-      { id: "r2", type: "radiator", props: { outputAtDt50W: 1500, heatLoadW: 500, valveKv: 1 } },
+      // Radiator water content stated (0 L): an empty one takes a typical value, and the hand volumes count none.
+      { id: "r1", type: "radiator", props: { outputAtDt50W: 3000, heatLoadW: 1000, valveKv: 1, waterVolumeL: 0 } },
+      { id: "r2", type: "radiator", props: { outputAtDt50W: 1500, heatLoadW: 500, valveKv: 1, waterVolumeL: 0 } },
       { id: "ev", type: "expansion-vessel", props: { volumeL: 8 } },
       { id: "sv", type: "safety-valve", props: { setBar: 3 } },
     ] as { id: string; type: string; props?: Record<string, unknown> }[],

@@ -1,7 +1,10 @@
 /**
  * Diaphragm expansion vessel sizing after EN 12828:2012+A1:2014 Annex D (the
  * formula layout is from memory, corroborated by several public implementations
- * — references.md §8.1; verify against the standard, open item §14.1).
+ * — references.md §8.1; verify against the standard, open item §14.1). A search
+ * of stored public pages for the Annex's text (final pressure rule, water
+ * reserve, pre-charge margin) found only makers' simplified rules, so the
+ * layout stays marked "from memory".
  * Pressures are bar gauge; "+1" converts to absolute (1 bar atmosphere, as the
  * Annex does).
  */
@@ -110,3 +113,7 @@ export function en12828Vessel(input: En12828Input): En12828Result {
     coldFillPressureOk: coldFillPressureBar >= minimumFillPressureBar && coldFillPressureBar < finalPressureBar,
   };
 }
+
+/** The citation shown with this formula's working. */
+export const EN12828_SOURCE =
+  "EN 12828:2012+A1:2014, Annex D (diaphragm expansion vessels) — formula layout from memory, corroborated by public implementations; not checked against the standard's text";

@@ -10,6 +10,9 @@ import { NewSchematicForm } from "@/components/projects/new-schematic-form";
 import { ProjectSettings } from "@/components/projects/project-settings";
 import { readDesignDefaults } from "@/lib/projects/design-defaults";
 import { SchematicCard } from "@/components/projects/schematic-card";
+import { ProjectDefaultsForm } from "@/components/design-conditions/project-defaults-form";
+import { projectDefaultsFrom } from "@/lib/schematic/project-defaults";
+import { getProjectDesignConditions } from "@/db/queries/project-design";
 
 export const metadata: Metadata = { title: "Project" };
 export const dynamic = "force-dynamic";
@@ -19,7 +22,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const access = await pageAccess(() => requireProjectRole(projectId, "project.read"));
   if (!access.ok) return <NotAllowed message={access.message} />;
   const { user, role } = access.value;
-  const [project, schematics] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id)]);
+  const [project, schematics, defaults] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id), getProjectDesignConditions(projectId)]);
   if (!project) notFound();
   // Variants are listed under the schematic they were made from; orphans stand on their own.
   const ids = new Set(schematics.map((s) => s.id));
@@ -46,7 +49,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
       <div className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-soft" data-testid="project-design">
         <span>
           Design: flow <span className="num">{design.flowTemperatureC} °C</span> / return <span className="num">{design.returnTemperatureC} °C</span>,
-          outdoor <span className="num">{design.outdoorC} °C</span>{design.heatSource && <> · {design.heatSource}</>}
+          outdoor {design.outdoorC === null ? "not set" : <span className="num">{design.outdoorC} °C</span>}{design.heatSource && <> · {design.heatSource}</>}
         </span>
         {can(role, "project.update") && (
           <ProjectSettings projectId={projectId} archived={project.archivedAt !== null}
@@ -78,6 +81,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ))}
         </ul>
       </section>
+      <ProjectDefaultsForm projectId={projectId} initial={projectDefaultsFrom(defaults)} canEdit={can(role, "project.update")} />
     </main>
   );
 }
