@@ -97,7 +97,7 @@ export function DraftForm({ projectId, rooms, flowC, deltaK, practice }: { proje
       {error && <p role="alert" className="mt-2 text-sm text-fault">{error}</p>}
       {done && (
         <div className="mt-4 rounded-lg border border-ok/30 bg-white p-4" data-testid="draft-done">
-          <p className="text-sm"><b>{done.name}</b> is drawn and sized{done.engineFindings.length ? ` (${done.engineFindings.length} engine findings to look at)` : " with no engine errors or warnings"}.</p>
+          <p className="text-sm"><b>{done.name}</b> is drawn and sized{done.engineFindings.length ? ` (${done.engineFindings.length} engine finding${done.engineFindings.length === 1 ? "" : "s"} to look at)` : " with no engine errors or warnings"}.</p>
           {done.findings.length > 0 && (
             <ul className="mt-2 space-y-1 text-sm">
               {done.findings.map((f, i) => <li key={i} className={f.severity === "warning" ? "text-warn" : "text-ink-soft"}>{f.message}</li>)}

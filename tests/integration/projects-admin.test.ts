@@ -43,7 +43,9 @@ describe("a new firm's first projects", () => {
     const id = made.body.data.id as string;
     const row = await db()("projects").where({ id }).first();
     expect(row).toMatchObject({ name: "Heron Cottage", client: "The Heron household", site: "Invented lane" });
-    expect(row.design_conditions).toEqual({ flowTemperatureC: 50, returnTemperatureC: 43, outdoorC: -5, heatSource: "9 kW heat pump" });
+    // stored in the one shape of the project's design conditions (lib/schematic/project-defaults.ts)
+    expect(row.design_conditions).toMatchObject({ fluid: { kind: "water" }, heatSource: "9 kW heat pump",
+      design: { flowTemperatureC: 50, returnTemperatureC: 43, minOutdoorTemperatureC: -5 } });
     const s = await callAction(() => projectActions.createSchematicAction({ projectId: id, name: "Plant room" }), cookie);
     expect(s.status).toBe(200);
     const draft = parseSchematic((await db()("schematics").where({ id: s.body.data.id }).first()).draft);

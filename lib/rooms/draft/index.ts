@@ -39,9 +39,8 @@ function planFindings(rooms: readonly Room[], plant: Plant): Finding[] {
   if (ratedW < totalW) {
     out.push({ severity: "warning", code: "draft.heat-source-small", message: `the ${word}'s ${kw(ratedW)} is below the rooms' total heat loss of ${kw(totalW)}: it cannot hold every room at design conditions; choose a larger one or check the losses`, refs: ["hs"] });
   }
-  if (plant.heatSource.kv === null) {
-    out.push({ severity: "info", code: "draft.heat-source-kv", message: `no Kv given for the ${word}'s heat exchanger, so its own pressure drop is not in the pump head: set it from the maker's data`, refs: ["hs"] });
-  }
+  // A heat source with no Kv: the engine itself says what it assumes (a typical value for a heat
+  // pump, the head excluding it for a boiler), so the draft adds no finding of its own.
   return out;
 }
 
