@@ -18,7 +18,8 @@ export function ProjectList() {
           <Link href={`/projects/${p.id}`} className="block rounded-lg border border-ink/10 bg-white p-4 shadow-sm transition hover:border-copper-300">
             <div className="flex items-start justify-between gap-2">
               <h2 className="font-semibold">{p.name}</h2>
-              {p.latestStatus && <StatusBadge status={p.latestStatus} />}
+              {p.archivedAt ? <span className="rounded bg-ink/5 px-2 py-0.5 text-xs text-ink-soft">archived</span>
+                : p.latestStatus && <StatusBadge status={p.latestStatus} />}
             </div>
             <p className="mt-1 text-sm text-ink-soft">{p.client}</p>
             <p className="text-sm text-ink-faint">{p.site}</p>

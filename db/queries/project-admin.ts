@@ -15,19 +15,49 @@ export async function projectNameTaken(organisationId: string, name: string): Pr
   return !!(await db()("projects").where({ organisation_id: organisationId }).whereRaw("lower(name) = lower(?)", [name]).first("id"));
 }
 
-export async function insertProject(organisationId: string, userId: string, p: NewProject): Promise<{ id: string; name: string }> {
-  return db().transaction(async (trx) => {
-    const [row] = await trx("projects").insert({ organisation_id: organisationId, name: p.name, client: p.client, site: p.site, created_by: userId })
-      .returning(["id", "name"]);
-    await trx("project_members").insert({ project_id: row.id, user_id: userId, role: "owner" });
-    return { id: row.id, name: row.name };
-  });
+/** Whether the person may start projects in the firm: its owners, and whoever holds one of `roles` on a project of it. */
+export async function mayCreateProjects(organisationId: string, userId: string, roles: readonly string[]): Promise<boolean> {
+  const owner = await db()("memberships").where({ organisation_id: organisationId, user_id: userId, role: "owner" }).first("user_id");
+  if (owner) return true;
+  const role = await db()("project_members as m").join("projects as p", "p.id", "m.project_id")
+    .where({ "p.organisation_id": organisationId, "m.user_id": userId }).whereIn("m.role", roles).first("m.role");
+  return !!role;
 }
 
-export async function getProjectHead(projectId: string): Promise<{ id: string; name: string; client: string; site: string; firm: string } | null> {
+/** The new project, or null when the firm already has one of that name (any case; the unique index decides races). */
+export async function insertProject(organisationId: string, userId: string, p: NewProject): Promise<{ id: string; name: string } | null> {
+  try {
+    return await db().transaction(async (trx) => {
+      const [row] = await trx("projects").insert({ organisation_id: organisationId, name: p.name, client: p.client, site: p.site, created_by: userId })
+        .returning(["id", "name"]);
+      await trx("project_members").insert({ project_id: row.id, user_id: userId, role: "owner" });
+      return { id: row.id, name: row.name };
+    });
+  } catch (e) {
+    if ((e as { code?: string }).code === "23505") return null;
+    throw e;
+  }
+}
+
+/** How many issued revisions the project's schematics hold (they cannot be deleted). */
+export async function issuedRevisionCount(projectId: string): Promise<number> {
+  const row = await db()("schematic_revisions as r").join("schematics as s", "s.id", "r.schematic_id")
+    .where({ "s.project_id": projectId, "r.status": "issued" }).count<{ n: string }[]>("* as n").first();
+  return Number(row?.n ?? 0);
+}
+
+export async function archiveProjectRow(projectId: string): Promise<void> {
+  await db()("projects").where({ id: projectId }).whereNull("archived_at").update({ archived_at: db().fn.now(), updated_at: db().fn.now() });
+}
+
+export type ProjectHead = { id: string; name: string; client: string; site: string; firm: string; archivedAt: string | null };
+
+export async function getProjectHead(projectId: string): Promise<ProjectHead | null> {
   const row = await db()("projects as p").join("organisations as o", "o.id", "p.organisation_id")
-    .where("p.id", projectId).first("p.id", "p.name", "p.client", "p.site", "o.name as firm");
-  return row ?? null;
+    .where("p.id", projectId).first("p.id", "p.name", "p.client", "p.site", "o.name as firm", "p.archived_at");
+  if (!row) return null;
+  const { archived_at: archivedAt, ...head } = row;
+  return { ...head, archivedAt: archivedAt ? new Date(archivedAt).toISOString() : null };
 }
 
 export async function deleteProjectRow(projectId: string): Promise<number> {

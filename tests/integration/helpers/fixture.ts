@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { demoFirm } from "@/db/seeds/demo/people";
@@ -52,7 +53,19 @@ export async function snapshot(f: Fixture): Promise<string> {
 }
 
 export async function dropFixtures(): Promise<void> {
-  await db()("projects").where("name", "like", `${FIXTURE_PREFIX}%`).delete();
+  await dropProjectsForTests((q) => q.where("name", "like", `${FIXTURE_PREFIX}%`));
 }
 
-export { hashToken };
+/**
+ * Test clean-up only: deletes projects even when they hold issued revisions, which the
+ * database otherwise refuses (migration 20261203000001). The trigger is switched off inside
+ * this one transaction (DDL is transactional in PostgreSQL; the table owner may do it), so
+ * foreign-key cascades still run and no other session ever sees it off.
+ */
+export async function dropProjectsForTests(where: (q: Knex.QueryBuilder) => Knex.QueryBuilder): Promise<void> {
+  await db().transaction(async (trx) => {
+    await trx.raw("alter table schematic_revisions disable trigger lw_revision_immutable");
+    await where(trx("projects")).delete();
+    await trx.raw("alter table schematic_revisions enable trigger lw_revision_immutable");
+  });
+}

@@ -17,7 +17,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const access = await pageAccess(() => requireProjectRole(projectId, "project.read"));
   if (!access.ok) return <NotAllowed message={access.message} />;
   const { user, role } = access.value;
-  const [project, schematics] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id)]);
+  const [project, schematics] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id, role)]);
   if (!project) notFound();
   // Variants are listed under the schematic they were made from; orphans stand on their own.
   const ids = new Set(schematics.map((s) => s.id));
@@ -39,6 +39,12 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <Link href={`/projects/${projectId}/team`} className="text-copper-600 hover:underline">Team</Link>
         </p>
       </div>
+
+      {project.archivedAt && (
+        <p role="status" className="mt-4 rounded-md border border-warn/30 bg-warn/5 px-3 py-2 text-sm text-ink-soft" data-testid="archived-note">
+          Archived on {project.archivedAt.slice(0, 10)}: it holds issued revisions, which are kept as the record of what was built, so it was archived instead of deleted.
+        </p>
+      )}
 
       <section className="mt-8" aria-labelledby="schematics-h">
         <div className="flex flex-wrap items-center justify-between gap-3">

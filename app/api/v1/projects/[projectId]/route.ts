@@ -11,8 +11,8 @@ export const GET = apiHandler(async (_req: Request, { params }: Ctx) => {
   return NextResponse.json(await readProject((await params).projectId));
 });
 
-/** Owner only; audited. */
+/** Owner only; audited. 204 when deleted; 200 {archived, message} when issued revisions keep it. */
 export const DELETE = apiHandler(async (_req: Request, { params }: Ctx) => {
-  await deleteProject((await params).projectId);
-  return new NextResponse(null, { status: 204 });
+  const r = await deleteProject((await params).projectId);
+  return "archived" in r ? NextResponse.json(r) : new NextResponse(null, { status: 204 });
 });
