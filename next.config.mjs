@@ -10,8 +10,9 @@ const nextConfig = {
     // One body limit for server actions and route handlers (lib/http/limits.mjs); proxy.ts
     // answers 413 with a message above it, before Next would.
     serverActions: { bodySizeLimit: BODY_LIMIT_BYTES },
-    // proxy.ts reads action bodies to check them; buffer no more than the limit (+1 to see "over")
-    proxyClientMaxBodySize: BODY_LIMIT_BYTES + 1,
+    // proxy.ts reads action bodies to check them. Next buffers at most this much for it, dropping
+    // the chunk that crosses; twice the limit still shows any body over the limit as over it.
+    proxyClientMaxBodySize: 2 * BODY_LIMIT_BYTES,
   },
   async headers() {
     return [

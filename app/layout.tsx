@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
+import { BrowserSetup } from "@/components/browser-setup";
 import { plexMono, plexSans } from "./fonts";
 import "./globals.css";
 
@@ -17,7 +18,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await connection();
   return (
     <html lang="en-GB" className={`${plexSans.variable} ${plexMono.variable}`}>
-      <body className="min-h-screen">{children}</body>
+      <body className="min-h-screen"><BrowserSetup />{children}</body>
     </html>
   );
 }

@@ -25,6 +25,7 @@ export function SignInForm({ next, email }: { next?: string; email?: string }) {
 
 export function SignUpForm() {
   const [state, action] = useActionState<FormResult, FormData>(signUpAction, null);
+  if (state?.ok) return <FormAlert state={state} />; // "check your e-mail": the rest happens from the link
   return (
     <form action={action} className="space-y-4" noValidate>
       <FormAlert state={state} />

@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { sizeSchematic } from "@/components/drawing-board/actions";
+import { actionErrorMessage } from "@/lib/action-error";
 import { Button } from "@/components/ui/button";
 import { useBoardSession } from "../persistence/session-context";
 import { useBoardStore, useBoard } from "../store";
@@ -23,8 +24,8 @@ export function SizeItButton() {
       const r = await sizeSchematic({ schematicId, doc: store.getState().doc });
       if (r.ok) store.getState().setResults(r.data);
       else setError(r.error);
-    } catch {
-      setError("Could not reach the server to size the schematic.");
+    } catch (e) {
+      setError(actionErrorMessage(e, "Could not reach the server to size the schematic."));
     } finally {
       setBusy(false);
     }
