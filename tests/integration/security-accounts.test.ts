@@ -132,7 +132,7 @@ describe("item 3: the per-address limit does not trust X-Forwarded-For; long add
     }
     expect(statuses.slice(0, ADDRESS_LIMIT.points).every((s) => s === 400)).toBe(true);
     expect(statuses[ADDRESS_LIMIT.points]).toBe(429);
-  });
+  }, 120_000); // 30 password checks (scrypt), slow when every suite runs at once
 
   it("a 300-character address or e-mail key makes sign-in and forgot-password answer 4xx, not 500", async () => {
     const long = `${"a".repeat(300)}`;

@@ -53,19 +53,19 @@ export async function snapshot(f: Fixture): Promise<string> {
 }
 
 export async function dropFixtures(): Promise<void> {
-  await dropProjectsForTests((q) => q.where("name", "like", `${FIXTURE_PREFIX}%`));
+  await deleteForTests((trx) => trx("projects").where("name", "like", `${FIXTURE_PREFIX}%`).delete());
 }
 
 /**
- * Test clean-up only: deletes projects even when they hold issued revisions, which the
- * database otherwise refuses (migration 20261203000001). The trigger is switched off inside
- * this one transaction (DDL is transactional in PostgreSQL; the table owner may do it), so
- * foreign-key cascades still run and no other session ever sees it off.
+ * Test clean-up only: runs `del` (deleting projects or schematics) even when issued revisions
+ * would go with them, which the database otherwise refuses (migration 20261203000001). The
+ * trigger is switched off inside this one transaction (DDL is transactional in PostgreSQL;
+ * the table owner may do it), so foreign-key cascades still run and no other session ever sees it off.
  */
-export async function dropProjectsForTests(where: (q: Knex.QueryBuilder) => Knex.QueryBuilder): Promise<void> {
+export async function deleteForTests(del: (trx: Knex.Transaction) => Promise<unknown>): Promise<void> {
   await db().transaction(async (trx) => {
     await trx.raw("alter table schematic_revisions disable trigger lw_revision_immutable");
-    await where(trx("projects")).delete();
+    await del(trx);
     await trx.raw("alter table schematic_revisions enable trigger lw_revision_immutable");
   });
 }
