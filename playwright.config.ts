@@ -24,7 +24,8 @@ export default defineConfig({
     trace: "off",
   },
   webServer: {
-    command: `node_modules/.bin/next start -p ${port}`,
+    // loopback only: the tests run with demo sign-in and the caught-mail page on
+    command: `node_modules/.bin/next start -p ${port} -H 127.0.0.1`,
     url: `http://localhost:${port}/`,
     reuseExistingServer: false,
     timeout: 60_000,

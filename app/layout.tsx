@@ -1,4 +1,6 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
+import { BrowserSetup } from "@/components/browser-setup";
 import { plexMono, plexSans } from "./fonts";
 import "./globals.css";
 
@@ -10,10 +12,13 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#b4632b" };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request, so Next.js can put this response's CSP nonce
+  // (proxy.ts) on its scripts; a page prerendered at build time would carry none and not run.
+  await connection();
   return (
     <html lang="en-GB" className={`${plexSans.variable} ${plexMono.variable}`}>
-      <body className="min-h-screen">{children}</body>
+      <body className="min-h-screen"><BrowserSetup />{children}</body>
     </html>
   );
 }

@@ -142,7 +142,8 @@ async function benchApi() {
   const url = `${base}/api/v1/calculate`;
   console.log(`\nAPI: POST ${url}`);
   const body = readFileSync(path.resolve("db/seeds/data/millbrook-hall.json"), "utf8");
-  const headers: Record<string, string> = { "content-type": "application/json" };
+  // a request with a session cookie must say it comes from the app itself (lib/http/request-guard.ts)
+  const headers: Record<string, string> = { "content-type": "application/json", origin: new URL(base).origin };
   if (process.env.BENCH_COOKIE) headers.cookie = process.env.BENCH_COOKIE;
   const first = await probe(url, headers, body);
   if ("why" in first || first.status === 401 || first.status === 403) {

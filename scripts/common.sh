@@ -96,7 +96,36 @@ migrate_and_seed() {
   step "Migrating and seeding $DATABASE_URL"
   npx tsx scripts/db-migrate.ts || fail "A database migration failed (see the message above)." \
     "Fix the migration in db/migrations, or for a throw-away local database: rm -rf .pgdata and start again."
-  npx tsx scripts/db-seed.ts || fail "Seeding the demo data failed (see the message above)."
+  if [ "${DEMO_SIGN_IN:-}" = true ]; then
+    npx tsx scripts/db-seed.ts || fail "Seeding the demo data failed (see the message above)."
+  else
+    step "Demo people and projects not seeded (DEMO_SIGN_IN is not true): their passwords are published in the README"
+  fi
+}
+
+# Demo sign-in and the caught-mail page hand out accounts and reset links: local use only.
+# npm start / npm test / npm run dev turn them on unless .env says otherwise, and refuse to
+# run with them on when APP_URL is not on this machine.
+is_loopback_url() {
+  local host
+  host="$(printf '%s' "$1" | sed -E 's#^[A-Za-z][A-Za-z0-9+.-]*://([^@/]*@)?(\[[^]]*\]|[^/:?#]*).*$#\2#' | tr 'A-Z' 'a-z')"
+  case "$host" in
+    localhost|*.localhost|"[::1]") return 0 ;;
+  esac
+  [[ "$host" =~ ^127\.[0-9]+\.[0-9]+\.[0-9]+$ ]]
+}
+
+demo_features() {
+  export DEMO_SIGN_IN="${DEMO_SIGN_IN:-true}" MAIL_VIEWER="${MAIL_VIEWER:-true}"
+  if { [ "$DEMO_SIGN_IN" = true ] || [ "$MAIL_VIEWER" = true ]; } && ! is_loopback_url "$APP_URL"; then
+    fail "Refusing to start: demo sign-in (DEMO_SIGN_IN=$DEMO_SIGN_IN) or the caught-mail page (MAIL_VIEWER=$MAIL_VIEWER) is on, and APP_URL=$APP_URL is not on this machine." \
+      "Anyone who can reach that address could sign in as the demo owner or read password-reset links." \
+      "For a server others reach, put these two lines in .env:  DEMO_SIGN_IN=false  and  MAIL_VIEWER=false" \
+      "For local use, serve on loopback instead, e.g. APP_URL=http://localhost:${PORT:-3000}"
+  fi
+  # with either on, listen on loopback only, so the machine's other addresses do not serve them
+  if [ "$DEMO_SIGN_IN" = true ] || [ "$MAIL_VIEWER" = true ]; then BIND_HOST=127.0.0.1; else BIND_HOST=0.0.0.0; fi
+  export BIND_HOST
 }
 
 # Local stand-ins for hosted services: an SMTP catcher and a fake S3.
@@ -137,6 +166,7 @@ prepare_app() {
   export SMTP_PORT="${SMTP_PORT:-1025}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}" S3_PORT="${S3_PORT:-4569}"
   export MAIL_WEB_URL="${MAIL_WEB_URL:-http://127.0.0.1:$MAIL_WEB_PORT}" S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_PORT}"
   export APP_URL="${APP_URL:-http://localhost:$PORT}"
+  demo_features
   ensure_node_modules
   ensure_postgres
   ensure_database loopwright

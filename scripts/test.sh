@@ -7,6 +7,8 @@ export SMTP_PORT="${TEST_SMTP_PORT:-1026}" MAIL_WEB_PORT="${TEST_MAIL_WEB_PORT:-
 export MAIL_WEB_URL="http://127.0.0.1:$MAIL_WEB_PORT" S3_ENDPOINT="http://127.0.0.1:$S3_PORT"
 export E2E_PORT="${E2E_PORT:-3100}" APP_URL="http://localhost:${E2E_PORT:-3100}"
 export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
+# the browser tests use the demo sign-ins; the caught-mail page is tested too (both loopback only)
+demo_features
 
 ensure_node_modules
 [ -x "$CHROMIUM_PATH" ] || apt_install chromium

@@ -8,6 +8,7 @@ import {
   changePasswordInput, forgotInput, formObject, inviteSignUpInput, resetInput, safeNext, signInInput, signUpInput, tokenField,
 } from "@/lib/auth/schemas";
 import { projectRoles } from "@/lib/auth/policy";
+import { checkEmailMessage, confirmSignUp, requestSignUp } from "@/lib/auth/sign-up";
 import { acceptInvitation, signUpWithInvitation } from "@/lib/team/invitations";
 
 // Server actions for accounts. Each is (previous state, FormData) → ActionResult so forms
@@ -26,9 +27,19 @@ export async function signInAction(_prev: FormState, fd: FormData): Promise<Form
   return r;
 }
 
+/** Answers "check your e-mail" whether or not the address has an account (lib/auth/sign-up.ts). */
 export async function signUpAction(_prev: FormState, fd: FormData): Promise<FormState> {
-  const r = await runAction(async () => accounts.signUp(signUpInput.parse(formObject(fd))));
-  if (r.ok) redirect("/projects");
+  return runAction(async () => {
+    const input = signUpInput.parse(formObject(fd));
+    await requestSignUp(input);
+    return checkEmailMessage(input.email);
+  });
+}
+
+/** The e-mailed link's button: makes the account and firm, signs in. */
+export async function confirmSignUpAction(_prev: FormState, fd: FormData): Promise<FormState> {
+  const r = await runAction(async () => confirmSignUp(tokenField.parse(fd.get("token"))));
+  if (r.ok) redirect("/projects?welcome=1");
   return r;
 }
 

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useActionState } from "react";
 import {
-  acceptInvitationAction, changePasswordAction, forgotPasswordAction, inviteSignUpAction, resetPasswordAction, signInAction, signUpAction,
+  acceptInvitationAction, changePasswordAction, confirmSignUpAction, forgotPasswordAction, inviteSignUpAction, resetPasswordAction, signInAction, signUpAction,
 } from "@/components/auth/actions";
 import { Field, FormAlert, SubmitButton, type FormResult } from "./form-bits";
 
@@ -25,14 +25,26 @@ export function SignInForm({ next, email }: { next?: string; email?: string }) {
 
 export function SignUpForm() {
   const [state, action] = useActionState<FormResult, FormData>(signUpAction, null);
+  if (state?.ok) return <FormAlert state={state} />; // "check your e-mail": the rest happens from the link
   return (
     <form action={action} className="space-y-4" noValidate>
       <FormAlert state={state} />
       <Field label="Your name" name="name" autoComplete="name" required maxLength={120} state={state} />
       <Field label="E-mail address" name="email" type="email" autoComplete="email" required state={state} />
-      <Field label="Password" name="password" type="password" autoComplete="new-password" required state={state} hint="At least 10 characters." />
+      <Field label="Password" name="password" type="password" autoComplete="new-password" required state={state} hint="At least 10 characters, not easy to guess." />
       <Field label="Firm name" name="firm" autoComplete="organization" required maxLength={160} state={state} hint="Your projects belong to this firm; you can invite colleagues to them." />
-      <SubmitButton pending="Creating your account…">Create account</SubmitButton>
+      <SubmitButton pending="Sending…">Create account</SubmitButton>
+    </form>
+  );
+}
+
+export function ConfirmSignUpForm({ token }: { token: string }) {
+  const [state, action] = useActionState<FormResult, FormData>(confirmSignUpAction, null);
+  return (
+    <form action={action} className="space-y-4">
+      <FormAlert state={state} />
+      <input type="hidden" name="token" value={token} />
+      <SubmitButton pending="Creating your account…">Create my account</SubmitButton>
     </form>
   );
 }

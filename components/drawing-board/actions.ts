@@ -2,7 +2,7 @@
 
 import { z } from "zod";
 import { audit } from "@/lib/audit";
-import { requireProjectRole, requireSchematicAccess, requireUser } from "@/lib/auth/authorize";
+import { requireActionOnSomeProject, requireProjectRole, requireSchematicAccess, requireUser } from "@/lib/auth/authorize";
 import { requestIp } from "@/lib/auth/request-context";
 import * as q from "@/db/queries/schematics";
 import { parseSchematic } from "@/lib/schematic";
@@ -50,12 +50,15 @@ export async function saveRevision(input: { schematicId: string; lockVersion: nu
 export async function setRevisionStatus(input: { revisionId: string; status: string }) {
   return runChecked(async () => {
     const i = z.object({ revisionId: z.uuid(), status: z.enum(revisionStatuses) }).parse(input);
+    // who first: nothing about the revision (not even its status) is told before the caller may read it
+    await requireUser();
     const revision = await q.getRevision(i.revisionId);
     if (!revision) return new Refused(404, "Revision not found.");
+    const access = await requireSchematicAccess(revision.schematicId, "read");
+    if (access.issuedOnly && revision.status !== "issued") return new Refused(404, "Revision not found.");
     const move = findTransition(revision.status, i.status);
     if (!move) return new Refused(409, `A revision cannot move from ${revision.status} to ${i.status}.`);
     const { user } = await requireProjectRole(revision.projectId, move.action);
-    await requireSchematicAccess(revision.schematicId, "read");
     const r = await q.setRevisionStatus({ revisionId: i.revisionId, from: revision.status, to: i.status });
     if (!r.ok) return new Refused(409, "Someone changed this revision's status first; reload to see it.");
     await audit({ actorId: user.id, action: "revision.status", projectId: revision.projectId, target: i.revisionId,
@@ -82,15 +85,16 @@ export async function startNewDraft(input: { schematicId: string }) {
 }
 
 /**
- * Runs the engine on the board's current document; with a schematicId the caller must be
- * allowed to size it, and the answer is kept as the draft's last sizing (with the document
- * it was for), so it is there on the next opening, for everyone who may read the draft.
+ * Runs the engine on the board's current document: with a schematicId the caller must be allowed to size
+ * that schematic, and the answer is kept as the draft's last sizing (with the document it was for), so it
+ * is there on the next opening for everyone who may read the draft; without one (a document not saved
+ * anywhere) they must be allowed to size on some project.
  */
 export async function sizeSchematic(input: { schematicId?: string; doc: unknown }) {
   return runChecked(async () => {
     const i = z.object({ schematicId: uuid.optional(), doc: z.unknown() }).parse(input);
     const access = i.schematicId ? await requireSchematicAccess(i.schematicId, "size") : null;
-    if (!access) await requireUser();
+    if (!access) await requireActionOnSomeProject("schematic.size");
     const r = sizeToAnswer(JSON.stringify(i.doc ?? null), () => ({ ok: true, value: i.doc }));
     if (!(r instanceof Answer)) return r;
     const results = r.results();

@@ -24,8 +24,8 @@ export function ProjectList() {
       </section>
     );
   }
-  const active = data.projects.filter((p) => !p.archived);
-  const archived = data.projects.filter((p) => p.archived);
+  const active = data.projects.filter((p) => !p.archivedAt);
+  const archived = data.projects.filter((p) => p.archivedAt);
   return (
     <>
       <div className="mt-4 flex flex-wrap items-start gap-3"><NewProject /></div>
@@ -46,10 +46,10 @@ function Cards({ projects, testId }: { projects: ProjectSummary[]; testId: strin
     <ul className="mt-6 grid gap-3 sm:grid-cols-2" data-testid={testId}>
       {projects.map((p) => (
         <li key={p.id}>
-          <Link href={`/projects/${p.id}`} className={`block rounded-lg border border-ink/10 bg-white p-4 shadow-sm transition hover:border-copper-300 ${p.archived ? "opacity-75" : ""}`}>
+          <Link href={`/projects/${p.id}`} className={`block rounded-lg border border-ink/10 bg-white p-4 shadow-sm transition hover:border-copper-300 ${p.archivedAt ? "opacity-75" : ""}`}>
             <div className="flex items-start justify-between gap-2">
               <h2 className="font-semibold">{p.name}</h2>
-              {p.archived ? <span className="rounded-full bg-paper-dark px-2 py-0.5 text-xs text-ink-soft">Archived</span> : p.latestStatus && <StatusBadge status={p.latestStatus} />}
+              {p.archivedAt ? <span className="rounded-full bg-paper-dark px-2 py-0.5 text-xs text-ink-soft">Archived</span> : p.latestStatus && <StatusBadge status={p.latestStatus} />}
             </div>
             <p className="mt-1 text-sm text-ink-soft">{p.client}</p>
             <p className="text-sm text-ink-faint">{p.site}</p>

@@ -21,13 +21,9 @@ export async function up(knex: Knex): Promise<void> {
     t.text("sized_by").references("users.id").onDelete("SET NULL");
     t.timestamp("sized_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
   });
-  await knex.schema.alterTable("projects", (t) => {
-    t.timestamp("archived_at", { useTz: true }).nullable();
-  });
 }
 
 export async function down(knex: Knex): Promise<void> {
-  await knex.schema.alterTable("projects", (t) => t.dropColumn("archived_at"));
   await knex.schema.dropTableIfExists("draft_results");
   await knex.schema.dropTableIfExists("revision_results");
 }

@@ -4,16 +4,17 @@ import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { audit } from "@/lib/audit";
 import { config } from "@/lib/config";
+import { later } from "@/lib/later";
 import { passwordResetMessage, sendMail } from "@/lib/mail";
 import { UserError } from "./errors";
 import { hashPassword, verifyPassword } from "./password";
 import { maybeSweep } from "./housekeeping";
-import { allowResetMail, assertSignInAllowed, clearAccountCounter, recordFailedSignIn } from "./rate-limit";
+import { allowAccountMail, signInSucceeded, takeSignInAttempt } from "./rate-limit";
 import { requestIp } from "./request-context";
 import { endAllSessions, endSession, startSession, type SessionUser } from "./session";
 import { hashToken, newToken } from "./tokens";
 
-// Account life cycle: sign up, sign in/out, password change and reset. Inputs arrive
+// Account life cycle: sign in/out (sign-up: ./sign-up.ts), password change and reset. Inputs arrive
 // already parsed by the zod schemas in ./schemas.ts.
 
 export const RESET_TTL_MS = 60 * 60 * 1000;
@@ -24,55 +25,37 @@ export function newUserId(): string {
   return `u_${randomBytes(15).toString("base64url")}`;
 }
 
-function slugify(name: string): string {
-  const base = name.toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "firm";
-  return `${base}-${randomBytes(3).toString("hex")}`;
-}
-
 export async function emailTaken(email: string, trx: Knex = db()): Promise<boolean> {
   return !!(await trx("users").where({ email }).first("id"));
 }
 
-export async function insertUser(trx: Knex, u: { name: string; email: string; password: string }): Promise<string> {
+export async function insertUser(trx: Knex, u: { name: string; email: string; password: string } | { name: string; email: string; passwordHash: string }): Promise<string> {
   if (await emailTaken(u.email, trx)) {
     throw new UserError(409, "An account with this e-mail address already exists. Sign in instead, or reset the password.");
   }
   const id = newUserId();
-  await trx("users").insert({ id, name: u.name, email: u.email, password_hash: await hashPassword(u.password) });
+  const passwordHash = "passwordHash" in u ? u.passwordHash : await hashPassword(u.password);
+  await trx("users").insert({ id, name: u.name, email: u.email, password_hash: passwordHash });
   return id;
-}
-
-/** Open sign-up: a new person with a new firm, of which they are the owner. Signs them in. */
-export async function signUp(input: { name: string; email: string; password: string; firm: string }): Promise<string> {
-  const userId = await db().transaction(async (trx) => {
-    const id = await insertUser(trx, input);
-    const [org] = await trx("organisations").insert({ name: input.firm, slug: slugify(input.firm) }).returning("id");
-    await trx("memberships").insert({ organisation_id: org.id, user_id: id, role: "owner" });
-    return id;
-  });
-  await startSession(userId);
-  await audit({ actorId: userId, action: "auth.sign-up", target: input.email, ip: await requestIp() });
-  return userId;
 }
 
 export async function signIn(input: { email: string; password: string }): Promise<string> {
   const ip = await requestIp();
   maybeSweep();
-  await assertSignInAllowed(input.email, ip);
+  await takeSignInAttempt(input.email, ip); // counted before the check, so parallel tries cannot slip past
   const user = await db()("users").where({ email: input.email }).first("id", "password_hash");
   const ok = await verifyPassword(user?.password_hash ?? DUMMY_HASH, input.password).catch(() => false);
   if (!user || !ok) {
-    await recordFailedSignIn(input.email, ip);
     await audit({ actorId: user?.id ?? null, action: "auth.sign-in-failed", target: input.email, ip, detail: { reason: user ? "password" : "unknown-email" } });
     throw new UserError(400, "That e-mail address and password do not match an account. Check both, or reset your password.");
   }
-  await clearAccountCounter(input.email);
+  await signInSucceeded(input.email, ip);
   await startSession(user.id);
   await audit({ actorId: user.id, action: "auth.sign-in", target: input.email, ip });
   return user.id;
 }
 
-/** Development demo: sign in as the seeded person for a role, without a password. */
+/** Development demo: sign in as the seeded person for a role, without a password (loopback only, see lib/config.ts). */
 export async function signInAsDemo(role: string): Promise<string> {
   if (!config.demoSignIn) throw new UserError(403, "Demo sign-in is turned off on this server.");
   const user = await db()("users").where({ id: `demo-${role}` }).first("id", "email");
@@ -98,17 +81,23 @@ export async function changePassword(user: SessionUser, input: { current: string
   await audit({ actorId: user.id, action: "auth.password-changed", target: user.email, ip: await requestIp() });
 }
 
-/** Always answers the same way, so the form does not reveal which addresses have accounts. */
+/**
+ * Always answers the same way, in the same time: the limiter and the look-up are done for
+ * every address, and the token, e-mail and audit row for a real account happen after the
+ * answer (lib/later.ts), so neither the words nor the speed tell which addresses have accounts.
+ */
 export async function requestPasswordReset(email: string): Promise<void> {
-  if (!(await allowResetMail(email, await requestIp()))) return;
+  const ip = await requestIp();
+  const allowed = await allowAccountMail("reset", email, ip);
   const user = await db()("users").where({ email }).first("id", "name", "email");
-  if (!user) return;
-  const { token, hash } = newToken();
-  const expiresAt = new Date(Date.now() + RESET_TTL_MS);
-  await db()("password_resets").insert({ token_hash: hash, user_id: user.id, expires_at: expiresAt });
-  const link = `${config.appUrl}/reset-password/${token}`;
-  await sendMail(passwordResetMessage({ to: user.email, name: user.name, link, expiresAt }));
-  await audit({ actorId: user.id, action: "auth.password-reset-requested", target: user.email, ip: await requestIp() });
+  if (!allowed || !user) return;
+  later("password reset e-mail", async () => {
+    const { token, hash } = newToken();
+    const expiresAt = new Date(Date.now() + RESET_TTL_MS);
+    await db()("password_resets").insert({ token_hash: hash, user_id: user.id, expires_at: expiresAt });
+    await sendMail(passwordResetMessage({ to: user.email, name: user.name, link: `${config.appUrl}/reset-password/${token}`, expiresAt }));
+    await audit({ actorId: user.id, action: "auth.password-reset-requested", target: user.email, ip });
+  });
 }
 
 export type ResetCheck = { ok: true; userId: string; email: string } | { ok: false; reason: string };

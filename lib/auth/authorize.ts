@@ -3,6 +3,8 @@ import { db } from "@/lib/db";
 import { AuthError, errorBody, type Issue } from "./errors";
 import { actionWords, can, isProjectRole, rolesThatCan, type Action, type ProjectRole } from "./policy";
 import { RequestScope } from "./request-context";
+import { boundBodyReaders } from "@/lib/http/body";
+import { contentTypeRefusal, originRefusal } from "@/lib/http/request-guard";
 import { getCurrentUser, type SessionUser } from "./session";
 
 // The one place every route handler and server action asks "who is this, and may they?".
@@ -43,6 +45,18 @@ export async function requireProjectRole(projectId: string, action: Action): Pro
   if (!role) throw notFound();
   if (!can(role, action)) throw forbidden(action, role);
   return { user, role };
+}
+
+/**
+ * For work tied to no one project (sizing a document that is not saved, in the open
+ * calculator): the caller must hold a role allowing `action` on at least one project.
+ */
+export async function requireActionOnSomeProject(action: Action): Promise<SessionUser> {
+  const user = await requireUser();
+  const roles = rolesThatCan(action);
+  const row = await db()("project_members").where({ user_id: user.id }).whereIn("role", roles).first("project_id");
+  if (!row) throw new AuthError(403, `Only a project ${roleList(roles)} can ${actionWords[action]}, and none of your projects gives you one of those roles.`);
+  return user;
 }
 
 export type SchematicAccess = {
@@ -103,14 +117,26 @@ function withCookies(res: Response, setCookies: string[]): Response {
   return new Response(res.body, { status: res.status, statusText: res.statusText, headers });
 }
 
+export type ApiOptions = {
+  /** Body media types this route takes on POST/PUT/PATCH/DELETE; default ["application/json"]. */
+  accepts?: readonly string[];
+};
+
 /**
- * Route-handler wrapper. Reads the session from the Request itself (so handlers can be
+ * Route-handler wrapper. Before the handler runs, a state-changing request must come from
+ * this app's own pages (Origin) with a body of a type the route accepts (lib/http/request-guard.ts);
+ * every way of reading the body goes through the one bounded reader (lib/http/body.ts: byte
+ * and JSON-depth limits). Reads the session from the Request itself (so handlers can be
  * called directly in tests), copies cookies set during the call onto the Response, and maps
  * AuthError → 401/403/404, ZodError → 400 {error, issues}, UserError → its status, anything
  * else → 500 with a generic message (the real error is logged, never sent).
  */
-export function apiHandler<C>(fn: (req: Request, ctx: C) => Promise<Response>): (req: Request, ctx: C) => Promise<Response> {
+export function apiHandler<C>(fn: (req: Request, ctx: C) => Promise<Response>, options: ApiOptions = {}): (req: Request, ctx: C) => Promise<Response> {
+  const accepts = options.accepts ?? ["application/json"];
   return async (req, ctx) => {
+    const refusal = originRefusal(req) ?? contentTypeRefusal(req, accepts);
+    if (refusal) return Response.json({ error: refusal.error }, { status: refusal.status });
+    boundBodyReaders(req);
     const scope = RequestScope.fromRequest(req);
     try {
       const res = await scope.run(() => fn(req, ctx));

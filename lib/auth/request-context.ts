@@ -1,5 +1,6 @@
 import "server-only";
 import { AsyncLocalStorage } from "node:async_hooks";
+import { clientAddressFrom } from "@/lib/http/client-address";
 
 // Where lib/auth reads the session cookie and client address, and writes cookies.
 //
@@ -37,9 +38,9 @@ export function withRequestCookies<T>(cookie: string | null, fn: () => Promise<T
   return new RequestScope({ cookie, ip }).run(fn);
 }
 
-function clientIp(h: Headers): string | null {
-  return h.get("x-forwarded-for")?.split(",")[0]?.trim() || h.get("x-real-ip") || null;
-}
+// The client address as stamped from the connection (lib/http/client-address.ts); a
+// caller's own X-Forwarded-For is never read here.
+const clientIp = clientAddressFrom;
 
 export async function readCookie(name: string): Promise<string | null> {
   const scope = storage.getStore();

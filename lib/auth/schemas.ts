@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { config } from "@/lib/config";
+import { passwordWeakness } from "./password-strength";
 import { projectRoles } from "./policy";
 
 // Input shapes for accounts and teams. Every message names its field, so a form can show
@@ -38,14 +40,26 @@ export const signInInput = z.object({
   next: z.string().max(500).optional(),
 });
 
-export const signUpInput = z.object({ name: nameField, email: emailField, password: passwordField, firm: firmNameField });
-export const inviteSignUpInput = z.object({ token: tokenField, name: nameField, password: passwordField });
+/** A new password must also not be easy to guess (./password-strength.ts), given what else the form says about the person. */
+function hardToGuess<T extends { password: string }>(context: (v: T) => string[]) {
+  return (v: T, ctx: z.RefinementCtx) => {
+    // zod runs this even when a field failed; a password already refused for its length is not looked at again
+    if (typeof v.password !== "string" || !passwordField.safeParse(v.password).success) return;
+    const why = passwordWeakness(v.password, context(v));
+    if (why) ctx.addIssue({ code: "custom", path: ["password"], message: why });
+  };
+}
+
+export const signUpInput = z.object({ name: nameField, email: emailField, password: passwordField, firm: firmNameField })
+  .superRefine(hardToGuess((v) => [v.name, v.email, v.firm]));
+export const inviteSignUpInput = z.object({ token: tokenField, name: nameField, password: passwordField })
+  .superRefine(hardToGuess((v) => [v.name]));
 export const changePasswordInput = z.object({
   current: z.string({ error: "Current password is required." }).min(1, "Current password is required.").max(200, "Current password must be at most 200 characters."),
   password: passwordField,
-});
+}).superRefine(hardToGuess(() => []));
 export const forgotInput = z.object({ email: emailField });
-export const resetInput = z.object({ token: tokenField, password: passwordField });
+export const resetInput = z.object({ token: tokenField, password: passwordField }).superRefine(hardToGuess(() => []));
 export const inviteInput = z.object({ projectId: z.string().max(64), email: emailField, role: roleField });
 export const roleChangeInput = z.object({ projectId: z.string().max(64), userId: z.string().min(1).max(64), role: roleField });
 
@@ -56,7 +70,19 @@ export function formObject(fd: FormData): Record<string, string> {
   return out;
 }
 
-/** Only same-site paths: "/projects/…" yes, "//evil.example" or "https://…" no. */
+/**
+ * Where to go after signing in or out: only a path on this app. The raw value may hold no
+ * control characters (browsers drop tabs and newlines from URLs, so "/\t/evil.example" is
+ * "//evil.example") and no backslashes (read as "/"); what is left is resolved against the
+ * app's own origin by the URL parser and kept only when it stays there.
+ */
 export function safeNext(next: string | undefined | null, fallback = "/projects"): string {
-  return next && next.startsWith("/") && !next.startsWith("//") && !next.startsWith("/\\") ? next : fallback;
+  if (!next || !next.startsWith("/") || /[\u0000-\u001f\u007f\\]/.test(next)) return fallback;
+  try {
+    const base = new URL(config.appUrl);
+    const url = new URL(next, base);
+    return url.origin === base.origin ? `${url.pathname}${url.search}${url.hash}` : fallback;
+  } catch {
+    return fallback;
+  }
 }

@@ -54,3 +54,30 @@ export function passwordResetMessage(o: { to: string; name: string; link: string
     html: html(intro, { label: "Choose a new password", href: o.link }, after),
   };
 }
+
+export function signUpConfirmMessage(o: { to: string; name: string; firm: string; link: string; expiresAt: Date }): Message {
+  const intro = [`Hello ${o.name},`, `Someone (we hope you) asked to create a Loopwright account for this address, with the firm "${o.firm}". Finish with this link:`];
+  const after = [
+    `The link works once and until ${o.expiresAt.toUTCString()}.`,
+    "If you did not ask for this, ignore this e-mail: no account is made unless the link is opened.",
+  ];
+  return {
+    to: o.to, subject: "Finish creating your Loopwright account",
+    text: [...intro, "", o.link, "", ...after, "", "— Loopwright"].join("\n"),
+    html: html(intro, { label: "Create my account", href: o.link }, after),
+  };
+}
+
+/** Sent instead of a sign-up link when the address already has an account (the form answers the same either way). */
+export function accountExistsMessage(o: { to: string; name: string; signInLink: string; resetLink: string }): Message {
+  const intro = [`Hello ${o.name},`, "Someone (perhaps you) tried to create a new Loopwright account with this address, which already has one. Sign in with it instead:"];
+  const after = [
+    `Forgotten the password? Choose a new one here: ${o.resetLink}`,
+    "If this was not you, you need do nothing: your account has not changed.",
+  ];
+  return {
+    to: o.to, subject: "You already have a Loopwright account",
+    text: [...intro, "", o.signInLink, "", ...after, "", "— Loopwright"].join("\n"),
+    html: html(intro, { label: "Sign in", href: o.signInLink }, after),
+  };
+}

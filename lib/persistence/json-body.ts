@@ -1,44 +1,36 @@
 import "server-only";
+import { UserError } from "@/lib/auth/errors";
+import { decodeUtf8, parseJsonText, readBodyBytes as readBounded } from "@/lib/http/body";
+import { BODY_LIMIT_BYTES } from "@/lib/http/limits.mjs";
 import { Refused } from "./outcome";
 
-export const MAX_BODY_BYTES = 2 * 1024 * 1024;
+// The Refused-returning face of the one bounded reader (lib/http/body.ts), for code written
+// against it. New route code: `await readJson(req)` (or plain `await req.json()`) inside apiHandler.
 
-/**
- * Read a JSON request body, refusing more than `limit` bytes (413) before
- * parsing. The stream is counted as it arrives, so a missing or lying
- * Content-Length cannot make us buffer an unbounded body.
- */
-export async function readJsonBody(req: Request, limit = MAX_BODY_BYTES): Promise<{ ok: true; value: unknown } | Refused> {
-  const body = await readBodyBytes(req, limit);
-  return body.ok ? parseJsonBytes(body.bytes) : body;
+export const MAX_BODY_BYTES = BODY_LIMIT_BYTES;
+
+function asRefused(e: unknown): Refused {
+  if (e instanceof UserError) return new Refused(e.status, e.message, e.status === 400 ? { issues: [{ path: "", message: e.message }] } : {});
+  throw e;
 }
 
-/** The body's bytes, with the same byte limit (413) as readJsonBody. */
-export async function readBodyBytes(req: Request, limit = MAX_BODY_BYTES): Promise<{ ok: true; bytes: Uint8Array } | Refused> {
-  const tooBig = new Refused(413, `The request body is larger than ${limit / (1024 * 1024)} MB.`);
-  if (Number(req.headers.get("content-length") ?? 0) > limit) return tooBig;
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  if (req.body) {
-    const reader = req.body.getReader();
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      total += value.byteLength;
-      if (total > limit) {
-        await reader.cancel();
-        return tooBig;
-      }
-      chunks.push(value);
-    }
+export async function readBodyBytes(req: Request): Promise<{ ok: true; bytes: Uint8Array } | Refused> {
+  try {
+    return { ok: true, bytes: await readBounded(req) };
+  } catch (e) {
+    return asRefused(e);
   }
-  return { ok: true, bytes: chunks.length === 1 ? chunks[0]! : Buffer.concat(chunks) };
 }
 
 export function parseJsonBytes(bytes: Uint8Array): { ok: true; value: unknown } | Refused {
   try {
-    return { ok: true, value: JSON.parse(new TextDecoder().decode(bytes)) };
-  } catch {
-    return new Refused(400, "The request body is not valid JSON.", { issues: [{ path: "", message: "document: not valid JSON" }] });
+    return { ok: true, value: parseJsonText(decodeUtf8(bytes)) };
+  } catch (e) {
+    return asRefused(e);
   }
+}
+
+export async function readJsonBody(req: Request): Promise<{ ok: true; value: unknown } | Refused> {
+  const body = await readBodyBytes(req);
+  return body.ok ? parseJsonBytes(body.bytes) : body;
 }

@@ -2,10 +2,13 @@ import "server-only";
 import { z } from "zod";
 import { audit } from "@/lib/audit";
 import { requireProjectRole, requireUser } from "@/lib/auth/authorize";
-import { UserError } from "@/lib/auth/errors";
-import { can, actions, type Action, type ProjectRole } from "@/lib/auth/policy";
+import { AuthError, UserError } from "@/lib/auth/errors";
+import { can, actions, rolesThatCan, type Action, type ProjectRole } from "@/lib/auth/policy";
 import { requestIp } from "@/lib/auth/request-context";
-import { deleteProjectRow, firmOfUser, getProjectHead, insertProject, projectNameTaken, updateProjectRow } from "@/db/queries/project-admin";
+import {
+  archiveProjectRow, deleteProjectRow, firmOfUser, getProjectHead, insertProject, issuedRevisionCount, mayCreateProjects, projectNameTaken,
+  updateProjectRow,
+} from "@/db/queries/project-admin";
 import { demoProjects, loadDemoDocument } from "@/db/seeds/demo/projects";
 import { parseSchematic } from "@/lib/schematic";
 import { designDefaultsSchema, withDesignDefaults } from "./design-defaults";
@@ -30,18 +33,26 @@ export const projectChangeInput = z.object({
   archived: z.boolean({ error: "archived must be true or false." }).optional(),
 }).refine((c) => Object.values(c).some((v) => v !== undefined), { message: "Say what to change: name, client, site, design or archived." });
 
-async function firmFor(userId: string): Promise<string> {
+const nameTaken = (name: string) => new UserError(409, `Your firm already has a project called "${name}" (names are compared ignoring case). Choose another name.`);
+
+/** The caller's firm, when they may start projects in it: its owners, and owners or designers on one of its projects. */
+async function firmToCreateIn(userId: string): Promise<string> {
   const firm = await firmOfUser(userId);
   if (!firm) throw new UserError(409, "You are not in a firm yet, so there is nowhere to create a project. Ask your firm's owner to invite you.");
+  if (!(await mayCreateProjects(firm, userId, rolesThatCan("schematic.edit")))) {
+    throw new AuthError(403, "Only your firm's owners, and people who are an owner or designer on one of its projects, can create projects. Ask your firm's owner to create it, or to make you a designer.");
+  }
   return firm;
 }
 
+/** A new project in the caller's firm; the caller becomes its owner. */
 export async function createProject(raw: unknown): Promise<{ id: string; name: string }> {
   const user = await requireUser();
   const input = newProjectInput.parse(raw);
-  const firm = await firmFor(user.id);
-  if (await projectNameTaken(firm, input.name)) throw new UserError(409, `Your firm already has a project called "${input.name}". Choose another name.`);
+  const firm = await firmToCreateIn(user.id);
+  if (await projectNameTaken(firm, input.name)) throw nameTaken(input.name);
   const project = await insertProject(firm, user.id, { ...input, design: withDesignDefaults({}, input.design) });
+  if (!project) throw nameTaken(input.name); // created by someone else a moment ago
   await audit({ actorId: user.id, action: "project.created", projectId: project.id, target: project.name, ip: await requestIp() });
   return project;
 }
@@ -59,7 +70,7 @@ export async function updateProject(projectId: string, raw: unknown) {
   const head = await getProjectHead(projectId);
   if (!head) throw new UserError(404, "Project not found.");
   if (change.name && change.name.toLowerCase() !== head.name.toLowerCase() && (await projectNameTaken(head.organisationId, change.name))) {
-    throw new UserError(409, `Your firm already has a project called "${change.name}". Choose another name.`);
+    throw nameTaken(change.name);
   }
   await updateProjectRow(projectId, { ...change, design: change.design ? withDesignDefaults(head.design, change.design) : undefined });
   const action = change.archived === true ? "project.archived" : change.archived === false ? "project.restored" : "project.updated";
@@ -76,20 +87,39 @@ function demoDocument(file: string, name: string) {
 /** A copy of the demo house (Orchard End, both variants as drafts) in the caller's firm, to learn on. */
 export async function copyDemoProject(): Promise<{ id: string; name: string }> {
   const user = await requireUser();
-  const firm = await firmFor(user.id);
+  const firm = await firmToCreateIn(user.id);
   const demo = demoProjects.find((p) => p.name === "Orchard End")!;
   let name = `${demo.name} (demo copy)`;
   for (let n = 2; await projectNameTaken(firm, name); n++) name = `${demo.name} (demo copy ${n})`;
   const project = await insertProject(firm, user.id, { name, client: demo.client, site: demo.site, design: demo.design },
     demo.schematics.map((s) => ({ name: s.name, doc: demoDocument(s.file, `${demo.name} — ${s.name}`) })));
+  if (!project) throw nameTaken(name);
   await audit({ actorId: user.id, action: "project.created", projectId: project.id, target: project.name, detail: { copyOf: "demo" }, ip: await requestIp() });
   return project;
 }
 
-export async function deleteProject(projectId: string): Promise<void> {
+export type DeleteOutcome = { deleted: true } | { archived: true; message: string };
+
+/**
+ * Owner only; audited. A project holding issued revisions cannot be deleted (they are the
+ * record installers built from, and the database refuses to delete them): it is archived
+ * instead, and the answer says why.
+ */
+export async function deleteProject(projectId: string): Promise<DeleteOutcome> {
   const { user } = await requireProjectRole(projectId, "project.delete");
   const head = await getProjectHead(projectId);
+  const issued = await issuedRevisionCount(projectId);
+  const ip = await requestIp();
+  if (issued > 0) {
+    await archiveProjectRow(projectId);
+    await audit({ actorId: user.id, action: "project.archived", projectId, target: head?.name ?? projectId, detail: { issuedRevisions: issued }, ip });
+    return {
+      archived: true,
+      message: `"${head?.name}" has ${issued} issued revision${issued === 1 ? "" : "s"}, which are kept as the record of what was built, so the project was archived instead of deleted.`,
+    };
+  }
   await deleteProjectRow(projectId);
   // the project row is gone, so the audit row keeps its id as the target, not as a reference
-  await audit({ actorId: user.id, action: "project.deleted", target: projectId, detail: { name: head?.name }, ip: await requestIp() });
+  await audit({ actorId: user.id, action: "project.deleted", target: projectId, detail: { name: head?.name }, ip });
+  return { deleted: true };
 }

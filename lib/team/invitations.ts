@@ -94,9 +94,21 @@ async function join(trx: Knex, token: string, userId: string): Promise<{ project
   return { projectId: inv.projectId, role: inv.role, email: inv.email };
 }
 
-/** A signed-in person accepts. Returns the project id. */
+/** Whether an invitation is for this person: its address, compared case-insensitively. */
+export const invitedIs = (invitedEmail: string, user: { email: string }) => invitedEmail.toLowerCase() === user.email.toLowerCase();
+
+export function notYourInvitation(invitedEmail: string, user: { email: string }): UserError {
+  return new UserError(403, `This invitation was sent to ${invitedEmail}, and you are signed in as ${user.email}. `
+    + "Sign out, then sign in (or create an account) with the invited address to join.");
+}
+
+/** A signed-in person accepts, only when the invitation was sent to their own address. Returns the project id. */
 export async function acceptInvitation(user: SessionUser, token: string): Promise<string> {
-  const r = await db().transaction((trx) => join(trx, token, user.id));
+  const r = await db().transaction(async (trx) => {
+    const inv = await lookupInvitation(token, trx, true);
+    if (inv.ok && !invitedIs(inv.email, user)) throw notYourInvitation(inv.email, user);
+    return join(trx, token, user.id);
+  });
   await audit({ actorId: user.id, action: "invitation.accepted", projectId: r.projectId, target: r.email, detail: { role: r.role }, ip: await requestIp() });
   return r.projectId;
 }

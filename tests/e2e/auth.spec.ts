@@ -117,13 +117,15 @@ test("a trainee cannot edit the team's schematic: no edit controls, and the API 
   const read = await page.request.get(`/api/v1/schematics/${schematicId}`);
   expect(read.status()).toBe(200);
   const view = await read.json();
-  const put = await page.request.put(`/api/v1/schematics/${schematicId}`, { data: { lockVersion: view.schematic?.lockVersion ?? 1, doc: view.doc ?? {} } });
+  // page.request is not the page's own fetch: it sends the Origin a browser would add itself
+  const origin = { origin: new URL(page.url()).origin };
+  const put = await page.request.put(`/api/v1/schematics/${schematicId}`, { data: { lockVersion: view.schematic?.lockVersion ?? 1, doc: view.doc ?? {} }, headers: origin });
   expect(put.status()).toBe(403);
   expect((await put.json()).error).toMatch(/Only a project owner or designer can edit the team's schematics; your role on this project is trainee/);
   const after = await page.request.get(`/api/v1/schematics/${schematicId}`);
   expect((await after.json()).schematic?.lockVersion).toBe(view.schematic?.lockVersion); // nothing saved
 
-  const del = await page.request.delete(`/api/v1/projects/${MILLBROOK}`);
+  const del = await page.request.delete(`/api/v1/projects/${MILLBROOK}`, { headers: origin });
   expect(del.status()).toBe(403);
   expect((await del.json()).error).toMatch(/Only a project owner can delete the project; your role on this project is trainee/);
 });

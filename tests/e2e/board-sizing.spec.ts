@@ -19,7 +19,7 @@ test("size the seeded Orchard End schematic, see the numbers, change it and find
   // The engine's own answer for the same document, through the public API.
   const view = await (await page.request.get(`/api/v1/schematics/${schematicId}`)).json();
   const partsBefore = view.doc.parts.length as number;
-  const results = await (await page.request.post("/api/v1/calculate", { data: view.doc })).json();
+  const results = await (await page.request.post("/api/v1/calculate", { data: view.doc, headers: { origin: new URL(page.url()).origin } })).json();
   const heating = results.modes.find((m: { mode: string }) => m.mode === "heating");
   const flows = new Map<string, number>(heating.pipes.filter((p: { flowM3h: number | null }) => (p.flowM3h ?? 0) > 0.01)
     .map((p: { id: string; flowM3h: number }) => [p.id, p.flowM3h]));

@@ -2,7 +2,8 @@ import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db";
 import { pgPool } from "@/lib/auth/pg-pool";
-import { ACCOUNT_LIMIT, ADDRESS_LIMIT, RESET_ACCOUNT_LIMIT, RESET_ADDRESS_LIMIT, recordFailedSignIn } from "@/lib/auth/rate-limit";
+import { ACCOUNT_LIMIT, ADDRESS_LIMIT, RESET_ACCOUNT_LIMIT, RESET_ADDRESS_LIMIT, limiterKey, takeSignInAttempt } from "@/lib/auth/rate-limit";
+import { laterSettled } from "@/lib/later";
 import * as auth from "@/components/auth/actions";
 import * as team from "@/components/team/actions";
 import * as projects from "@/app/api/v1/projects/route";
@@ -10,6 +11,7 @@ import * as projectItem from "@/app/api/v1/projects/[projectId]/route";
 import { callAction, callRoute, cookieFor, cookieFromSetCookies, form } from "./helpers/call";
 import { dropFixtures, makeFixture } from "./helpers/fixture";
 import { linkIn, mailTo } from "./helpers/mail";
+import { signUpAndConfirm } from "./helpers/accounts";
 
 // Accounts end to end through the real server actions and routes, against PostgreSQL and
 // the SMTP catcher: sign up, sign in/out, rate limits, password change and reset,
@@ -31,19 +33,29 @@ async function auditRows(action: string, target?: string) {
 
 beforeAll(() => { expect(process.env.DATABASE_URL ?? "").toMatch(/_test$/); });
 afterAll(async () => {
+  await laterSettled();
   await dropFixtures();
   await db()("users").whereIn("email", made).delete();
+  await db()("sign_up_requests").whereIn("email", made).delete();
   await db()("organisations").where("name", "like", "Test firm %").delete();
   await db().destroy();
   await pgPool().end();
 });
 
 describe("sign up, sign in, sign out", () => {
-  it("a new person signs up with a firm, is signed in, and owns new projects", async () => {
+  it("a new person signs up with a firm: e-mailed link, then signed in, and owns new projects", async () => {
     const addr = email("signup");
-    const out = await callAction(() => auth.signUpAction(null, form({ name: "Ada Flux", email: addr.toUpperCase(), password: "long-enough-pw", firm: `Test firm ${uniq()}` })), null);
+    const asked = await callAction(() => auth.signUpAction(null, form({ name: "Ada Flux", email: addr.toUpperCase(), password: "long-enough-pw", firm: `Test firm ${uniq()}` })), null, ip());
+    expect(asked.status).toBe(200);
+    expect(asked.body.data).toMatch(/Check your e-mail/);
+    expect(asked.setCookies).toEqual([]); // not signed in before the link is opened
+    expect(await db()("users").where({ email: addr }).first()).toBeUndefined();
+    const mail = await mailTo(addr, { subject: "Finish creating your Loopwright account" });
+    const token = linkIn(mail.text, "/sign-up");
+    expect((await db()("sign_up_requests").where({ email: addr }).first()).token_hash).not.toContain(token); // only the hash is stored
+    const out = await callAction(() => auth.confirmSignUpAction(null, form({ token })), null);
     expect(out.status).toBe(303);
-    expect(out.redirect).toBe("/projects");
+    expect(out.redirect).toBe("/projects?welcome=1");
     const setCookie = out.setCookies.find((c) => c.startsWith("lw_session="))!;
     expect(setCookie).toMatch(/HttpOnly/);
     expect(setCookie).toMatch(/SameSite=Lax/);
@@ -54,14 +66,9 @@ describe("sign up, sign in, sign out", () => {
     const role = await db()("project_members").where({ project_id: created.body.project.id }).first();
     expect(role.role).toBe("owner");
     expect((await db()("users").where({ email: addr }).first()).email).toBe(addr); // stored lower-case
-  });
-
-  it("a second sign-up with the same e-mail is a clear 409", async () => {
-    const addr = email("dup");
-    await callAction(() => auth.signUpAction(null, form({ name: "One", email: addr, password: "long-enough-pw", firm: `Test firm ${uniq()}` })), null);
-    const out = await callAction(() => auth.signUpAction(null, form({ name: "Two", email: addr, password: "long-enough-pw", firm: `Test firm ${uniq()}` })), null);
-    expect(out.status).toBe(409);
-    expect(out.body.error).toMatch(/already exists/);
+    const again = await callAction(() => auth.confirmSignUpAction(null, form({ token })), null);
+    expect(again.status).toBe(400);
+    expect(again.body.error).toMatch(/already been used/);
   });
 
   it("signs in with the right password, audits it, and signs out", async () => {
@@ -88,7 +95,7 @@ describe("sign up, sign in, sign out", () => {
     expect(out.body.error).toMatch(/do not match/);
     expect(out.setCookies).toEqual([]);
     expect((await auditRows("auth.sign-in-failed", "owner@fernbank.example")).length).toBeGreaterThan(0);
-    await db()("rate_limits").where("key", "like", "%owner@fernbank.example").delete();
+    await db()("rate_limits").where("key", `signin-account:${limiterKey("owner@fernbank.example")}`).delete();
   });
 
   it("signed-out calls to the API are 401 with a message", async () => {
@@ -107,7 +114,7 @@ describe("sign up, sign in, sign out", () => {
 describe("rate limits on sign-in", () => {
   it("locks an account after repeated failures, with a clear 429, even with the right password", async () => {
     const addr = email("locked");
-    await callAction(() => auth.signUpAction(null, form({ name: "Lock Test", email: addr, password: "right-password-1", firm: `Test firm ${uniq()}` })), null);
+    await signUpAndConfirm({ name: "Lock Test", email: addr, password: "right-password-1", firm: `Test firm ${uniq()}` });
     for (let i = 0; i < ACCOUNT_LIMIT.points; i++) {
       const bad = await callAction(() => auth.signInAction(null, form({ email: addr, password: `wrong-${i}` })), null, ip());
       expect(bad.status).toBe(400);
@@ -115,15 +122,15 @@ describe("rate limits on sign-in", () => {
     const locked = await callAction(() => auth.signInAction(null, form({ email: addr, password: "right-password-1" })), null, ip());
     expect(locked.status).toBe(429);
     expect(locked.body.error).toMatch(/Too many failed sign-ins for this account\. Try again in \d+ minutes?/);
-    const rows = await db()("rate_limits").where("key", "like", `%${addr}`);
-    expect(rows.length).toBe(1); // the counter is in PostgreSQL
+    const rows = await db()("rate_limits").where("key", `signin-account:${limiterKey(addr)}`);
+    expect(rows.length).toBe(1); // the counter is in PostgreSQL, keyed by a hash of the address
   });
 
   it("limits one address trying many accounts", async () => {
     const from = ip();
     // one real failure through the action, the rest straight into the shared counter (fast)
     await callAction(() => auth.signInAction(null, form({ email: email("spray"), password: "x" })), null, from);
-    for (let i = 1; i < ADDRESS_LIMIT.points; i++) await recordFailedSignIn(email("spray"), from);
+    for (let i = 1; i < ADDRESS_LIMIT.points; i++) await takeSignInAttempt(email("spray"), from);
     const out = await callAction(() => auth.signInAction(null, form({ email: "trainee@fernbank.example", password: "copper-loop-trainee" })), null, from);
     expect(out.status).toBe(429);
     expect(out.body.error).toMatch(/from your network/);
@@ -133,8 +140,7 @@ describe("rate limits on sign-in", () => {
 describe("password change and reset", () => {
   it("changes the password: old sessions end, the new password works", async () => {
     const addr = email("change");
-    const up = await callAction(() => auth.signUpAction(null, form({ name: "Cee", email: addr, password: "first-password-1", firm: `Test firm ${uniq()}` })), null);
-    const oldCookie = cookieFromSetCookies(up.setCookies);
+    const oldCookie = await signUpAndConfirm({ name: "Cee", email: addr, password: "first-password-1", firm: `Test firm ${uniq()}` });
     const changed = await callAction(() => auth.changePasswordAction(null, form({ current: "first-password-1", password: "second-password-2" })), oldCookie);
     expect(changed.status).toBe(200);
     expect((await whoAmI(oldCookie)).status).toBe(401);
@@ -152,10 +158,10 @@ describe("password change and reset", () => {
 
   it("resets by e-mail: the link works once, and signs in with the new password", async () => {
     const addr = email("reset");
-    await callAction(() => auth.signUpAction(null, form({ name: "Dee", email: addr, password: "forgotten-pw-1", firm: `Test firm ${uniq()}` })), null);
-    const asked = await callAction(() => auth.forgotPasswordAction(null, form({ email: addr })), null);
+    await signUpAndConfirm({ name: "Dee", email: addr, password: "forgotten-pw-1", firm: `Test firm ${uniq()}` });
+    const asked = await callAction(() => auth.forgotPasswordAction(null, form({ email: addr })), null, ip());
     expect(asked.status).toBe(200);
-    const mail = await mailTo(addr);
+    const mail = await mailTo(addr, { subject: "Reset your Loopwright password" });
     expect(mail.subject).toBe("Reset your Loopwright password");
     expect(mail.html).toContain("Choose a new password");
     const token = linkIn(mail.text, "/reset-password");
@@ -177,15 +183,15 @@ describe("password change and reset", () => {
   });
 
   it("wrong and expired reset tokens are clear 400s", async () => {
-    const wrong = await callAction(() => auth.resetPasswordAction(null, form({ token: "x".repeat(43), password: "whatever-pw-1" })), null);
+    const wrong = await callAction(() => auth.resetPasswordAction(null, form({ token: "x".repeat(43), password: "a-fresh-copper-pipe-1" })), null);
     expect(wrong.status).toBe(400);
     expect(wrong.body.error).toMatch(/not valid/);
     const addr = email("expired");
-    await callAction(() => auth.signUpAction(null, form({ name: "Eve", email: addr, password: "forgotten-pw-1", firm: `Test firm ${uniq()}` })), null);
-    await callAction(() => auth.forgotPasswordAction(null, form({ email: addr })), null);
-    const token = linkIn((await mailTo(addr)).text, "/reset-password");
+    await signUpAndConfirm({ name: "Eve", email: addr, password: "forgotten-pw-1", firm: `Test firm ${uniq()}` });
+    await callAction(() => auth.forgotPasswordAction(null, form({ email: addr })), null, ip());
+    const token = linkIn((await mailTo(addr, { subject: "Reset your Loopwright password" })).text, "/reset-password");
     await db()("password_resets").whereIn("user_id", db()("users").where({ email: addr }).select("id")).update({ expires_at: new Date(Date.now() - 1000) });
-    const expired = await callAction(() => auth.resetPasswordAction(null, form({ token, password: "whatever-pw-1" })), null);
+    const expired = await callAction(() => auth.resetPasswordAction(null, form({ token, password: "a-fresh-copper-pipe-1" })), null);
     expect(expired.status).toBe(400);
     expect(expired.body.error).toMatch(/expired/);
   });
@@ -302,11 +308,12 @@ describe("projects API input and deletion", () => {
 describe("password reset requests are limited", () => {
   it("sends at most a few e-mails per account per hour, without saying so", async () => {
     const addr = email("flood");
-    await callAction(() => auth.signUpAction(null, form({ name: "Flo", email: addr, password: "flood-password-1", firm: `Test firm ${uniq()}` })), null);
+    await signUpAndConfirm({ name: "Flo", email: addr, password: "flood-password-1", firm: `Test firm ${uniq()}` });
     for (let i = 0; i < RESET_ACCOUNT_LIMIT.points + 2; i++) {
       const out = await callAction(() => auth.forgotPasswordAction(null, form({ email: addr })), null, ip());
       expect(out.status).toBe(200);
     }
+    await laterSettled(); // the tokens and e-mails are made after the answer
     const n = await db()("password_resets").whereIn("user_id", db()("users").where({ email: addr }).select("id")).count<{ n: string }[]>("* as n").first();
     expect(Number(n!.n)).toBe(RESET_ACCOUNT_LIMIT.points);
   });

@@ -14,8 +14,10 @@ let cookie = "";
 beforeAll(async () => { cookie = `lw_session=${(await lucia().createSession("demo-designer", {})).id}`; });
 afterAll(async () => { await db()("schematics").where("name", "like", "api-%").del(); });
 
+// as the app's own pages send them: JSON, from the app's origin
+const json = { "content-type": "application/json", origin: "http://test" };
 const post = (body: string, withCookie = true) =>
-  POST(new Request("http://test/api/v1/calculate", { method: "POST", body, headers: withCookie ? { cookie } : {} }), undefined as never);
+  POST(new Request("http://test/api/v1/calculate", { method: "POST", body, headers: withCookie ? { ...json, cookie } : json }), undefined as never);
 
 describe("POST /api/v1/calculate", () => {
   it("answers 200 with results, findings included", async () => {
@@ -51,7 +53,7 @@ describe("/api/v1/schematics/:id", () => {
     expect(got.status).toBe(200);
     expect(await got.json()).toMatchObject({ schematic: { id, lockVersion: 1 }, revisions: [], readOnly: false });
     const put = (lockVersion: number) => PUT(new Request(`http://test/api/v1/schematics/${id}`,
-      { method: "PUT", headers: { cookie }, body: JSON.stringify({ lockVersion, doc: parsed.doc }) }), ctx);
+      { method: "PUT", headers: { ...json, cookie }, body: JSON.stringify({ lockVersion, doc: parsed.doc }) }), ctx);
     expect((await put(1)).status).toBe(200);
     const conflict = await put(1);
     expect(conflict.status).toBe(409);

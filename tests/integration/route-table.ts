@@ -80,7 +80,8 @@ export const rows: Row[] = [
     call: async (_f, cookie) => callRoute((await projectRoute()).GET as never, { path: "/api/v1/projects", cookie }),
   },
   {
-    name: "POST /api/v1/projects", kind: "route", expect: allow(members, 201),
+    // firm owners and designers only (issue 17): the demo owner owns the firm, the designer designs on its projects
+    name: "POST /api/v1/projects", kind: "route", expect: allow(["owner", "designer"], 201),
     call: async (_f, cookie) => callRoute((await projectRoute()).POST as never, {
       method: "POST", path: "/api/v1/projects", cookie, body: { name: `${FIXTURE_PREFIX} new ${randomUUID().slice(0, 8)}`, client: "Test" },
     }),
@@ -159,8 +160,8 @@ export const rows: Row[] = [
   },
   {
     name: "action acceptInvitationAction (someone else's invitation)", kind: "action",
-    // members are already in the project, so joining changes nothing for them; signed out → 401
-    expect: { owner: 200, designer: 200, reviewer: 200, installer: 200, trainee: 200, anon: 401 },
+    // an invitation is accepted only by the account it was sent to (issue 17 item 4); signed out → 401
+    expect: { owner: 403, designer: 403, reviewer: 403, installer: 403, trainee: 403, anon: 401 },
     call: async (f, cookie) => {
       const out = await callAction(async () => (await authActions()).acceptInvitationAction(null, form({ token: f.invitationToken })), cookie);
       return out.status === 303 ? { ...out, status: 200 } : out;
@@ -169,7 +170,8 @@ export const rows: Row[] = [
 
   // ——— schematics (board routes) ———
   {
-    name: "POST /api/v1/calculate", kind: "route", expect: allow(members),
+    // sizing needs a role that may size on some project (issue 17): owner, designer, trainee
+    name: "POST /api/v1/calculate", kind: "route", expect: allow(["owner", "designer", "trainee"]),
     call: async (f, cookie) => callRoute((await calculateRoute()).POST as never, { method: "POST", path: "/api/v1/calculate", cookie, body: f.doc }),
   },
   {
@@ -256,6 +258,12 @@ export const rows: Row[] = [
   {
     name: "action sizeSchematic practice variant", kind: "action", expect: allow(["trainee"]),
     call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ schematicId: f.practiceSchematicId, doc: f.doc }), cookie),
+  },
+
+  {
+    // a document not saved anywhere (the open calculator): the same roles as POST /api/v1/calculate
+    name: "action sizeSchematic without a schematic id", kind: "action", expect: allow(["owner", "designer", "trainee"]),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ doc: f.doc }), cookie),
   },
 
   {

@@ -8,6 +8,7 @@ import { createSchematic } from "@/db/queries/schematics";
 import { parseSchematic, type Schematic } from "@/lib/schematic";
 import * as actions from "@/components/drawing-board/actions";
 import { saveUnitPreference } from "@/components/units/actions";
+import { deleteForTests } from "./helpers/fixture";
 
 // Against the real PostgreSQL of DATABASE_URL (the seeded test database). Each test makes its
 // own schematic in the seeded Orchard End project, so tests never depend on each other's rows.
@@ -28,7 +29,7 @@ beforeAll(async () => {
   }
 });
 afterAll(async () => {
-  await db()("schematics").where("name", "like", "it-%").del();
+  await deleteForTests((trx) => trx("schematics").where("name", "like", "it-%").del()); // some hold issued revisions
   for (const id of cookies.values()) await lucia().invalidateSession(id);
 });
 

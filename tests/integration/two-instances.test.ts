@@ -69,7 +69,7 @@ describe("two app instances, one database", () => {
     expect(page.status).toBe(200);
     expect(await page.text()).toContain("Imogen Pryce");
 
-    expect((await fetch(url(1, "/api/v1/session"), { method: "DELETE", headers: { cookie } })).status).toBe(204);
+    expect((await fetch(url(1, "/api/v1/session"), { method: "DELETE", headers: { cookie, origin: url(1, "") } })).status).toBe(204);
     const onA = await fetch(url(0, "/api/v1/session"), { headers: { cookie } });
     expect(onA.status).toBe(401);
     const signedOutPage = await fetch(url(0, "/projects"), { headers: { cookie }, redirect: "manual" });

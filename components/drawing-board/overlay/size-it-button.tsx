@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { sizeSchematic } from "@/components/drawing-board/actions";
+import { actionErrorMessage } from "@/lib/action-error";
 import { Button } from "@/components/ui/button";
 import { useBoardSession } from "../persistence/session-context";
 import { useBoardStore, useBoard } from "../store";
@@ -27,8 +28,8 @@ export function SizeItButton() {
         store.getState().setResults(r.data, doc);
         setSizing({ engineVersion: r.data.engine, sizedAt: new Date().toISOString(), sizedBy: null, fromRevision: null, recomputed: null });
       } else setError(r.error);
-    } catch {
-      setError("Could not reach the server to size the schematic.");
+    } catch (e) {
+      setError(actionErrorMessage(e, "Could not reach the server to size the schematic."));
     } finally {
       setBusy(false);
     }

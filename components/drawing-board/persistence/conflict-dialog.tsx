@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { saveAsVariant } from "@/components/drawing-board/actions";
+import { actionErrorMessage } from "@/lib/action-error";
 import { Button } from "@/components/ui/button";
 import { useBoardStore } from "../store";
 import { Modal } from "./modal";
@@ -32,7 +33,8 @@ export function ConflictDialog({ open }: { open: boolean }) {
   };
   const variant = async () => {
     setBusy("variant");
-    const r = await saveAsVariant({ schematicId: session.schematicId, doc: store.getState().doc, name: `${session.name} (my changes)` });
+    const r = await saveAsVariant({ schematicId: session.schematicId, doc: store.getState().doc, name: `${session.name} (my changes)` })
+      .catch((err: unknown) => ({ ok: false as const, error: actionErrorMessage(err, "Could not reach the server; the variant was not saved. Try again.") }));
     if (!r.ok) {
       setError(r.error);
       setBusy(null);

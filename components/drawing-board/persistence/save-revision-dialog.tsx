@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { saveRevision } from "@/components/drawing-board/actions";
+import { actionErrorMessage } from "@/lib/action-error";
 import { Button } from "@/components/ui/button";
 import { useBoardStore } from "../store";
 import { Modal } from "./modal";
@@ -21,7 +22,8 @@ export function SaveRevisionDialog({ open, onClose }: { open: boolean; onClose: 
     if (!message.trim()) return setError("Say in a few words what changed.");
     setBusy(true);
     const { doc } = store.getState();
-    const r = await saveRevision({ schematicId: session.schematicId, lockVersion: session.save.lockVersion(), doc, message });
+    const r = await saveRevision({ schematicId: session.schematicId, lockVersion: session.save.lockVersion(), doc, message })
+      .catch((err: unknown) => ({ ok: false as const, error: actionErrorMessage(err, "Could not reach the server; the revision was not saved. Try again.") }));
     setBusy(false);
     if (!r.ok) return setError(r.error);
     session.save.markSaved(r.data.lockVersion);

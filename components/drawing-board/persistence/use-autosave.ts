@@ -2,6 +2,7 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 import { autosaveDraft } from "@/components/drawing-board/actions";
+import { actionErrorMessage } from "@/lib/action-error";
 import { useBoardStore } from "../store";
 
 export type SaveStatus = "saved" | "unsaved" | "saving" | "conflict" | "error";
@@ -47,8 +48,8 @@ export function useAutosave(schematicId: string, initialLockVersion: number, ena
         setError(r.error);
         setStatus(halted.current ? "conflict" : "error");
       }
-    } catch {
-      setError("Could not reach the server; your changes are kept here and will be saved when it answers.");
+    } catch (e) {
+      setError(actionErrorMessage(e, "Could not reach the server; your changes are kept here and will be saved when it answers."));
       setStatus("error");
     } finally {
       inFlight.current = false;

@@ -1,5 +1,6 @@
 import { lucia } from "@/lib/auth/lucia";
 import { RequestScope } from "@/lib/auth/request-context";
+import { CLIENT_ADDRESS_HEADER } from "@/lib/http/client-address";
 
 // Calling app code the way Next would, without Next:
 // - route handlers: import the route module and call GET/POST/… with a Request that
@@ -25,12 +26,23 @@ export type Outcome = { status: number; body: any; setCookies: string[]; redirec
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
-export async function callRoute(handler: Handler | undefined, o: { method?: string; path: string; cookie: string | null; body?: unknown; params?: Record<string, string>; ip?: string; rawBody?: string; contentType?: string }): Promise<Outcome> {
+export const TEST_ORIGIN = "http://test.local";
+
+/**
+ * Calls a route handler as a same-origin browser would: Origin of the app (unless `origin`
+ * says otherwise; null for none), a JSON body type (unless `contentType`), and the client
+ * address the server would have stamped from the connection (lib/http/client-address.ts).
+ */
+export async function callRoute(handler: Handler | undefined, o: { method?: string; path: string; cookie: string | null; body?: unknown; params?: Record<string, string>;
+  ip?: string; rawBody?: string | Uint8Array; origin?: string | null; contentType?: string | null; headers?: Record<string, string> }): Promise<Outcome> {
   if (!handler) throw new Error(`No ${o.method ?? "GET"} handler exported for ${o.path}`);
-  const headers = new Headers({ "content-type": o.contentType ?? "application/json", "x-forwarded-for": o.ip ?? "10.9.9.9" });
+  const headers = new Headers({ [CLIENT_ADDRESS_HEADER]: o.ip ?? "10.9.9.9", ...o.headers });
+  if (o.contentType !== null) headers.set("content-type", o.contentType ?? "application/json");
+  const origin = o.origin === undefined ? TEST_ORIGIN : o.origin;
+  if (origin !== null && (o.method ?? "GET") !== "GET") headers.set("origin", origin);
   if (o.cookie) headers.set("cookie", o.cookie);
   const body = o.rawBody ?? (o.body === undefined ? undefined : JSON.stringify(o.body));
-  const res = await handler(new Request(`http://test.local${o.path}`, { method: o.method ?? "GET", headers, body }), { params: Promise.resolve(o.params ?? {}) });
+  const res = await handler(new Request(`${TEST_ORIGIN}${o.path}`, { method: o.method ?? "GET", headers, body: body as BodyInit | undefined }), { params: Promise.resolve(o.params ?? {}) });
   const text = await res.text();
   let parsed: unknown = null;
   try { parsed = text ? JSON.parse(text) : null; } catch { parsed = text; }

@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
+import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { demoFirm } from "@/db/seeds/demo/people";
@@ -60,7 +61,19 @@ export async function snapshot(f: Fixture): Promise<string> {
 }
 
 export async function dropFixtures(): Promise<void> {
-  await db()("projects").where("name", "like", `${FIXTURE_PREFIX}%`).delete();
+  await deleteForTests((trx) => trx("projects").where("name", "like", `${FIXTURE_PREFIX}%`).delete());
 }
 
-export { hashToken };
+/**
+ * Test clean-up only: runs `del` (deleting projects or schematics) even when issued revisions
+ * would go with them, which the database otherwise refuses (migration 20261203000001). The
+ * trigger is switched off inside this one transaction (DDL is transactional in PostgreSQL;
+ * the table owner may do it), so foreign-key cascades still run and no other session ever sees it off.
+ */
+export async function deleteForTests(del: (trx: Knex.Transaction) => Promise<unknown>): Promise<void> {
+  await db().transaction(async (trx) => {
+    await trx.raw("alter table schematic_revisions disable trigger lw_revision_immutable");
+    await del(trx);
+    await trx.raw("alter table schematic_revisions enable trigger lw_revision_immutable");
+  });
+}

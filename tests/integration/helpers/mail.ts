@@ -3,13 +3,15 @@ const base = () => process.env.MAIL_WEB_URL ?? "http://127.0.0.1:1081";
 
 export type Caught = { id: string; subject: string; text: string; html: string; to: { address: string }[] };
 
-export async function mailTo(address: string, timeoutMs = 5000): Promise<Caught> {
-  const until = Date.now() + timeoutMs;
+/** The newest message to the address (with that subject, when given), waiting up to timeoutMs for it. */
+export async function mailTo(address: string, o: { subject?: string | RegExp; timeoutMs?: number } = {}): Promise<Caught> {
+  const until = Date.now() + (o.timeoutMs ?? 5000);
+  const subjectOk = (s: string) => o.subject === undefined || (typeof o.subject === "string" ? s === o.subject : o.subject.test(s));
   for (;;) {
     const all = (await (await fetch(`${base()}/api/email`)).json()) as Caught[];
-    const mine = all.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+    const mine = all.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()) && subjectOk(m.subject));
     if (mine.length) return mine[mine.length - 1]!;
-    if (Date.now() > until) throw new Error(`no e-mail to ${address} caught at ${base()}`);
+    if (Date.now() > until) throw new Error(`no e-mail to ${address}${o.subject ? ` with subject ${o.subject}` : ""} caught at ${base()}`);
     await new Promise((r) => setTimeout(r, 150));
   }
 }

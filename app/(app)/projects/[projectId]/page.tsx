@@ -22,7 +22,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const access = await pageAccess(() => requireProjectRole(projectId, "project.read"));
   if (!access.ok) return <NotAllowed message={access.message} />;
   const { user, role } = access.value;
-  const [project, schematics, defaults] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id), getProjectDesignConditions(projectId)]);
+  const [project, schematics, defaults] = await Promise.all([getProjectHead(projectId), listProjectSchematics(projectId, user.id, role), getProjectDesignConditions(projectId)]);
   if (!project) notFound();
   // Variants are listed under the schematic they were made from; orphans stand on their own.
   const ids = new Set(schematics.map((s) => s.id));
@@ -57,8 +57,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         )}
       </div>
       {project.archivedAt && (
-        <p className="mt-3 rounded-md bg-paper-dark px-3 py-2 text-sm text-ink-soft" data-testid="archived-banner">
-          This project is archived: it is kept as it is and listed under Archived on the projects page.
+        <p role="status" className="mt-3 rounded-md border border-warn/30 bg-warn/5 px-3 py-2 text-sm text-ink-soft" data-testid="archived-banner">
+          Archived on {project.archivedAt.slice(0, 10)}: it is kept as it is and listed under Archived on the projects page.
+          A project with issued revisions is archived rather than deleted: they are the record of what was built.
         </p>
       )}
 

@@ -4,7 +4,7 @@ import { AuthCard } from "@/components/auth/auth-card";
 import { AcceptInvitationForm, InviteSignUpForm } from "@/components/auth/forms";
 import { SignOutButton } from "@/components/auth/sign-out-button";
 import { getCurrentUser } from "@/lib/auth/session";
-import { lookupInvitation } from "@/lib/team/invitations";
+import { invitedIs, lookupInvitation, notYourInvitation } from "@/lib/team/invitations";
 
 export const metadata: Metadata = { title: "Invitation" };
 export const dynamic = "force-dynamic";
@@ -27,13 +27,18 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     </>
   );
   const next = `/invite/${token}`;
-  if (user) {
-    const other = user.email.toLowerCase() !== inv.email.toLowerCase();
+  if (user && !invitedIs(inv.email, user)) {
     return (
       <AuthCard title={`Join ${inv.projectName}`} lead={lead}>
-        {other && <p className="mb-4 rounded-md border border-warn/30 bg-warn/5 px-3 py-2 text-sm text-ink-soft">You are signed in as {user.email}. Joining adds that account to the project.</p>}
+        <p role="alert" className="mb-4 rounded-md border border-warn/30 bg-warn/5 px-3 py-2 text-sm text-ink-soft">{notYourInvitation(inv.email, user).message}</p>
+        <div className="text-center text-sm"><SignOutButton label="Sign out and use the invited address" next={next} /></div>
+      </AuthCard>
+    );
+  }
+  if (user) {
+    return (
+      <AuthCard title={`Join ${inv.projectName}`} lead={lead}>
         <AcceptInvitationForm token={token} label={`Join as ${inv.role}`} />
-        {other && <div className="mt-3 text-center text-sm"><SignOutButton label="Sign out and use another account" next={next} /></div>}
       </AuthCard>
     );
   }

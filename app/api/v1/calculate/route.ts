@@ -1,5 +1,6 @@
-import { apiHandler, requireUser } from "@/lib/auth/authorize";
-import { parseJsonBytes, readBodyBytes } from "@/lib/persistence/json-body";
+import { apiHandler, requireActionOnSomeProject } from "@/lib/auth/authorize";
+import { readBodyBytes } from "@/lib/http/body";
+import { parseJsonBytes } from "@/lib/persistence/json-body";
 import { refusedResponse } from "@/lib/persistence/outcome";
 import { Answer, sizeToAnswer } from "@/lib/persistence/size";
 
@@ -7,12 +8,12 @@ export const dynamic = "force-dynamic";
 
 // POST a schematic, get the results: 200 even with findings, 400 with JSON-path issues,
 // 413 above 2 MB. An engine fault is answered 422 and logged: the contract promises no 500s.
+// Sizing is for people whose role on some project includes it (owner, designer, trainee).
 export const POST = apiHandler(async (req: Request) => {
-  await requireUser();
-  const body = await readBodyBytes(req);
-  if (!body.ok) return refusedResponse(body);
+  await requireActionOnSomeProject("schematic.size");
+  const bytes = await readBodyBytes(req);
   try {
-    const r = sizeToAnswer(body.bytes, () => parseJsonBytes(body.bytes));
+    const r = sizeToAnswer(bytes, () => parseJsonBytes(bytes));
     // Compression (gzip for clients that ask) is Next's own, applied to every response.
     return r instanceof Answer ? new Response(r.json, { headers: { "content-type": "application/json" } }) : refusedResponse(r);
   } catch (err) {

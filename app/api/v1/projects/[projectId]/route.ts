@@ -21,8 +21,8 @@ export const PATCH = apiHandler(async (req: Request, { params }: Ctx) => {
   return NextResponse.json(await updateProject(projectId, body.value));
 });
 
-/** Owner only; audited. */
+/** Owner only; audited. 204 when deleted; 200 {archived, message} when issued revisions keep it. */
 export const DELETE = apiHandler(async (_req: Request, { params }: Ctx) => {
-  await deleteProject((await params).projectId);
-  return new NextResponse(null, { status: 204 });
+  const r = await deleteProject((await params).projectId);
+  return "archived" in r ? NextResponse.json(r) : new NextResponse(null, { status: 204 });
 });

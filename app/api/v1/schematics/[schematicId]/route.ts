@@ -2,7 +2,7 @@ import { z } from "zod";
 import { apiHandler, requireSchematicAccess } from "@/lib/auth/authorize";
 import { saveDraft } from "@/db/queries/schematics";
 import { parseSchematic } from "@/lib/schematic";
-import { readJsonBody } from "@/lib/persistence/json-body";
+import { readJson } from "@/lib/http/body";
 import { invalidDocument, refusal, refusedResponse } from "@/lib/persistence/outcome";
 import { schematicView } from "@/lib/persistence/schematic-view";
 
@@ -21,9 +21,7 @@ export const GET = apiHandler(async (_req: Request, { params }: Ctx) => {
 export const PUT = apiHandler(async (req: Request, { params }: Ctx) => {
   const { schematicId } = await params;
   const { user } = await requireSchematicAccess(schematicId, "edit");
-  const body = await readJsonBody(req);
-  if (!body.ok) return refusedResponse(body);
-  const envelope = z.object({ lockVersion: z.number().int().min(1), doc: z.unknown() }).parse(body.value);
+  const envelope = z.object({ lockVersion: z.number().int().min(1), doc: z.unknown() }).parse(await readJson(req));
   const parsed = parseSchematic(envelope.doc);
   if (!parsed.ok) return refusedResponse(invalidDocument(parsed.issues));
   const r = await saveDraft({ schematicId, lockVersion: envelope.lockVersion, doc: parsed.doc, userId: user.id });
