@@ -41,6 +41,7 @@ const projectRoute = () => import("@/app/api/v1/projects/route");
 const projectItemRoute = () => import("@/app/api/v1/projects/[projectId]/route");
 const schematicRoute = () => import("@/app/api/v1/schematics/[schematicId]/route");
 const calculateRoute = () => import("@/app/api/v1/calculate/route");
+const optimiseRoute = () => import("@/app/api/v1/optimise/route");
 const teamActions = () => import("@/components/team/actions");
 const authActions = () => import("@/components/auth/actions");
 const projectActions = () => import("@/components/projects/actions");
@@ -119,6 +120,11 @@ export const rows: Row[] = [
   {
     name: "POST /api/v1/calculate", kind: "route", expect: allow(members),
     call: async (f, cookie) => callRoute((await calculateRoute()).POST as never, { method: "POST", path: "/api/v1/calculate", cookie, body: f.doc }),
+  },
+  {
+    // like calculate: any signed-in member may optimise a document they send (nothing is stored)
+    name: "POST /api/v1/optimise", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await optimiseRoute()).POST as never, { method: "POST", path: "/api/v1/optimise", cookie, body: { doc: f.doc, options: {} } }),
   },
   {
     name: "GET /api/v1/schematics/[id] team, draft only", kind: "route",

@@ -2,6 +2,7 @@
 
 import { UnitsPicker } from "@/components/units/units-picker";
 import { SizeItButton } from "../overlay/size-it-button";
+import { SizeProposalButton } from "../proposal/size-proposal-button";
 import { RevisionStatusBar } from "./revision-status-bar";
 
 /** board-2's part of the board's top bar (DrawingBoard toolbarSlot). */
@@ -11,6 +12,7 @@ export function BoardToolbar() {
       <RevisionStatusBar />
       <UnitsPicker />
       <SizeItButton />
+      <SizeProposalButton />
     </>
   );
 }
