@@ -25,9 +25,11 @@ export interface TreeCase {
 
 export const TREE_SIZES = ["15", "22", "28"] as const;
 
-export function randomTree(r: () => number, maxPipes = 12): TreeCase {
-  const L = 1 + Math.floor(r() * 3);
-  const pumpPart = r() < 0.3;
+export function randomTree(r: () => number, maxPipes = 12, shape: { radiators?: number; direct?: boolean } = {}): TreeCase {
+  // radiators: 1–3, as many as 2·(2L − 1) pipes (flow and return trees) leave room for
+  const most = Math.max(1, Math.min(3, Math.floor((maxPipes / 2 + 1) / 2)));
+  const L = Math.min(most, shape.radiators ?? 1 + Math.floor(r() * most));
+  const pumpPart = 2 * (2 * L - 1) < maxPipes && r() < 0.3;
   const parts: Record<string, unknown>[] = [];
   const pipes: TreeCase["doc"]["pipes"] = [];
   let budget = maxPipes - 2 * (2 * L - 1) - (pumpPart ? 1 : 0);
@@ -73,7 +75,7 @@ export function randomTree(r: () => number, maxPipes = 12): TreeCase {
     flow(a, `${t}.b`);
     flow(b, `${t}.c`);
   };
-  const direct = r() < 0.5;
+  const direct = shape.direct ?? r() < 0.5;
   const back = (leaves: number[], to: string) => {
     if (leaves.length === 1) return add(leaves, run(`rad${leaves[0]}.return`, to));
     const t = `tr${++tee}`;
@@ -97,8 +99,9 @@ export function randomTree(r: () => number, maxPipes = 12): TreeCase {
     root = "pump.out";
   }
   flow(leaves, root);
-  const order = [...leaves];
-  if (!direct) {
+  // not direct: the return picks the radiators up in reverse (a reverse return), or in a random order
+  const order = direct ? [...leaves] : [...leaves].reverse();
+  if (!direct && r() < 0.5) {
     for (let i = order.length - 1; i > 0; i--) {
       const j = Math.floor(r() * (i + 1));
       [order[i], order[j]] = [order[j]!, order[i]!];
