@@ -85,7 +85,7 @@ describe("npm run optimise", () => {
     expect(out.headMarginKpa).toBe(5);
     expect(typeof out.after.lifeCost).toBe("number");
     expect(Object.keys(out.sizes)).toHaveLength(hall.pipes.length);
-  });
+  }, 90_000);
 
   it("exits 2 naming the field for bad options, bad JSON and a missing file", () => {
     const bad = run(write("hall2.json", hall), write("bad-options.json", { headMarginKpa: -3 }));
@@ -93,5 +93,5 @@ describe("npm run optimise", () => {
     expect(bad.stderr).toContain("options.headMarginKpa");
     expect(run(write("broken.json", "{ nope")).stderr).toMatch(/not valid JSON/);
     expect(run(path.join(dir, "missing.json")).status).toBe(2);
-  });
+  }, 120_000);
 });

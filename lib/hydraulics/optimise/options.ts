@@ -4,19 +4,26 @@
  * against the catalogue so a misspelt size is named, not silently unused.
  */
 import { z } from "zod";
-import { pipeCatalogue, pipeMaterials, type PipeMaterial } from "@/lib/hydraulics/pipes/catalogue";
+import { pipeCatalogue, type PipeMaterial } from "@/lib/hydraulics/pipes/catalogue";
 import { LIFE_COST_ASSUMPTIONS } from "./life-cost";
 
 /** Head kept in hand on top of the index circuit, kPa, unless the request names one. */
 export const DEFAULT_HEAD_MARGIN_KPA = 0;
 
 const price = z.number().finite().min(0).max(1e6);
-const materialPrices = z.record(z.string().max(20), price);
+/** One material's prices per metre, by catalogue size (a size the catalogue lacks is named). */
+const pricesOf = (material: PipeMaterial) =>
+  z.record(z.string().max(20), price).superRefine((table, ctx) => {
+    const sizes = pipeCatalogue[material].map((r) => r.size);
+    for (const size of Object.keys(table)) {
+      if (!sizes.includes(size)) ctx.addIssue({ code: "custom", path: [size], message: `no ${material} size "${size}" in the catalogue (${sizes.join(", ")})` });
+    }
+  });
 
 export const optimiseOptionsSchema = z
   .strictObject({
     objective: z.enum(["pipe-cost", "life-cost"]).default("pipe-cost"),
-    prices: z.partialRecord(z.enum(pipeMaterials as [PipeMaterial, ...PipeMaterial[]]), materialPrices).optional(),
+    prices: z.strictObject({ copper: pricesOf("copper"), steel: pricesOf("steel"), pex: pricesOf("pex"), multilayer: pricesOf("multilayer") }).partial().optional(),
     headMarginKpa: z.number().finite().min(0).max(10_000).default(DEFAULT_HEAD_MARGIN_KPA),
     locked: z.array(z.string().min(1).max(100)).max(200_000).default([]),
     lifeCost: z
@@ -27,15 +34,6 @@ export const optimiseOptionsSchema = z
         hoursPerYear: z.number().finite().min(0).max(8784).default(LIFE_COST_ASSUMPTIONS.hoursPerYear),
       })
       .prefault({}),
-  })
-  .superRefine((o, ctx) => {
-    for (const [material, sizes] of Object.entries(o.prices ?? {}) as [PipeMaterial, Record<string, number>][]) {
-      for (const size of Object.keys(sizes)) {
-        if (!pipeCatalogue[material].some((r) => r.size === size)) {
-          ctx.addIssue({ code: "custom", path: ["prices", material, size], message: `no ${material} size "${size}" in the catalogue (${pipeCatalogue[material].map((r) => r.size).join(", ")})` });
-        }
-      }
-    }
   });
 
 export type OptimiseOptions = z.output<typeof optimiseOptionsSchema>;
