@@ -37,13 +37,13 @@ test("find the cheapest sizes, apply them in one undoable step, see them in the 
   for (const p of applied!.draft.pipes) expect(p.size).toBe(answer.sizes[p.id]);
 
   // one undo takes every change back
-  await page.getByRole("button", { name: "Undo" }).click();
+  await page.getByRole("button", { name: "Undo", exact: true }).click();
   await waitSaved(page);
   const [undone] = await sql<{ draft: { pipes: { id: string; size: string }[] } }>("select draft from schematics where id = $1", [id]);
   expect(undone!.draft.pipes.map((p) => p.size)).toEqual(before!.draft.pipes.map((p) => p.size));
 
   // the report shows the same section
-  await page.getByRole("button", { name: "Close" }).click();
+  await page.getByRole("button", { name: "Close", exact: true }).click();
   await sizeIt(page);
   await page.getByRole("tab", { name: "Sizing report" }).click();
   const section = page.getByRole("heading", { name: "Cheapest sizes for the whole network" });

@@ -45,9 +45,9 @@ export function ProposalResult() {
           <span className="text-xs text-ink-soft">{result.exact ? "Proven cheapest for these limits." : result.gap !== null ? `Within ${(result.gap * 100).toFixed(1)} % of the lower bound${result.looped ? " (at the proposal's flows)" : ""}.` : "Best found; no bound."}</span>
         </p>
       )}
-      <table className="w-full text-left">
+      <table className="w-full text-left text-xs">
         <thead className="text-xs text-ink-soft"><tr><th className="font-normal" /><th className="font-normal">Drawn</th><th className="font-normal">Proposed</th></tr></thead>
-        <tbody className="num">
+        <tbody className="num [&_td]:whitespace-nowrap">
           <tr><th className="font-normal text-ink-soft">Pipe cost</th><td>{money(result.before.cost)}</td>
             <td className={dCost < 0 ? "text-ok" : ""}>{money(result.after.cost)}{dCost !== 0 && <span className="ml-1 text-xs">({dCost > 0 ? "+" : ""}{money(dCost)})</span>}</td></tr>
           {result.objective === "life-cost" && (
@@ -64,7 +64,7 @@ export function ProposalResult() {
       </table>
       {result.changes.length > 0 && (
         <div className="max-h-56 overflow-auto rounded border border-ink/10">
-          <table className="w-full text-left" data-testid="proposal-changes">
+          <table className="w-full text-left text-xs" data-testid="proposal-changes">
             <thead className="sticky top-0 bg-white text-xs text-ink-soft"><tr><th className="px-2 font-normal">Pipe</th><th className="font-normal">Length</th><th className="font-normal">Size</th><th className="px-2 text-right font-normal">Keep</th></tr></thead>
             <tbody>
               {result.changes.map((c) => (

@@ -9,7 +9,7 @@ import { components } from "@/lib/hydraulics/network/model";
 import { createContext, type EngineContext } from "@/lib/hydraulics/sizing/context";
 import { isCut } from "@/lib/hydraulics/sizing/laws";
 import { runMode, type ModeRun } from "@/lib/hydraulics/sizing/mode";
-import { PIPE_NO_FLOW_M3H } from "@/lib/hydraulics/sizing/pipe-results";
+import { NO_FLOW_M3H } from "@/lib/hydraulics/network/behaviour";
 import type { Schematic } from "@/lib/schematic/schema";
 
 export interface PumpDutyView {
@@ -26,7 +26,10 @@ export interface EngineView {
   /** input/fluid errors that stop any sizing (the engine's own findings) */
   errors: Findings["list"];
   pumps: PumpDutyView[];
-  /** per doc pipe: flow magnitude per run (0 below the engine's no-flow threshold) */
+  /**
+   * per doc pipe: flow magnitude per run, 0 below the engine's reporting threshold NO_FLOW_M3H
+   * (a shut link leaks ~1e-8 m³/h at 100 kPa: the dp bypass's legs carry nothing in design)
+   */
   flowM3h: Float64Array[];
   /** true when some design network has a loop: flows then follow the sizes */
   looped: boolean;
@@ -46,7 +49,7 @@ export function engineView(doc: Schematic): EngineView {
     const k = ctx.model.linkOfPipe.get(pipe.id)!;
     return Float64Array.from(runs, (r) => {
       const q = Math.abs(r.solution.q[k]!);
-      return q < PIPE_NO_FLOW_M3H || !Number.isFinite(q) ? 0 : q;
+      return q < NO_FLOW_M3H || !Number.isFinite(q) ? 0 : q;
     });
   });
   return { ctx, runs, errors, pumps, flowM3h, looped: runs.some((r) => hasLoop(ctx, r)) };

@@ -53,6 +53,12 @@ describe("the demo hall (two pumps, buffer, hot-water and heating modes)", () =>
     for (const id of ["acc-sv", "acc-ev", "byp-f", "byp-r"]) expect(r.sizes[id]).toBe(hall.pipes.find((p: { id: string }) => p.id === id).size);
     expect(r.findings.find((f) => f.code === "optimise.kept-no-flow")?.refs).toEqual(expect.arrayContaining(["acc-sv", "byp-f"]));
   });
+  it("keeps the dp bypass's legs even where the shut valve leaks solver round-off (Orchard End)", () => {
+    const orchard = seed("orchard-end-bypass-only.json");
+    const o = run(orchard);
+    expect(o.feasible).toBe(true);
+    for (const id of ["byp-f", "byp-r", "acc-ev", "acc-sv"]) expect(o.sizes[id]).toBe(orchard.pipes.find((p: { id: string }) => p.id === id).size);
+  });
   it("keeps locked pipes and keeps a head margin", () => {
     const locked = ["sec-f5", "sec-f6", "sec-r6"];
     const m = run(hall, { locked, headMarginKpa: 8 });
