@@ -47,7 +47,7 @@ export function ProposalResult() {
       )}
       <table className="w-full text-left text-xs">
         <thead className="text-xs text-ink-soft"><tr><th className="font-normal" /><th className="font-normal">Drawn</th><th className="font-normal">Proposed</th></tr></thead>
-        <tbody className="num [&_td]:whitespace-nowrap">
+        <tbody className="num [&_td]:whitespace-nowrap [&_td]:pr-2">
           <tr><th className="font-normal text-ink-soft">Pipe cost</th><td>{money(result.before.cost)}</td>
             <td className={dCost < 0 ? "text-ok" : ""}>{money(result.after.cost)}{dCost !== 0 && <span className="ml-1 text-xs">({dCost > 0 ? "+" : ""}{money(dCost)})</span>}</td></tr>
           {result.objective === "life-cost" && (
