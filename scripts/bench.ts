@@ -12,9 +12,14 @@
  * (c) the first-draft generator (scripts/bench-draft.ts).
  *
  * Targets: 2,000 pipes < 100 ms, 20,000 pipes < 1 s; API ≥ 200 req/s, p99 < 50 ms.
+ * Then (scripts/bench/): one scenario solve beside EPANET 2.2 open + solve on the same
+ * buildings and looped grids of 1,000 and 10,000 pipes (≤ 0.5 ×), with fill and work of the
+ * solver's order against nested dissection; calculate() of 2,000 pipes against JSON.parse +
+ * JSON.stringify (< 3 ×); optimising the demo hall (< 1 s).
  * Env: BENCH_URL (default http://localhost:3000), BENCH_COOKIE (sent as Cookie),
  * BENCH_SIZES (e.g. "500,2000"), BENCH_SECONDS (API duration, default 10),
- * BENCH_GC_EACH=1 (force a full gc() before every timed run, the old timing).
+ * BENCH_GC_EACH=1 (force a full gc() before every timed run, the old timing),
+ * BENCH_EPANET_SIZES (default "1000,10000").
  */
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
@@ -25,6 +30,8 @@ import { runInNewContext } from "node:vm";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { generateBuildingWithPipes } from "@/lib/schematic/generate-building";
 import { benchDraft } from "./bench-draft";
+import { benchCalcVsJson, benchOptimiseHall } from "./bench/calc-vs-json";
+import { benchSolverVsEpanet } from "./bench/solver-vs-epanet";
 
 // A real gc() makes the heap figures comparable between sizes (no --expose-gc flag needed).
 setFlagsFromString("--expose-gc");
@@ -202,8 +209,12 @@ async function benchApi() {
 async function main() {
   const engineOk = benchEngine();
   const draftOk = benchDraft();
+  const epanetSizes = (process.env.BENCH_EPANET_SIZES ?? "1000,10000").split(",").map(Number).filter((n) => n > 0);
+  const solverOk = await benchSolverVsEpanet(epanetSizes);
+  const jsonOk = benchCalcVsJson(2000);
+  const optimiseOk = benchOptimiseHall();
   const api = await benchApi();
-  const ok = engineOk && draftOk && api !== "fail";
+  const ok = engineOk && draftOk && solverOk && jsonOk && optimiseOk && api !== "fail";
   console.log(`\n${ok ? "All measured targets met" : "Some targets missed (see FAIL above)"}${api === "skipped" ? " (API not measured)." : "."}`);
 }
 

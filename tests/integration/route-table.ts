@@ -52,6 +52,7 @@ const draftsRoute = () => import("@/app/api/v1/projects/[projectId]/drafts/route
 const emitterListRoute = () => import("@/app/api/v1/projects/[projectId]/emitter-list/route");
 const demoFile = (f: string) => readFileSync(path.join(process.cwd(), "db/seeds/data", f), "utf8");
 const oneRoom = { name: "Matrix room", roomTemperatureC: 20, heatLossW: 800, emitter: { kind: "radiator", outputAtDt50W: 2400, exponentN: 1.3 } };
+const optimiseRoute = () => import("@/app/api/v1/optimise/route");
 const teamActions = () => import("@/components/team/actions");
 const authActions = () => import("@/components/auth/actions");
 const projectActions = () => import("@/components/projects/actions");
@@ -173,6 +174,11 @@ export const rows: Row[] = [
     // sizing needs a role that may size on some project (issue 17): owner, designer, trainee
     name: "POST /api/v1/calculate", kind: "route", expect: allow(["owner", "designer", "trainee"]),
     call: async (f, cookie) => callRoute((await calculateRoute()).POST as never, { method: "POST", path: "/api/v1/calculate", cookie, body: f.doc }),
+  },
+  {
+    // like calculate: a role that may size on some project may optimise a document it sends (nothing is stored)
+    name: "POST /api/v1/optimise", kind: "route", expect: allow(["owner", "designer", "trainee"]),
+    call: async (f, cookie) => callRoute((await optimiseRoute()).POST as never, { method: "POST", path: "/api/v1/optimise", cookie, body: { doc: f.doc, options: {} } }),
   },
   {
     name: "GET /api/v1/schematics/[id] team, draft only", kind: "route",

@@ -4,6 +4,7 @@
  */
 import { addPart } from "./add-part";
 import { applyDoc } from "./apply-doc";
+import { applySizeProposal } from "./apply-size-proposal";
 import { connectPipe } from "./connect-pipe";
 import { copy } from "./copy";
 import { deleteSelection } from "./delete-selection";
@@ -42,6 +43,7 @@ export const commands = {
   redo,
   "select-all": selectAll,
   "apply-doc": applyDoc,
+  "apply-size-proposal": applySizeProposal,
 } as const;
 
 export type CommandId = keyof typeof commands;

@@ -3,6 +3,7 @@
 import { UnitsPicker } from "@/components/units/units-picker";
 import { SizeItButton } from "../overlay/size-it-button";
 import { ExportMenu } from "./export-menu";
+import { SizeProposalButton } from "../proposal/size-proposal-button";
 import { RevisionStatusBar } from "./revision-status-bar";
 
 /** board-2's part of the board's top bar (DrawingBoard toolbarSlot). */
@@ -13,6 +14,7 @@ export function BoardToolbar() {
       <UnitsPicker />
       <ExportMenu />
       <SizeItButton />
+      <SizeProposalButton />
     </>
   );
 }

@@ -10,6 +10,7 @@ import { EmittersTable } from "./emitters-table";
 import { PipeSchedule } from "./pipe-schedule";
 import { PlantSummary } from "./plant-summary";
 import { PumpDuty } from "./pump-duty";
+import { SizeProposal } from "../proposal/size-proposal";
 import { WorkingDialog } from "./working-dialog";
 import type { Working } from "./working";
 import { AssumptionsNote } from "./assumptions-note";
@@ -47,6 +48,7 @@ export function SizingReport() {
         <PipeSchedule doc={doc} results={results} pipes={pipesInView(results, view)} mode={mode} prefs={prefs} onShow={showWorking} />
       </Section>
       {mode && <Section title="Circuits"><CircuitsTable doc={doc} results={results} mode={mode} prefs={prefs} onShow={showWorking} /></Section>}
+      {mode && <Section title="Cheapest sizes for the whole network"><div className="max-w-xl"><SizeProposal /></div></Section>}
       <Section title="Pump duty"><PumpDuty doc={doc} results={results} modes={results.modes} prefs={prefs} onShow={onShow} /></Section>
       <Section title="Bypass, vessel, volumes and hot water"><PlantSummary doc={doc} results={results} prefs={prefs} onShow={onShow} /></Section>
       <Section title="Emitters">

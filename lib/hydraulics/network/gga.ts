@@ -11,6 +11,7 @@
  */
 import { factorInPlace, solveInPlace } from "./ldl";
 import { symbolicFactor, type Symbolic } from "./ordering";
+import { cachedPrepare } from "./topology-cache";
 
 /** Writes h (loss from→to) into out[0] and g = dh/dq > 0 into out[1]. */
 export type Evaluate = (q: number, out: Float64Array) => void;
@@ -39,7 +40,12 @@ export interface Prepared {
   linkSlot: Int32Array; // link → off-diagonal slot or −1
 }
 
+/** The symbolic phase for a topology, from the per-topology memo when the same network was prepared before. */
 export function prepare(topo: Topology): Prepared {
+  return cachedPrepare(topo, prepareUncached);
+}
+
+export function prepareUncached(topo: Topology): Prepared {
   const unknownOf = new Int32Array(topo.nodeCount).fill(-1);
   let m = 0;
   for (let n = 0; n < topo.nodeCount; n++) if (!topo.fixed[n]) unknownOf[n] = m++;

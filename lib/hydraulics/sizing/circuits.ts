@@ -39,7 +39,8 @@ export interface CircuitAnalysis {
   sideOf: Int32Array;
 }
 
-const SIDE_EXCLUDED = new Set(["load", "header-primary", "header-top", "header-bottom", "bypass"]);
+/** Roles that are not part of a side: cut in design, or the load that closes each circuit. */
+export const SIDE_EXCLUDED: ReadonlySet<string> = new Set(["load", "header-primary", "header-top", "header-bottom", "bypass"]);
 
 export function isPumpLink(ctx: EngineContext, l: ModelLink): boolean {
   if (l.role === "pump") return true;
@@ -48,7 +49,7 @@ export function isPumpLink(ctx: EngineContext, l: ModelLink): boolean {
 }
 
 /** BFS tree from `start` not using `skip`; parent link per node (−1 root, −2 unvisited). */
-function tree(start: number, skip: number, adj: Adjacency, links: readonly ModelLink[], parent: Int32Array) {
+export function tree(start: number, skip: number, adj: Adjacency, links: readonly ModelLink[], parent: Int32Array) {
   parent[start] = -1;
   const queue = [start];
   for (let i = 0; i < queue.length; i++) {

@@ -1,6 +1,6 @@
 import { apiHandler } from "@/lib/auth/authorize";
 import { emittersToCsv } from "@/lib/rooms/emitter-list-csv";
-import { readEmitterList, replaceEmitterList, respond, respondOrCsv } from "@/lib/rooms/service";
+import { CSV_TYPES, readEmitterList, replaceEmitterList, respond, respondOrCsv } from "@/lib/rooms/service";
 import type { EmitterEntry } from "@/lib/rooms/schema";
 
 export const dynamic = "force-dynamic";
@@ -11,4 +11,4 @@ export const GET = apiHandler(async (req: Request, { params }: Ctx) =>
   respondOrCsv(req, await readEmitterList((await params).projectId), (b) => emittersToCsv(b.emitters as EmitterEntry[]), "emitters.csv"));
 
 /** Replace the firm's list from a CSV (text/csv). Owners and designers; 400 {error, issues} and nothing saved on any problem. */
-export const PUT = apiHandler(async (req: Request, { params }: Ctx) => respond(await replaceEmitterList((await params).projectId, req)));
+export const PUT = apiHandler(async (req: Request, { params }: Ctx) => respond(await replaceEmitterList((await params).projectId, req)), { accepts: CSV_TYPES });
