@@ -27,7 +27,7 @@ test("find the cheapest sizes, apply them in one undoable step, see them in the 
 
   // the proposal's own sizes, from the same API the panel called
   const view = await (await page.request.get(`/api/v1/schematics/${id}`)).json();
-  const answer = await (await page.request.post("/api/v1/optimise", { data: { doc: view.doc, options: {} } })).json();
+  const answer = await (await page.request.post("/api/v1/optimise", { data: { doc: view.doc, options: {} }, headers: { origin: new URL(page.url()).origin } })).json();
   expect(answer.changes).toHaveLength(changed);
 
   await page.getByTestId("apply-proposal").click();

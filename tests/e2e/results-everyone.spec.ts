@@ -26,9 +26,9 @@ test("the reviewer opens the revision under review and reads its report without 
     const view = await (await designer.request.get(`/api/v1/schematics/${id}`)).json();
     const doc = structuredClone(view.doc);
     doc.pipes.find((p: Pipe) => p.id === "z1-f0").lengthM = 80;
-    const put = await designer.request.put(`/api/v1/schematics/${id}`, { data: { lockVersion: view.schematic.lockVersion, doc } });
+    const put = await designer.request.put(`/api/v1/schematics/${id}`, { data: { lockVersion: view.schematic.lockVersion, doc }, headers: { origin: new URL(designer.url()).origin } });
     expect(put.status()).toBe(200);
-    const draftDp = (await (await designer.request.post("/api/v1/calculate", { data: doc })).json()).modes
+    const draftDp = (await (await designer.request.post("/api/v1/calculate", { data: doc, headers: { origin: new URL(designer.url()).origin } })).json()).modes
       .find((m: ModeRes) => m.mode === "heating").pipes.find((p: { id: string }) => p.id === "z1-f0").pressureDropKpa as number;
     await designer.close();
 
@@ -86,7 +86,7 @@ test("hot water and scenarios on the drawing: the cylinder coil pipes carry flow
   await page.goto(`/projects/${ORCHARD_END}/schematics/${id}`);
   await sizeIt(page);
   const doc = (await (await page.request.get(`/api/v1/schematics/${id}`)).json()).doc;
-  const results = await (await page.request.post("/api/v1/calculate", { data: doc })).json();
+  const results = await (await page.request.post("/api/v1/calculate", { data: doc, headers: { origin: new URL(page.url()).origin } })).json();
   const hw = (results.modes as ModeRes[]).find((m) => m.mode === "hot-water")!.pipes.find((p) => p.id === "hw-f")!.flowM3h;
   expect(hw).toBeGreaterThan(0.1);
 
@@ -136,7 +136,7 @@ test("findings grouped by check, docked beside the drawing; a finding shows its 
   const count = Number(await group.getByTestId("finding-count").textContent());
   expect(count).toBeGreaterThan(5);
   const groups = await page.getByTestId("finding-group").count();
-  const findings = (await (await page.request.post("/api/v1/calculate", { data: (await (await page.request.get(`/api/v1/schematics/${id}`)).json()).doc })).json()).findings.length;
+  const findings = (await (await page.request.post("/api/v1/calculate", { data: (await (await page.request.get(`/api/v1/schematics/${id}`)).json()).doc, headers: { origin: new URL(page.url()).origin } })).json()).findings.length;
   expect(groups).toBeLessThan(findings);
   // docked beside the canvas, not over it
   const dock = await page.getByTestId("findings-dock").boundingBox();
@@ -196,10 +196,21 @@ test("a new firm's empty projects page offers a first project and the demo copy;
   await page.setViewportSize({ width: 1366, height: 768 });
   await page.goto("/sign-up");
   await page.getByLabel("Your name").fill("Wren Marsh");
-  await page.getByLabel("E-mail address").fill(`wren-${stamp}@example.test`);
-  await page.getByLabel("Password").fill("long-enough-pw");
+  const email = `wren-${stamp}@example.test`;
+  await page.getByLabel("E-mail address").fill(email);
+  await page.getByLabel("Password").fill("heron-lane-copper-27");
   await page.getByLabel("Firm name").fill(`Heron Plumbing ${stamp}`);
   await page.getByRole("button", { name: "Create account" }).click();
+  // sign-up is finished from the e-mailed link (caught by the SMTP catcher)
+  const mailApi = process.env.MAIL_WEB_URL ?? "http://127.0.0.1:1081";
+  let link = "";
+  await expect.poll(async () => {
+    const all = (await (await fetch(`${mailApi}/api/email`)).json()) as { text: string; to: { address: string }[] }[];
+    link = all.filter((m) => m.to.some((t) => t.address === email)).map((m) => /https?:\/\/\S+\/sign-up\/\S+/.exec(m.text)?.[0] ?? "").find(Boolean) ?? "";
+    return link;
+  }, { timeout: 15_000 }).not.toBe("");
+  await page.goto(new URL(link).pathname);
+  await page.getByRole("button", { name: "Create my account" }).click();
   await page.waitForURL(/\/projects$/);
   const empty = page.getByTestId("projects-empty");
   await expect(empty).toBeVisible();

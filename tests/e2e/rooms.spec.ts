@@ -86,7 +86,7 @@ test("import the demo rooms CSV, see the flow-temperature chart, generate a firs
     const shown = await groups.evaluateAll((els) => els.map((e) => [e.getAttribute("data-code"), e.querySelector("button > span:nth-child(2)")?.textContent ?? ""]));
     expect(shown.filter(([, severity]) => severity !== "Note").map(([code]) => code)).toEqual(["input.assumed-values"]);
     await page.screenshot({ path: `${shots}/rooms-draft-board.png` });
-    const results = await (await page.request.post("/api/v1/calculate", { data: view.doc })).json();
+    const results = await (await page.request.post("/api/v1/calculate", { data: view.doc, headers: { origin: new URL(page.url()).origin } })).json();
     expect(results.findings.filter((f: { severity: string }) => f.severity === "error")).toEqual([]);
     expect(results.emitters).toHaveLength(10);
     for (const e of results.emitters) expect(e.ok, `${e.id} meets its room`).toBe(true);

@@ -20,7 +20,7 @@ beforeAll(async () => {
 });
 
 const post = (body: string, withCookie = true) =>
-  POST(new Request("http://test/api/v1/optimise", { method: "POST", body, headers: withCookie ? { cookie } : {} }), undefined as never);
+  POST(new Request("http://test/api/v1/optimise", { method: "POST", body, headers: withCookie ? { cookie, origin: "http://test", "content-type": "application/json" } : { "content-type": "application/json" } }), undefined as never);
 
 describe("POST /api/v1/optimise", () => {
   it("answers the contract's shape for the demo hall: a size for every pipe, cost before and after", async () => {

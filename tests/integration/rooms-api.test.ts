@@ -39,7 +39,8 @@ afterAll(async () => {
 
 type Call = (req: Request, ctx: { params: Promise<{ projectId: string }> }) => Promise<Response>;
 async function call(handler: Call, o: { path?: string; method?: string; cookie?: string; json?: unknown; csv?: string | Uint8Array; type?: string }) {
-  const headers = new Headers({ cookie: o.cookie ?? designer });
+  // a same-origin browser call: the request guard refuses a cookie without this app's Origin
+  const headers = new Headers({ cookie: o.cookie ?? designer, origin: "http://test" });
   let body: BodyInit | undefined;
   if (o.json !== undefined) { headers.set("content-type", "application/json"); body = JSON.stringify(o.json); }
   if (o.csv !== undefined) { headers.set("content-type", o.type ?? "text/csv"); body = o.csv as BodyInit; }

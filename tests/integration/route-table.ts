@@ -121,12 +121,13 @@ export const rows: Row[] = [
     call: async (f, cookie) => callAction(async () => (await projectActions()).updateProjectAction({ projectId: f.projectId, change: { archived: true } }), cookie),
   },
   {
-    name: "action createProjectAction", kind: "action", expect: { ...allow(members), anon: 401 },
+    // firm owners and designers only, as POST /api/v1/projects
+    name: "action createProjectAction", kind: "action", expect: { ...allow(["owner", "designer"]), anon: 401 },
     call: async (_f, cookie) => callAction(async () => (await projectActions()).createProjectAction({ name: `${FIXTURE_PREFIX} new ${randomUUID().slice(0, 8)}` }), cookie),
   },
   {
     // a copy lands in the caller's firm (Fernbank for the demo people); removed again so rows do not pile up
-    name: "action copyDemoProjectAction", kind: "action", expect: allow(members),
+    name: "action copyDemoProjectAction", kind: "action", expect: allow(["owner", "designer"]),
     call: async (_f, cookie) => {
       const out = await callAction(async () => (await projectActions()).copyDemoProjectAction(), cookie);
       if (out.status === 200) await db()("projects").where({ id: out.body.data.id }).delete();
