@@ -211,7 +211,7 @@ test("a new firm's empty projects page offers a first project and the demo copy;
   }, { timeout: 15_000 }).not.toBe("");
   await page.goto(new URL(link).pathname);
   await page.getByRole("button", { name: "Create my account" }).click();
-  await page.waitForURL(/\/projects$/);
+  await page.waitForURL(/\/projects(\?welcome=1)?$/);
   const empty = page.getByTestId("projects-empty");
   await expect(empty).toBeVisible();
   await expect(empty.getByRole("button", { name: "New project" })).toBeVisible();
