@@ -7,7 +7,9 @@
  * and the log-log growth exponent beside that of
  * n·log n; (b) the HTTP API, when a server answers at BENCH_URL: autocannon,
  * 10 connections for 10 s, POSTing the Millbrook Hall demo schematic to
- * /api/v1/calculate.
+ * /api/v1/calculate; (c) the drawing board in chromium against the same server
+ * (scripts/bench-board.ts): the demo hall's open time and frame times of pan and
+ * zoom with 1,000 parts — printed beside their targets, not asserted.
  *
  * Targets: 2,000 pipes < 100 ms, 20,000 pipes < 1 s; API ≥ 200 req/s, p99 < 50 ms.
  * Env: BENCH_URL (default http://localhost:3000), BENCH_COOKIE (sent as Cookie),
@@ -22,6 +24,7 @@ import { setFlagsFromString } from "node:v8";
 import { runInNewContext } from "node:vm";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { generateBuildingWithPipes } from "@/lib/schematic/generate-building";
+import { benchBoard } from "./bench-board";
 
 // A real gc() makes the heap figures comparable between sizes (no --expose-gc flag needed).
 setFlagsFromString("--expose-gc");
@@ -198,6 +201,7 @@ async function benchApi() {
 async function main() {
   const engineOk = benchEngine();
   const api = await benchApi();
+  await benchBoard((process.env.BENCH_URL ?? "http://localhost:3000").replace(/\/$/, ""));
   const ok = engineOk && api !== "fail";
   console.log(`\n${ok ? "All measured targets met" : "Some targets missed (see FAIL above)"}${api === "skipped" ? " (API not measured)." : "."}`);
 }

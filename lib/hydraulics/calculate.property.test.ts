@@ -30,15 +30,10 @@ function check(doc: unknown): void {
 }
 
 const seedDir = path.resolve(__dirname, "../../db/seeds/data");
-const seeds: unknown[] = (() => {
-  try {
-    return readdirSync(seedDir)
-      .filter((f) => f.endsWith(".json"))
-      .map((f) => JSON.parse(readFileSync(path.join(seedDir, f), "utf8")));
-  } catch {
-    return [];
-  }
-})();
+// The demo documents are the mutated bases: a missing folder fails here, it does not shrink the property.
+const seeds: unknown[] = readdirSync(seedDir)
+  .filter((f) => f.endsWith(".json"))
+  .map((f) => JSON.parse(readFileSync(path.join(seedDir, f), "utf8")));
 const bases = [smallSystem(), ...seeds];
 
 const num = fc.oneof(
@@ -153,6 +148,11 @@ describe("calculate() on any input", () => {
 });
 
 describe("the generators reach the engine", () => {
+  it("mutates the three demo documents and the small system, not fewer", () => {
+    expect(seeds).toHaveLength(3);
+    expect(bases).toHaveLength(4);
+  });
+
   it("a good share of random and mutated documents pass the schema and get calculated", () => {
     const share = (docs: unknown[]) => docs.filter((d) => calculate(d).ok).length / docs.length;
     expect(share(fc.sample(randomDoc, 200))).toBeGreaterThan(0.15);
