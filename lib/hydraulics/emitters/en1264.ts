@@ -1,6 +1,8 @@
 /**
- * EN 1264-2 basic characteristic curve of floor heating (from memory, consistent
- * with the "≈ 100 W/m² at 9 K" figure on EN 1264 trade pages, references.md §9):
+ * EN 1264-2 basic characteristic curve of floor heating (Basiskennlinie), recalled
+ * from memory and found in print in the trade journal IKZ ("Gut geplant ist optimal
+ * wärmeversorgt", ikz.de, quoting DIN EN 1264: q = 8,92·(t_FB,m − t_i)^1,1); it gives
+ * the "≈ 100 W/m² at 9 K" of EN 1264 trade pages (references.md §9):
  *   q = 8.92·(θ_F,m − θ_i)^1.1   W/m²
  * θ_F,m mean floor surface °C, θ_i room °C. Valid for surface excess 0…~15 K
  * (EN 1264 limits: 29 °C occupied zone, 35 °C perimeter).

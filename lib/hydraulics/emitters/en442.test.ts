@@ -4,7 +4,7 @@ import { arithmeticExcessK, EN442_NOMINAL_LMTD_K, en442Output, en442OutputArithm
 // references.md §7 (EN 442-2 characteristic equation; worked values computed, ratios printed
 // to 4 decimals → 1e-4 absolute on Φ/Φ50).
 describe("logarithmic mean excess temperature", () => {
-  it("75/65/20 → 49.833 K (check #32; independent public test asserts 49.8329)", () => {
+  it("75/65/20 → 10/ln(55/45) = 49.8329 K (check #32; hand calculation of the EN 442-2 definition)", () => {
     expect(lmtdK(75, 65, 20)).toBeCloseTo(49.8329, 4);
     expect(EN442_NOMINAL_LMTD_K).toBeCloseTo(49.8329, 4);
   });

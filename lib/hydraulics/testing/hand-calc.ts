@@ -64,14 +64,22 @@ export function colebrook(re: number, relRough: number): number {
 }
 
 /**
- * Straight pipe by Darcy–Weisbach, Δp = f·(L/D)·ρv²/2 (references §3.1), f from
- * Colebrook. Callers keep Re ≥ 4000 or < 2300 (no transition-zone rule here).
+ * Darcy f over the whole Re range: 64/Re below 2300, Colebrook from 4000, and between them
+ * a straight line in Re from 64/2300 to Colebrook(4000) — no published method covers the
+ * transition zone (the flow is intermittent); this is the rule the engine states
+ * (friction/darcy.ts), applied here so a hand check can cross the zone.
  */
+export function darcyFriction(re: number, relRough: number): number {
+  if (re < 2300 || re >= 4000) return colebrook(re, relRough);
+  return 64 / 2300 + ((re - 2300) / 1700) * (colebrook(4000, relRough) - 64 / 2300);
+}
+
+/** Straight pipe by Darcy–Weisbach, Δp = f·(L/D)·ρv²/2 (references §3.1), f by darcyFriction. */
 export function pipeFlow(qM3h: number, dMm: number, epsMm: number, lengthM: number, w: Water) {
   const d = dMm / 1000;
   const v = qM3h / 3600 / ((Math.PI * d * d) / 4);
   const re = (v * d) / w.nu;
-  const f = colebrook(re, epsMm / dMm);
+  const f = darcyFriction(re, epsMm / dMm);
   const gradientPaPerM = ((f / d) * w.rho * v * v) / 2;
   return { v, re, f, gradientPaPerM, dpKpa: (gradientPaPerM * lengthM) / 1000 };
 }

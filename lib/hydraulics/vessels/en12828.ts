@@ -1,7 +1,12 @@
 /**
- * Diaphragm expansion vessel sizing after EN 12828:2012+A1:2014 Annex D (the
- * formula layout is from memory, corroborated by several public implementations
- * — references.md §8.1; verify against the standard, open item §14.1).
+ * Diaphragm expansion vessel sizing after EN 12828:2012+A1:2014 Annex D. The
+ * formula layout is from memory (references.md §8.1; the standard's text is not
+ * public, open item §14.1). Checked against published sources: the acceptance
+ * factor (p_e + 1)/(p_e − p_0) is the ASHRAE diaphragm-tank form 1/(1 − P1/P2)
+ * (ASHRAE Handbook—HVAC Systems and Equipment, references §8.2); p_e = p_SV − 0.5
+ * bar (hilfreiche-tools.de, "MAG-W Enddruck"); p_0 at least the static head, trade
+ * practice +0.3 bar (haustechnikdialog.de, "Vordruck"). The water reserve
+ * V_WR = max(0.5 %·V_s, 3 L) and the 0.2 bar margin stay from memory.
  * Pressures are bar gauge; "+1" converts to absolute (1 bar atmosphere, as the
  * Annex does).
  */
