@@ -4,12 +4,15 @@
  * emitters`; no folder = every folder ("root" is lib/hydraulics/*.ts). Not part of npm test.
  *
  * Two passes per folder:
- *  1. every mutant whose code runs during a test, against the engine test set
- *     (vitest.mutate.config.mts), each mutant running only the tests that reach it (perTest coverage);
- *  2. static mutants — module-level tables and constants, evaluated once at load, which no per-test
- *     coverage can narrow — against the unit tests beside the folder (vitest.mutate-unit.config.mts):
- *     each needs a full run, and the whole engine set per static mutant takes hours on 2 shared cores.
- *     Judged by fewer tests, a static mutant can only survive more often: the score is not flattered.
+ *  1. every mutant against the engine test set (vitest.mutate.config.mts), each running only the
+ *     tests whose own code reached it (perTest coverage); static mutants (module-level tables and
+ *     constants, evaluated once at load) are left out of this pass;
+ *  2. the static mutants, and the mutants code run while test files were collected also reached
+ *     (a `describe` that calls calculate() before its `it`s: per-test coverage cannot credit the
+ *     tests that read that result) which pass 1 did not kill, against the unit tests beside the
+ *     folder (vitest.mutate-unit.config.mts), every test run for every such mutant. The whole
+ *     engine set per mutant takes hours on 2 shared cores. Judged by fewer tests a mutant can only
+ *     survive more often: the score is not flattered. A kill in either pass is a kill.
  * Incremental files per folder and pass in reports/mutation/ (git-ignored): a re-run tests only the
  * mutants whose code or covering tests changed. Ends with one line per folder: mutants, killed
  * (+ timed out), survived, no coverage, the score, and the score with the equivalent mutants listed
@@ -39,7 +42,7 @@ function equivalents(): Set<string> {
   }
   return keys;
 }
-const keyOf = (m: MutantResult) => `${m.fileName}:${m.location.start.line}:${m.mutatorName}:${(m.replacement ?? "").replace(/\s+/g, " ")}`;
+const keyOf = (m: MutantResult) => `${path.relative(process.cwd(), m.fileName)}:${m.location.start.line}:${m.mutatorName}:${(m.replacement ?? "").replace(/\s+/g, " ")}`;
 const placeOf = (m: MutantResult) => `${keyOf(m)}:${m.location.start.column}`;
 
 async function pass(folder: string, name: string, options: PartialStrykerOptions): Promise<MutantResult[]> {
@@ -47,11 +50,11 @@ async function pass(folder: string, name: string, options: PartialStrykerOptions
   // stryker.config.json is read by Stryker itself; these override it for one folder and pass
   const stryker = new Stryker({
     mutate,
+    ...options,
     concurrency: Number(process.env.MUTATE_CONCURRENCY ?? 2),
     incrementalFile: `reports/mutation/${folder}.${name}.incremental.json`,
     jsonReporter: { fileName: `reports/mutation/${folder}.${name}.json` },
     htmlReporter: { fileName: `reports/mutation/${folder}.${name}.html` },
-    ...options,
   });
   return stryker.runMutationTest();
 }
@@ -61,23 +64,28 @@ async function main() {
   const unexplained: string[] = [];
   const equiv = equivalents();
   for (const folder of chosen) {
-    const dynamic = await pass(folder, "engine-set", { ignoreStatic: true });
-    const staticPlaces = new Set(dynamic.filter((m) => m.status === "Ignored" && m.static).map(placeOf));
+    const first = await pass(folder, "engine-set", { ignoreStatic: true });
+    // pass 2: static mutants (ignored above) and hybrid ones (static and per-test coverage) that survived
+    const again = first.filter((m) => m.static && (m.status === "Ignored" || m.status === "Survived" || m.status === "NoCoverage"));
     process.env.MUTATE_TESTS = folder === "root" ? `${ENGINE}/*.test.ts` : `${ENGINE}/${folder}/**/*.test.ts`;
-    const statics = staticPlaces.size
-      ? (await pass(folder, "static", { ignoreStatic: false, vitest: { configFile: "vitest.mutate-unit.config.mts", related: false } }))
-          .filter((m) => staticPlaces.has(placeOf(m)))
+    const at = (m: MutantResult) => `${m.fileName}:${m.location.start.line}-${m.location.end.line}`;
+    const second = again.length
+      ? await pass(folder, "static", { mutate: [...new Set(again.map(at))], ignoreStatic: false, coverageAnalysis: "off", vitest: { configFile: "vitest.mutate-unit.config.mts", related: false } })
       : [];
-    const results = [...dynamic.filter((m) => !staticPlaces.has(placeOf(m))), ...statics];
+    const verdict = new Map(second.map((m) => [placeOf(m), m]));
+    const results = first
+      .filter((m) => m.status !== "Ignored" || m.static)
+      .map((m) => (again.includes(m) ? (verdict.get(placeOf(m)) ?? m) : m));
+    const statics = again;
     const n = (s: string) => results.filter((m) => m.status === s).length;
     const killed = n("Killed") + n("Timeout");
     const survivors = results.filter((m) => m.status === "Survived" || m.status === "NoCoverage");
     const listed = survivors.filter((m) => equiv.has(keyOf(m)));
-    for (const m of survivors) if (!equiv.has(keyOf(m))) unexplained.push(`${keyOf(m)} (${m.status}${m.static ? ", static" : ""})`);
+    for (const m of survivors) if (!equiv.has(keyOf(m))) unexplained.push(`${keyOf(m)} (${m.status}${again.includes(m) ? ", pass 2" : ""})`);
     const valid = killed + survivors.length;
     const pct = (x: number, of: number) => (of ? ((100 * x) / of).toFixed(1) : "–");
     rows.push(
-      `${folder.padEnd(10)} ${String(valid).padStart(5)} mutants (${statics.length} static), ${killed} killed, ${n("Survived")} survived, ` +
+      `${folder.padEnd(10)} ${String(valid).padStart(5)} mutants (${statics.length} judged in pass 2), ${killed} killed, ${n("Survived")} survived, ` +
         `${n("NoCoverage")} no coverage: score ${pct(killed, valid)} %, ${pct(killed, valid - listed.length)} % without ${listed.length} equivalent`,
     );
     console.log(`\n[mutate] ${rows.at(-1)}`);

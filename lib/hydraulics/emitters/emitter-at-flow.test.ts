@@ -1,12 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { emitterAtFlow, en442ReturnTemperature } from "./emitter-at-flow";
+import { bisect, en442LogW } from "@/lib/hydraulics/testing/hand-calc";
 import { en442Output } from "./en442";
 
 const rad = { outputAtDt50W: 2000, exponentN: 1.3, roomC: 20, specificHeatJkgK: 4180 };
 
 describe("emitterAtFlow (heat balance Φ_EN442(t1, t2) = ṁ·cp·(t1 − t2))", () => {
   it("at the design flow for 45/40/20 it returns 40 °C and the EN 442 output (0.3538 × Φ50, references.md §7)", () => {
-    const design = en442Output({ ...rad, flowC: 45, returnC: 40 });
+    const design = en442LogW(2000, 1.3, 45, 40, 20); // hand: 2000·(22.407/49.833)^1.3
     expect(Math.abs(design / 2000 - 0.3538)).toBeLessThan(1e-4);
     const m = design / (4180 * 5);
     const out = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: m });
@@ -27,10 +28,13 @@ describe("emitterAtFlow (heat balance Φ_EN442(t1, t2) = ṁ·cp·(t1 − t2))",
     expect(big.returnC).toBeGreaterThan(44.99);
     expect(Math.abs(big.outputW - en442Output({ ...rad, flowC: 45, returnC: 45 }))).toBeLessThan(1);
   });
-  it("both sides of the balance agree at the solution", () => {
+  it("55 °C in at 0.02 kg/s: the return where EN 442 output = ṁ·cp·(t1 − t2), found here by bisection", () => {
     const out = emitterAtFlow({ ...rad, flowC: 55, massFlowKgs: 0.02 });
-    const phi = en442Output({ ...rad, flowC: 55, returnC: out.returnC });
-    expect(Math.abs(phi - out.outputW)).toBeLessThan(1e-3);
+    const t2 = bisect((t) => en442LogW(2000, 1.3, 55, t, 20) - 0.02 * 4180 * (55 - t), 20 + 1e-9, 55 - 1e-9);
+    expect(t2).toBeGreaterThan(40);
+    expect(t2).toBeLessThan(50);
+    expect(Math.abs(out.returnC - t2)).toBeLessThan(1e-7);
+    expect(Math.abs(out.outputW - 0.02 * 4180 * (55 - t2))).toBeLessThan(1e-3);
     expect(en442ReturnTemperature({ ...rad, flowC: 55, massFlowKgs: 0.02 })).toBe(out.returnC);
   });
   it("no flow → no output, return at room; flow not above room → no output", () => {

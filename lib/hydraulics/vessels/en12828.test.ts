@@ -104,3 +104,41 @@ describe("second check: the acceptance factor is ASHRAE's diaphragm-tank form (r
     expect(a.nominalVolumeL).toBeCloseTo(ashrae(0.014213 * 200) + ashrae(3), 9);
   });
 });
+
+describe("EN 12828 inputs: each limit on both sides, the message naming the field and the value", () => {
+  const ok = { systemVolumeL: 200, expansionFraction: 0.02, staticHeightM: 5, coldFillPressureBar: 1.5, safetyValveBar: 3 };
+  it("strict limits (> 0): systemVolumeL and safetyValveBar 0 are refused, just above is taken", () => {
+    expect(() => en12828Vessel({ ...ok, systemVolumeL: 0 })).toThrow(/^systemVolumeL must be > 0, got 0$/);
+    expect(en12828Vessel({ ...ok, systemVolumeL: 1e-6 }).waterReserveL).toBe(3);
+    expect(() => en12828FinalPressureBar(0)).toThrow(/^safetyValveBar must be > 0, got 0$/);
+    expect(() => en12828Vessel({ ...ok, densityKgM3: 0 })).toThrow(/^densityKgM3 must be > 0, got 0$/);
+    expect(() => en12828Vessel({ ...ok, coldFillPressureBar: -1 })).toThrow(/^coldFillPressureBar must be > -1, got -1$/);
+    expect(en12828Vessel({ ...ok, coldFillPressureBar: -0.5 }).coldFillPressureOk).toBe(false);
+  });
+  it("non-strict limits (≥ 0): 0 is taken, below is refused", () => {
+    expect(en12828Vessel({ ...ok, expansionFraction: 0 }).expansionVolumeL).toBe(0);
+    expect(en12828Vessel({ ...ok, staticHeightM: 0 }).prechargeBar).toBeCloseTo(0.2, 12);
+    expect(en12828Vessel({ ...ok, prechargeMarginBar: 0 }).prechargeBar).toBeCloseTo(0.5, 12);
+    expect(() => en12828Vessel({ ...ok, expansionFraction: -0.01 })).toThrow(/^expansionFraction must be ≥ 0, got -0.01$/);
+    expect(() => en12828Vessel({ ...ok, minimumPrechargeBar: -0.1 })).toThrow(/^minimumPrechargeBar must be ≥ 0, got -0.1$/);
+    expect(() => en12828Vessel({ ...ok, prechargeMarginBar: -0.1 })).toThrow(/prechargeMarginBar/);
+    expect(() => en12828Vessel({ ...ok, staticHeightM: Number.NaN })).toThrow(/staticHeightM/);
+  });
+  it("p_e equal to p_0 is refused (no vessel works), a hair above is sized", () => {
+    // p_SV 2.7 bar → p_e 2.2 bar; 20 m → p_0 2.0 + 0.2 = 2.2 bar
+    expect(() => en12828Vessel({ ...ok, staticHeightM: 20, safetyValveBar: 2.7 })).toThrow(/safetyValveBar 2.7: final pressure 2.20 bar is not above the pre-charge 2.20 bar/);
+    expect(en12828Vessel({ ...ok, staticHeightM: 20, safetyValveBar: 2.71 }).nominalVolumeL).toBeGreaterThan(0);
+  });
+  it("the cold fill must lie in [minimum fill, p_e): at p_e it is not ok, just below it is", () => {
+    const a = en12828Vessel(ok);
+    expect(en12828Vessel({ ...ok, coldFillPressureBar: a.finalPressureBar }).coldFillPressureOk).toBe(false);
+    expect(en12828Vessel({ ...ok, coldFillPressureBar: a.finalPressureBar - 0.01 }).coldFillPressureOk).toBe(true);
+    expect(en12828Vessel({ ...ok, coldFillPressureBar: a.minimumFillPressureBar }).coldFillPressureOk).toBe(true);
+    expect(en12828Vessel({ ...ok, coldFillPressureBar: a.minimumFillPressureBar - 0.01 }).coldFillPressureOk).toBe(false);
+  });
+  it("minimum fill pressure by hand (Boyle): 12 L pre-charged to 0.7 bar holding 3 L → 1.7·12/9 − 1 = 1.2667 bar", () => {
+    expect(en12828MinimumFillPressureBar(12, 0.7, 3)).toBeCloseTo(1.7 * 12 / 9 - 1, 12);
+    expect(() => en12828MinimumFillPressureBar(0, 0.7, 0)).toThrow(/^volumeL must be > 0, got 0$/);
+    expect(() => en12828MinimumFillPressureBar(12, 0.7, -1)).toThrow(/^waterReserveL must be ≥ 0, got -1$/);
+  });
+});
