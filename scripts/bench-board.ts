@@ -109,6 +109,8 @@ export async function benchBoard(base: string): Promise<"measured" | "skipped"> 
   });
   try {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 }, baseURL: base });
+    // tsx (esbuild, keepNames) wraps named functions in __name(…): give the page the same helper
+    await page.addInitScript("window.__name = (f) => f");
     await page.goto("/sign-in");
     await page.getByLabel("E-mail address").fill("designer@fernbank.example");
     await page.getByLabel("Password").fill("copper-loop-designer");

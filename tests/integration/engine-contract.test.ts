@@ -1445,7 +1445,8 @@ describe("Case G — bad input", () => {
  * Case H — the CLI                                                    *
  * ================================================================== */
 // The CLI runs the engine in a child process, which never carries a mutant: skipped under npm run mutate.
-describe.skipIf(process.env.LOOPWRIGHT_MUTATION === "1")("Case H — CLI: npx tsx scripts/calc.ts FILE", () => {
+// Each case starts tsx in a new process: 5 s on an idle machine, far more on a shared busy one.
+describe.skipIf(process.env.LOOPWRIGHT_MUTATION === "1")("Case H — CLI: npx tsx scripts/calc.ts FILE", { timeout: 120_000 }, () => {
   const dir = mkdtempSync(path.join(tmpdir(), "lw-contract-"));
   const cli = (file: string) =>
     spawnSync("npx", ["tsx", "scripts/calc.ts", file], { cwd: path.resolve(__dirname, "../.."), encoding: "utf8", timeout: 60_000 });

@@ -18,7 +18,7 @@ import type { EngineContext } from "./context";
 import { bypassBranchPoints, type ModeRun } from "./mode";
 
 export const BYPASS_MARGIN_FRACTION = 0.1;
-export const BYPASS_MARGIN_MIN_KPA = 1;
+export const BYPASS_MARGIN_MIN_KPA = 2;
 
 export interface BypassSizing {
   id: string;
