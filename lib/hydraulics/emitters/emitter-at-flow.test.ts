@@ -47,3 +47,33 @@ describe("emitterAtFlow (heat balance Φ_EN442(t1, t2) = ṁ·cp·(t1 − t2))",
     expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 0.02, exponentN: 3 })).toThrow(/exponentN/);
   });
 });
+
+describe("emitterAtFlow arguments and special cases, on both sides", () => {
+  it("temperatures finite, ṁ ≥ 0 and finite, cp > 0 and finite — the message names the value", () => {
+    expect(() => emitterAtFlow({ ...rad, flowC: Number.NaN, massFlowKgs: 0.02 })).toThrow(/^flowC must be finite, got NaN$/);
+    expect(() => emitterAtFlow({ ...rad, roomC: Number.POSITIVE_INFINITY, flowC: 45, massFlowKgs: 0.02 })).toThrow(/^roomC must be finite, got Infinity$/);
+    expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: Number.POSITIVE_INFINITY })).toThrow(/^massFlowKgs must be ≥ 0, got Infinity$/);
+    expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 0.02, specificHeatJkgK: Number.POSITIVE_INFINITY })).toThrow(/^specificHeatJkgK must be > 0, got Infinity$/);
+    expect(() => emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 0.02, specificHeatJkgK: -4180 })).toThrow(/specificHeatJkgK/);
+  });
+  it("flow exactly at room temperature, or a 0 W radiator: no output, the water leaves as it came", () => {
+    expect(emitterAtFlow({ ...rad, flowC: 20, massFlowKgs: 0.02 })).toEqual({ outputW: 0, returnC: 20 });
+    expect(emitterAtFlow({ ...rad, outputAtDt50W: 0, flowC: 45, massFlowKgs: 0.02 })).toEqual({ outputW: 0, returnC: 45 });
+    // the exponent is still checked on these paths
+    expect(() => emitterAtFlow({ ...rad, exponentN: 5, flowC: 19, massFlowKgs: 0.02 })).toThrow(/exponentN/);
+    expect(() => emitterAtFlow({ ...rad, outputAtDt50W: -1, flowC: 45, massFlowKgs: 0.02 })).toThrow(/outputAtDt50W/);
+  });
+  it("a trickle (1e-7 kg/s) cools the water almost to the room: return within 1e-6 K above it, output = ṁ·cp·(t1 − t2)", () => {
+    const out = emitterAtFlow({ ...rad, flowC: 45, massFlowKgs: 1e-7 });
+    expect(out.returnC).toBeGreaterThan(20);
+    expect(out.returnC - 20).toBeLessThan(1e-3);
+    expect(out.outputW).toBeCloseTo(1e-7 * 4180 * (45 - out.returnC), 12);
+  });
+  it("the return solves the balance to 1e-9 K at several flows (hand bisection on the EN 442 equation)", () => {
+    for (const m of [0.001, 0.005, 0.05, 0.5]) {
+      const out = emitterAtFlow({ ...rad, flowC: 50, massFlowKgs: m });
+      const t2 = bisect((t) => en442LogW(2000, 1.3, 50, t, 20) - m * 4180 * (50 - t), 20 + 1e-12, 50 - 1e-12);
+      expect(Math.abs(out.returnC - t2), `ṁ ${m}`).toBeLessThan(1e-8);
+    }
+  });
+});

@@ -18,3 +18,20 @@ describe("EN 1264 basic characteristic", () => {
     expect(() => en1264SurfaceTemperatureC(-5, 20)).toThrow(/qWm2/);
   });
 });
+
+describe("EN 1264 arguments: each limit on both sides", () => {
+  it("surface at the room gives 0 W/m², 1 K above gives 8.92 W/m² (8.92·1^1.1)", () => {
+    expect(en1264HeatFluxWm2(20, 20)).toBe(0);
+    expect(en1264HeatFluxWm2(21, 20)).toBeCloseTo(8.92, 12);
+  });
+  it("0 W/m² needs the room temperature; the inverse of 8.92 W/m² is 1 K above it", () => {
+    expect(en1264SurfaceTemperatureC(0, 20)).toBe(20);
+    expect(en1264SurfaceTemperatureC(8.92, 20)).toBeCloseTo(21, 12);
+  });
+  it("non-finite temperatures and fluxes are refused by name", () => {
+    expect(() => en1264HeatFluxWm2(Number.NaN, 20)).toThrow(/^surfaceC must be finite, got NaN$/);
+    expect(() => en1264HeatFluxWm2(29, Number.POSITIVE_INFINITY)).toThrow(/^roomC must be finite, got Infinity$/);
+    expect(() => en1264SurfaceTemperatureC(Number.POSITIVE_INFINITY, 20)).toThrow(/^qWm2 must be ≥ 0, got Infinity$/);
+    expect(() => en1264SurfaceTemperatureC(100, Number.NaN)).toThrow(/^roomC must be finite, got NaN$/);
+  });
+});
