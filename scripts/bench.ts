@@ -7,7 +7,9 @@
  * and the log-log growth exponent beside that of
  * n·log n; (b) the HTTP API, when a server answers at BENCH_URL: autocannon,
  * 10 connections for 10 s, POSTing the Millbrook Hall demo schematic to
- * /api/v1/calculate.
+ * /api/v1/calculate; (c) the drawing board in chromium against the same server
+ * (scripts/bench-board.ts): the demo hall's open time and frame times of pan and
+ * zoom with 1,000 parts — printed beside their targets, not asserted.
  *
  * (c) the first-draft generator (scripts/bench-draft.ts).
  *
@@ -29,6 +31,7 @@ import { setFlagsFromString } from "node:v8";
 import { runInNewContext } from "node:vm";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { generateBuildingWithPipes } from "@/lib/schematic/generate-building";
+import { benchBoard } from "./bench-board";
 import { benchDraft } from "./bench-draft";
 import { benchCalcVsJson, benchOptimiseHall } from "./bench/calc-vs-json";
 import { benchSolverVsEpanet } from "./bench/solver-vs-epanet";
@@ -214,6 +217,7 @@ async function main() {
   const jsonOk = benchCalcVsJson(2000);
   const optimiseOk = benchOptimiseHall();
   const api = await benchApi();
+  await benchBoard((process.env.BENCH_URL ?? "http://localhost:3000").replace(/\/$/, ""));
   const ok = engineOk && draftOk && solverOk && jsonOk && optimiseOk && api !== "fail";
   console.log(`\n${ok ? "All measured targets met" : "Some targets missed (see FAIL above)"}${api === "skipped" ? " (API not measured)." : "."}`);
 }

@@ -1,8 +1,9 @@
 /**
  * Property: whatever comes in — random documents, mutated real ones, junk —
  * calculate() never throws, and answers either a valid Results document
- * (parsed by the results schema, which rejects NaN and ±Infinity) or
- * ok:false with issues that each name a JSON path.
+ * (parsed by the results schema, which rejects NaN and ±Infinity) with no
+ * finding repeated (same code and refs), or ok:false with issues that each
+ * name a JSON path.
  */
 import fc from "fast-check";
 import { readFileSync, readdirSync } from "node:fs";
@@ -12,6 +13,7 @@ import { partRegistry, portsOf } from "@/lib/schematic/parts";
 import { partTypes, type PartType } from "@/lib/schematic/schema";
 import { resultsSchema } from "@/lib/schematic/results";
 import { calculate } from "./calculate";
+import { repeatedFindings } from "./testing/repeated-findings";
 import { smallSystem } from "./testing/small-system";
 
 function check(doc: unknown): void {
@@ -19,6 +21,7 @@ function check(doc: unknown): void {
   if (r.ok) {
     const parsed = resultsSchema.safeParse(r.results);
     if (!parsed.success) throw new Error(`invalid results: ${JSON.stringify(parsed.error.issues.slice(0, 3))}`);
+    expect(repeatedFindings(r.results.findings)).toEqual([]); // one finding per fault (same code, same refs once)
   } else {
     expect(r.issues.length).toBeGreaterThan(0);
     for (const i of r.issues) {
@@ -30,15 +33,10 @@ function check(doc: unknown): void {
 }
 
 const seedDir = path.resolve(__dirname, "../../db/seeds/data");
-const seeds: unknown[] = (() => {
-  try {
-    return readdirSync(seedDir)
-      .filter((f) => f.endsWith(".json"))
-      .map((f) => JSON.parse(readFileSync(path.join(seedDir, f), "utf8")));
-  } catch {
-    return [];
-  }
-})();
+// The demo documents are the mutated bases: a missing folder fails here, it does not shrink the property.
+const seeds: unknown[] = readdirSync(seedDir)
+  .filter((f) => f.endsWith(".json"))
+  .map((f) => JSON.parse(readFileSync(path.join(seedDir, f), "utf8")));
 const bases = [smallSystem(), ...seeds];
 
 const num = fc.oneof(
@@ -137,22 +135,30 @@ const mutated = fc.tuple(fc.nat({ max: bases.length - 1 }), fc.array(mutation, {
   return doc;
 });
 
+// Under mutation testing (npm run mutate) every surviving mutant reruns this file: a tenth of the cases there.
+const runs = (n: number) => (process.env.LOOPWRIGHT_MUTATION === "1" ? n / 10 : n);
+
 describe("calculate() on any input", () => {
   it("random documents: valid results or issues, never a throw or a NaN", () => {
-    fc.assert(fc.property(randomDoc, (doc) => check(doc)), { numRuns: 800 });
+    fc.assert(fc.property(randomDoc, (doc) => check(doc)), { numRuns: runs(800) });
   });
 
   it("mutated real documents: valid results or issues", () => {
-    fc.assert(fc.property(mutated, (doc) => check(doc)), { numRuns: 300 });
+    fc.assert(fc.property(mutated, (doc) => check(doc)), { numRuns: runs(300) });
   });
 
   it("junk: not objects, wrong formats", () => {
-    fc.assert(fc.property(fc.jsonValue(), (v) => check(v)), { numRuns: 200 });
+    fc.assert(fc.property(fc.jsonValue(), (v) => check(v)), { numRuns: runs(200) });
     for (const v of [null, 1, "x", [], {}, { format: "loopwright/schematic" }, { format: "loopwright/schematic", version: 2 }]) check(v);
   });
 });
 
 describe("the generators reach the engine", () => {
+  it("mutates the three demo documents and the small system, not fewer", () => {
+    expect(seeds).toHaveLength(3);
+    expect(bases).toHaveLength(4);
+  });
+
   it("a good share of random and mutated documents pass the schema and get calculated", () => {
     const share = (docs: unknown[]) => docs.filter((d) => calculate(d).ok).length / docs.length;
     expect(share(fc.sample(randomDoc, 200))).toBeGreaterThan(0.15);

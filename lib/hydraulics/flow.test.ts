@@ -28,7 +28,9 @@ describe("simplified convention (cp 4180, ρ 1000) — exact arithmetic", () => 
     expect(q * 3600).toBeCloseTo(1.7225, 4);
     expect(q * 1000).toBeCloseTo(0.4785, 4);
   });
-  it("public test: 1000 W, 10 K, cp 4190 → ṁ 0.0238663 kg/s; ρ 977.8 → 87.87 L/h", () => {
+  // Hand calculation with water at 70 °C rounded from references §1.1 (IAPWS-95: cp 4.1901 kJ/kg·K,
+  // ρ 977.765 kg/m³): ṁ = 1000/(4190·10) = 0.0238663 kg/s; V = ṁ/977.8 = 2.44082e-5 m³/s = 87.87 L/h
+  it("1000 W, 10 K, cp 4190 → ṁ 0.0238663 kg/s; ρ 977.8 → 87.87 L/h (references §10, last row)", () => {
     expect(massFlowForHeat({ powerW: 1000, deltaTK: 10, densityKgM3: 977.8, specificHeatJkgK: 4190 })).toBeCloseTo(0.0238663, 7);
     expect(flowForHeat({ powerW: 1000, deltaTK: 10, densityKgM3: 977.8, specificHeatJkgK: 4190 }) * 3.6e6).toBeCloseTo(87.87, 2);
   });

@@ -7,13 +7,14 @@ const MILLBROOK = "6a0f3c1e-0000-4000-8000-000000000101";
 const ORCHARD = "6a0f3c1e-0000-4000-8000-000000000102";
 const shots = "test-results/screens";
 
-async function teamSchematicId(projectId: string): Promise<string> {
+/** The seeded Orchard End "Bypass only" team schematic, by its seeded name (copies made by other tests have their own). */
+async function bypassOnlyId(projectId: string): Promise<string> {
   const { Client } = await import("pg");
   const c = new Client({ connectionString: process.env.DATABASE_URL });
   await c.connect();
   try {
-    // "Bypass only" on Orchard End: a team schematic whose revision is in review, not issued
-    const r = await c.query("select id from schematics where project_id = $1 and kind = 'team' order by name limit 1", [projectId]);
+    const r = await c.query("select id from schematics where project_id = $1 and kind = 'team' and name = 'Bypass only'", [projectId]);
+    expect(r.rows).toHaveLength(1);
     return r.rows[0].id as string;
   } finally { await c.end(); }
 }
@@ -25,14 +26,15 @@ async function signIn(page: Page, email: string, password: string, next?: string
   await page.getByRole("button", { name: "Sign in" }).click();
 }
 
+/** The newest e-mail the SMTP catcher holds for `address`, waiting until one arrives. */
 async function caughtMailTo(address: string): Promise<{ subject: string; text: string }> {
-  for (let i = 0; i < 40; i++) {
+  let mail: { subject: string; text: string } | undefined;
+  await expect.poll(async () => {
     const all = (await (await fetch(`${mailApi}/api/email`)).json()) as { subject: string; text: string; to: { address: string }[] }[];
-    const mine = all.filter((m) => m.to.some((t) => t.address === address));
-    if (mine.length) return mine[mine.length - 1]!;
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`no e-mail to ${address} at ${mailApi}`);
+    mail = all.filter((m) => m.to.some((t) => t.address === address)).at(-1);
+    return mail !== undefined;
+  }, { message: `an e-mail to ${address} at ${mailApi}`, timeout: 15_000 }).toBe(true);
+  return mail!;
 }
 
 test("the signed-in area sends a visitor to sign in and back", async ({ page }) => {
@@ -107,7 +109,7 @@ test("a trainee cannot edit the team's schematic: no edit controls, and the API 
   expect(can["variant.practice"]).toBe(true);
 
   // the team's schematic on the drawing board: read-only, no save controls
-  const schematicId = await teamSchematicId(ORCHARD);
+  const schematicId = await bypassOnlyId(ORCHARD);
   await page.goto(`/projects/${ORCHARD}/schematics/${schematicId}`);
   await expect(page.getByTestId("save-status")).toHaveText("Read-only");
   await expect(page.getByRole("button", { name: "Save revision" })).toHaveCount(0);

@@ -33,10 +33,23 @@
  *  - a pump curve is read by straight lines between its points (plain reading);
  *  - a header / buffer joins p1…p4 at one node (contract table: "separates
  *    primary (p1,p2) and secondary (p3,p4) circuits"), so the header Δp is 0.
- * Tolerances are stated beside each check.
+ * Tolerances are what really separates the two methods (measured on every check of this
+ * file, then about 2.5× for margin) — never wider, so a 2 % Kv or flow error fails:
+ *  - FLOW 5e-4: water ρ·cp of the IAPWS table above (printed to 6–7 figures) against the
+ *    engine's own water formulation: 2e-4 apart at 40 °C;
+ *  - DP 1e-3: a pressure drop goes with q² (2 × FLOW) and ν through Colebrook (f moves a tenth
+ *    as much as ν): 4e-4 apart; an excess (a difference of two sums) 2e-3, its balancing Kv
+ *    (a square root) 1e-3; a pump curve read at the design flow 5e-4;
+ *  - SIM 1e-3: simulated operating points, the same laws solved twice (solver converged to
+ *    1e-5), and the DP difference moves a flow by half as much;
+ *  - GLYCOL 2e-3: propylene glycol — the check values are the ASHRAE table (refs §2.2), whose cp is
+ *    printed to 0.01 kJ/(kg·K) (0.26 % at 3.90): 8e-4 apart;
+ *  - ethylene glycol (F) is interpolated here between Melinder mass fractions, a coarser hand
+ *    method: cp 1.5 %, ρ 0.5 %, ν 2 % (measured 1.1 %, 0.3 %, 0.3 %).
  */
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
+import { repeatedFindings } from "@/lib/hydraulics/testing/repeated-findings";
 
 /* ------------------------------------------------------------------ *
  * Independent hand-calculation helpers                                *
@@ -110,6 +123,11 @@ function split(Q: number, br1: (q: number) => number, br2: (q: number) => number
   return [q1, Q - q1, br1(q1)];
 }
 
+const FLOW = 5e-4;
+const DP = 1e-3;
+const SIM = 1e-3;
+const GLYCOL = 2e-3;
+
 /* ------------------------------------------------------------------ *
  * Document builders (contract field names only)                       *
  * ------------------------------------------------------------------ */
@@ -156,6 +174,8 @@ function nonFinitePaths(x: unknown, at = "results"): string[] {
   if (x && typeof x === "object") return Object.entries(x).flatMap(([k, v]) => nonFinitePaths(v, `${at}.${k}`));
   return [];
 }
+/** Every results document of this file, for the no-repeated-finding sweep at the end. */
+const ALL_RESULTS: AnyR[] = [];
 function run(d: unknown): AnyR {
   let out: AnyR;
   expect(() => {
@@ -163,6 +183,7 @@ function run(d: unknown): AnyR {
   }).not.toThrow();
   expect(out.ok, JSON.stringify(out.issues ?? null)).toBe(true);
   expect(nonFinitePaths(out.results)).toEqual([]);
+  ALL_RESULTS.push(out.results);
   return out.results;
 }
 /** calculate() must not throw; returns the raw answer (ok true or false). */
@@ -186,6 +207,8 @@ const scenEm = (s: AnyR, id: string) => s.emitters.find((e: AnyR) => e.id === id
 const codes = (r: AnyR) => r.findings.map((f: AnyR) => f.code);
 const serious = (r: AnyR) => r.findings.filter((f: AnyR) => f.severity !== "info");
 const naming = (r: AnyR, id: string, re: RegExp = /./) => serious(r).filter((f: AnyR) => f.refs.includes(id) && re.test(f.code));
+/** [severity, refs] of every finding with this code. */
+const findingsAbout = (r: AnyR, code: string) => r.findings.filter((f: AnyR) => f.code === code).map((f: AnyR) => [f.severity, f.refs]);
 function near(actual: unknown, expected: number, relTol: number, what = "") {
   expect(typeof actual, `${what}: expected a number, got ${JSON.stringify(actual)}`).toBe("number");
   const a = actual as number;
@@ -221,9 +244,8 @@ function caseA(ratedKw: number, scenarios?: unknown[]): Json {
       P("ps", "pump", { curve: PS_A }),
       P("mf", "manifold", { outlets: 2 }),
       P("mr", "manifold", { outlets: 2 }),
-      // water volumes stated (0 L): empty ones now take typical values; the hand volume counts none.
       P("fc", "fan-coil", { heatLoadW: 3000, kv: 2, waterVolumeL: 0 }),
-      P("hl", "heat-load", { heatLoadW: 2000, kv: 4, deltaTK: 5 }),
+      P("hl", "heat-load", { heatLoadW: 2000, kv: 4, deltaTK: 5, waterVolumeL: 0 }),
     ],
     [
       pipe("q1", "hp.flow", "llh.p1", "28", 2),
@@ -263,31 +285,31 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
   });
 
   it("secondary flows: fan coil P/(ρcp·10 K), heat load with its own ΔT 5 K P/(ρcp·5 K), mains carry the sum (q = P/(ρ·cp·ΔT), refs §10)", () => {
-    near(pipeR(r, "f1").flowM3h, qFc, 3e-3, "fan-coil branch");
-    near(pipeR(r, "g1").flowM3h, qHl, 3e-3, "heat-load branch");
-    for (const id of ["s1", "s2", "s3"]) near(pipeR(r, id).flowM3h, qSec, 3e-3, `secondary main ${id}`);
+    near(pipeR(r, "f1").flowM3h, qFc, FLOW, "fan-coil branch");
+    near(pipeR(r, "g1").flowM3h, qHl, FLOW, "heat-load branch");
+    for (const id of ["s1", "s2", "s3"]) near(pipeR(r, id).flowM3h, qSec, FLOW, `secondary main ${id}`);
   });
 
   it("primary: heat source at rated output 8 kW / (ρcp·10 K) = 0.69448 m³/h in q1, q2 and heatSourceFlowM3h (contract: header separates the circuits)", () => {
     near(qPri, 0.69448, 2e-4, "hand");
-    near(pipeR(r, "q1").flowM3h, qPri, 3e-3, "q1");
-    near(pipeR(r, "q2").flowM3h, qPri, 3e-3, "q2");
-    near(mode(r).heatSourceFlowM3h, qPri, 3e-3, "heatSourceFlowM3h");
+    near(pipeR(r, "q1").flowM3h, qPri, FLOW, "q1");
+    near(pipeR(r, "q2").flowM3h, qPri, FLOW, "q2");
+    near(mode(r).heatSourceFlowM3h, qPri, FLOW, "heatSourceFlowM3h");
   });
 
   // The contract leaves parts[].flowM3h of a 4-port part open; DEVELOPERS.md fixes it as the primary pass.
   // The flow through the header body (the decoupler) is then the mass balance of its pipes: |Qp − Qs|.
   it("header: its part flow is the primary pass, and its pipes balance to a decoupler flow |Q_primary − Q_secondary| = 0.08681 m³/h", () => {
-    near(Math.abs(partR(r, "llh").flowM3h), qPri, 3e-3, "header part flow = primary pass");
-    near(pipeR(r, "q1").flowM3h - pipeR(r, "s1").flowM3h, qPri - qSec, 2e-2, "decoupler flow from the pipes");
+    near(Math.abs(partR(r, "llh").flowM3h), qPri, FLOW, "header part flow = primary pass");
+    near(pipeR(r, "q1").flowM3h - pipeR(r, "s1").flowM3h, qPri - qSec, 2e-3, "decoupler flow from the pipes");
   });
 
   it("secondary index circuit = fan coil; its Δp = secondary mains + its branch; no primary pipe in any secondary path", () => {
     const dFc = secMains(qSec) + brFc(qFc);
     const dHl = secMains(qSec) + brHl(qHl);
     expect(dFc).toBeGreaterThan(dHl * 1.1);
-    near(circ(r, "fc").pressureDropKpa, dFc, 1.5e-2, "fc circuit Δp");
-    near(circ(r, "hl").pressureDropKpa, dHl, 1.5e-2, "hl circuit Δp");
+    near(circ(r, "fc").pressureDropKpa, dFc, DP, "fc circuit Δp");
+    near(circ(r, "hl").pressureDropKpa, dHl, DP, "hl circuit Δp");
     expect(circ(r, "fc").index).toBe(true);
     expect(circ(r, "hl").index).toBe(false);
     for (const c of ["fc", "hl"]) {
@@ -298,8 +320,8 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
 
   it("heat load with own ΔT: excess = branch Δp difference, balancing Kv = q/√(excess/100·1000/ρ) (IEC 60534 Kv definition)", () => {
     const excess = brFc(qFc) - brHl(qHl);
-    near(circ(r, "hl").excessKpa, excess, 4e-2, "excess");
-    near(circ(r, "hl").balancingKv, kvFor(qHl, excess, W40), 3e-2, "balancing Kv");
+    near(circ(r, "hl").excessKpa, excess, 2e-3, "excess");
+    near(circ(r, "hl").balancingKv, kvFor(qHl, excess, W40), 1e-3, "balancing Kv");
   });
 
   it("pump duty per pump: ps = secondary index Δp at Q_s, available 40 − 10·Q_s; hp = primary loop (Kv 3 + 4 m Cu 28) at Q_p, available 50 − 10·Q_p", () => {
@@ -307,13 +329,13 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
     const hp = pumpR(r, "hp");
     expect(ps).toBeDefined();
     expect(hp).toBeDefined();
-    near(ps.designFlowM3h, qSec, 3e-3, "ps flow");
-    near(ps.requiredHeadKpa, secMains(qSec) + brFc(qFc), 1.5e-2, "ps required");
-    near(ps.availableHeadKpa, curveAt(PS_A, qSec), 1e-2, "ps available");
+    near(ps.designFlowM3h, qSec, FLOW, "ps flow");
+    near(ps.requiredHeadKpa, secMains(qSec) + brFc(qFc), DP, "ps required");
+    near(ps.availableHeadKpa, curveAt(PS_A, qSec), 5e-4, "ps available");
     expect(ps.ok).toBe(true);
-    near(hp.designFlowM3h, qPri, 3e-3, "hp flow");
-    near(hp.requiredHeadKpa, priLoop(qPri), 2e-2, "hp required (header Δp 0)");
-    near(hp.availableHeadKpa, curveAt(HP_A, qPri), 1e-2, "hp available");
+    near(hp.designFlowM3h, qPri, FLOW, "hp flow");
+    near(hp.requiredHeadKpa, priLoop(qPri), DP, "hp required (header Δp 0)");
+    near(hp.availableHeadKpa, curveAt(HP_A, qPri), 5e-4, "hp available");
     expect(hp.ok).toBe(true);
     // modes[].pump is the pump with the largest required head (DEVELOPERS.md)
     const maxReq = Math.max(ps.requiredHeadKpa, hp.requiredHeadKpa);
@@ -334,11 +356,11 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
     const Qp = bisect((Q) => curveAt(HP_A, Q) - priLoop(Q), 0.01, 2.99);
     const Qs = bisect((Q) => curveAt(PS_A, Q) - secMains(Q) - split(Q, brFc, brHl)[2], 0.01, 1.99);
     const [q1, q2] = split(Qs, brFc, brHl);
-    near(s.heatSourceFlowM3h, Qp, 2e-2, "primary flow on the hp curve");
-    near(scenPipe(s, "q1").flowM3h, Qp, 2e-2, "q1");
-    near(scenPipe(s, "s2").flowM3h, Qs, 2e-2, "secondary flow on the ps curve");
-    near(scenEm(s, "fc").flowM3h, q1, 3e-2, "fan coil");
-    near(scenEm(s, "hl").flowM3h, q2, 3e-2, "heat load");
+    near(s.heatSourceFlowM3h, Qp, SIM, "primary flow on the hp curve");
+    near(scenPipe(s, "q1").flowM3h, Qp, SIM, "q1");
+    near(scenPipe(s, "s2").flowM3h, Qs, SIM, "secondary flow on the ps curve");
+    near(scenEm(s, "fc").flowM3h, q1, SIM, "fan coil");
+    near(scenEm(s, "hl").flowM3h, q2, SIM, "heat load");
   });
 
   it("simulated energy balance: heat given by the source ρ·cp·Q·(45 − t_return) = Σ emitter outputs (first law, no pipe losses in the contract)", () => {
@@ -347,7 +369,7 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
     const sum = s.emitters.reduce((a: number, e: AnyR) => a + e.outputW, 0);
     const src = W40.rho * W40.cp * (s.heatSourceFlowM3h / 3600) * (45 - s.heatSourceReturnC);
     expect(sum).toBeGreaterThan(1000);
-    near(src, sum, 2e-2, "source heat vs emitted heat");
+    near(src, sum, 1e-3, "source heat vs emitted heat");
   });
 
   // The secondary mixes down to 43.6 °C: a warning (header.primary-low) names the header and the heat source.
@@ -355,8 +377,8 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
     const r3 = run(caseA(6));
     const qp = flowOf(6000, 10, W40);
     expect(qp).toBeLessThan(qSec);
-    near(mode(r3).heatSourceFlowM3h, qp, 3e-3, "primary");
-    near(pipeR(r3, "s2").flowM3h, qSec, 3e-3, "secondary unchanged by the primary");
+    near(mode(r3).heatSourceFlowM3h, qp, FLOW, "primary");
+    near(pipeR(r3, "s2").flowM3h, qSec, FLOW, "secondary unchanged by the primary");
     expect(naming(r3, "llh").length + naming(r3, "hp").filter((f: AnyR) => !/no-strainer|no-isolation|no-expansion|no-safety/.test(f.code)).length).toBeGreaterThan(0);
   });
 });
@@ -425,44 +447,44 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
   const r = run(caseB());
   const qRated = flowOf(6000, 10, PG); // 6000/(1018.4·3900·10)·3600 = 0.54383 m³/h
 
-  it("fluid properties at the mean 40 °C are the glycol's (ASHRAE PG 30 % vol, refs §2.2): ρ 1018.4 ±0.5 %, cp 3900 ±1.5 %", () => {
+  it("fluid properties at the mean 40 °C are the glycol's (ASHRAE PG 30 % vol, refs §2.2): ρ 1018.4 ±0.1 %, cp 3900 ±0.3 % (table rounding)", () => {
     expect(r.fluid.temperatureC).toBeCloseTo(40, 9);
-    near(r.fluid.densityKgM3, 1018.4, 5e-3, "ρ");
-    near(r.fluid.specificHeatJkgK, 3900, 1.5e-2, "cp");
+    near(r.fluid.densityKgM3, 1018.4, 1e-3, "ρ");
+    near(r.fluid.specificHeatJkgK, 3900, 3e-3, "cp");
   });
 
   it("heating mode: diverter to the buffer — h1/h2 carry the primary, cylinder pipes c1/c2 dry", () => {
     near(qRated, 0.54383, 2e-4, "hand");
-    near(pipeR(r, "h1").flowM3h, qRated, 2e-2, "h1 (±2 %: glycol ρ·cp datasets differ ~1.5 %)");
-    near(pipeR(r, "h2").flowM3h, qRated, 2e-2, "h2");
+    near(pipeR(r, "h1").flowM3h, qRated, GLYCOL, "h1");
+    near(pipeR(r, "h2").flowM3h, qRated, GLYCOL, "h2");
     dry(pipeR(r, "c1").flowM3h, "c1");
     dry(pipeR(r, "c2").flowM3h, "c2");
   });
 
   it("heating mode: secondary zones at design with glycol: r1 1500/(ρcp·10), r2 1000/(ρcp·10); secondary pump 'ps'", () => {
-    near(pipeR(r, "z1b").flowM3h, flowOf(1500, 10, PG), 2e-2, "r1");
-    near(pipeR(r, "z2b").flowM3h, flowOf(1000, 10, PG), 2e-2, "r2");
-    near(pipeR(r, "s2").flowM3h, flowOf(2500, 10, PG), 2e-2, "secondary main");
+    near(pipeR(r, "z1b").flowM3h, flowOf(1500, 10, PG), GLYCOL, "r1");
+    near(pipeR(r, "z2b").flowM3h, flowOf(1000, 10, PG), GLYCOL, "r2");
+    near(pipeR(r, "s2").flowM3h, flowOf(2500, 10, PG), GLYCOL, "secondary main");
     expect(circ(r, "r1").pump).toBe("ps");
   });
 
   it("hot-water mode: diverter to the cylinder — c1/c2 and the heat source carry rated 6 kW/(ρcp·10 K); h1/h2 dry", () => {
     const hw = mode(r, "hot-water");
     expect(hw).toBeDefined();
-    near(pipeR(r, "c1", "hot-water").flowM3h, qRated, 2e-2, "c1");
-    near(hw.heatSourceFlowM3h, qRated, 2e-2, "heat source");
+    near(pipeR(r, "c1", "hot-water").flowM3h, qRated, GLYCOL, "c1");
+    near(hw.heatSourceFlowM3h, qRated, GLYCOL, "heat source");
     dry(pipeR(r, "h1", "hot-water").flowM3h, "h1");
     dry(pipeR(r, "h2", "hot-water").flowM3h, "h2");
     // circuit through the coil: hp Kv 3 + diverter Kvs 5 + coil Kv 2.5 + pipes (ρ of the glycol in the Kv law)
-    near(circ(r, "cyl", "hot-water").pressureDropKpa, priHw(qRated, PG), 3e-2, "coil circuit Δp");
+    near(circ(r, "cyl", "hot-water").pressureDropKpa, priHw(qRated, PG), 2 * GLYCOL, "coil circuit Δp");
   });
 
   it("reheat time uses the STORED water, not the primary glycol: 150 L · ρ_w·cp_w(30 °C) · 40 K / 6 kW = 69.35 min (Q = m·cp·ΔT; water refs §1.1 at the store mean 30 °C)", () => {
     // min(rated 6 kW, coil 10 kW) = 6 kW; potable water in the cylinder: ρ 995.649, cp 4179.8 at (10+50)/2
     const hand = (0.15 * 995.649 * 4179.8 * 40) / 6000 / 60;
     near(hand, 69.35, 1e-3, "hand");
-    // with the glycol's ρ·cp (1018.4·3900) it would be 66.2 min (−4.5 %): tolerance 1.5 % tells them apart
-    near(r.hotWater.reheatMinutes, hand, 1.5e-2, "reheatMinutes");
+    // with the glycol's ρ·cp (1018.4·3900) it would be 66.2 min (−4.5 %); ±0.1 %: water ρ·cp at the store mean vs the 30 °C table point (measured 6e-5)
+    near(r.hotWater.reheatMinutes, hand, 1e-3, "reheatMinutes");
   });
 
   it("simulated: the primary flow is the same whatever the zone valves do (buffer decouples): 'all zones open' = 'all zones shut' = 'only zv1 open' = hand intersection", () => {
@@ -471,7 +493,7 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
       const s = scen(r, name);
       expect(s, name).toBeDefined();
       expect(s.converged, name).toBe(true);
-      near(s.heatSourceFlowM3h, Q, 3e-2, `${name}: heat source`);
+      near(s.heatSourceFlowM3h, Q, GLYCOL, `${name}: heat source`);
     }
     const shut = scen(r, "all zones shut");
     dry(scenEm(shut, "r1").flowM3h, "r1 with all zones shut");
@@ -483,8 +505,8 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
     const s = scen(r, "hot water");
     expect(s).toBeDefined();
     const Q = bisect((q) => curveAt(HP_B, q) - priHw(q, PG), 0.01, 2.99);
-    near(s.heatSourceFlowM3h, Q, 3e-2, "heat source");
-    near(scenPipe(s, "c1").flowM3h, Q, 3e-2, "c1");
+    near(s.heatSourceFlowM3h, Q, GLYCOL, "heat source");
+    near(scenPipe(s, "c1").flowM3h, Q, GLYCOL, "c1");
     dry(scenPipe(s, "h1").flowM3h, "h1");
   });
 
@@ -493,14 +515,14 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
     expect(r.bypass).toBeNull();
     // Cu 28: d0 h1 h2 d1 = 8 m; Cu 22: c1 c2 s1 s2 s3 = 16 m; Cu 15: 2 × (1 + 4 + 5) = 20 m → 65.35 L
     const vs = 8 * litresPerM(26.2) + 16 * litresPerM(20.2) + 20 * litresPerM(13.6) + 3 + 50;
-    near(r.volume.systemL, vs, 1e-2, "system volume (radiator water volumes not given → 0)");
+    near(r.volume.systemL, vs, 1e-9, "system volume (radiators drawn with 0 L; same bores: exact)");
   });
 
   it("coil rated BELOW the heat source (coil 4 kW < 6 kW): reheat at the coil's 4 kW → 104.0 min (common practice: the lesser of source and coil output transfers)", () => {
     const rc = run(caseB({ coilKw: 4 }));
     const hand = (0.15 * 995.649 * 4179.8 * 40) / 4000 / 60;
     near(hand, 104.03, 1e-3, "hand");
-    near(rc.hotWater.reheatMinutes, hand, 1.5e-2, "reheatMinutes");
+    near(rc.hotWater.reheatMinutes, hand, 1e-3, "reheatMinutes");
   });
 
   // Second law: water at the highest flow temperature cannot bring the store above it. The heating design
@@ -586,8 +608,9 @@ describe("C — expansion vessel, EN 12828 Annex D (refs §8.1), PG 30 % vol, 10
     const vwr = Math.max(0.005 * vs, 3);
     const p0 = ev.recommendedPrechargeBar;
     const hand = ((eAshrae * vs + vwr) * 4.5) / (3.5 - p0);
-    // ±2.5 %: e differs 3.4 % between the two glycol datasets, V_e is ~55 % of the sum
-    near(ev.requiredVolumeL, hand, 2.5e-2, "requiredVolumeL");
+    // ±0.8 %: the hand e comes from the ASHRAE densities printed to 0.1 kg/m³ (±0.01 points on 1.39 %, 0.7 %),
+    // and V_e is ~55 % of the sum (measured 0.4 %); Melinder's e (+3.4 %) would be 1.9 % off and fail
+    near(ev.requiredVolumeL, hand, 8e-3, "requiredVolumeL");
     expect(ev.providedVolumeL).toBe(25);
     expect(ev.ok).toBe(ev.requiredVolumeL <= 25);
   });
@@ -666,8 +689,8 @@ describe("D — UFH loops on a manifold: flows and the EN 1264-2 surface-tempera
   });
 
   it("loop flows q = P/(ρcp·5 K) at the 37.5 °C mean (refs §10), commons carry the sum", () => {
-    for (const [id, w] of [["l1", 1200], ["l2", 600], ["l3", 360], ["l4", 360], ["l5", 500]] as const) near(partR(r, id).flowM3h, flowOf(w, 5, W375), 3e-3, id);
-    near(pipeR(r, "fm").flowM3h, flowOf(3020, 5, W375), 3e-3, "fm");
+    for (const [id, w] of [["l1", 1200], ["l2", 600], ["l3", 360], ["l4", 360], ["l5", 500]] as const) near(partR(r, id).flowM3h, flowOf(w, 5, W375), FLOW, id);
+    near(pipeR(r, "fm").flowM3h, flowOf(3020, 5, W375), FLOW, "fm");
   });
 
   it("l1 needs 30.6 °C at the floor > 29 °C: ok false and a finding naming l1", () => {
@@ -732,8 +755,8 @@ describe("E1 — check valve across the radiator", () => {
   // treated pumps as loss-free here shared the return flow backwards through the valve: 0.0565 m³/h.)
   it("DESIGN mode, drawn AGAINST the pressure (b on the supply tee): it passes nothing; heat source carries the radiator's design flow", () => {
     const r = run(caseE(false));
-    near(pipeR(r, "p2").flowM3h, flowOf(2000, 10, W40), 3e-3, "design radiator");
-    near(mode(r).heatSourceFlowM3h, flowOf(2000, 10, W40), 3e-3, "design heat source");
+    near(pipeR(r, "p2").flowM3h, flowOf(2000, 10, W40), FLOW, "design radiator");
+    near(mode(r).heatSourceFlowM3h, flowOf(2000, 10, W40), FLOW, "design heat source");
     dry(pipeR(r, "x1").flowM3h, "design x1");
   });
   it("SIMULATED, drawn AGAINST the pressure: it passes nothing; the pump meets the radiator loop alone", () => {
@@ -742,8 +765,8 @@ describe("E1 — check valve across the radiator", () => {
     expect(s.converged).toBe(true);
     dry(scenPipe(s, "x1").flowM3h, "simulated x1 (check valve shut)");
     const Q = bisect((q) => curveAt(HP_E, q) - mainsE(q) - radBr(q), 0.01, 2.99);
-    near(s.heatSourceFlowM3h, Q, 2e-2, "heat source");
-    near(scenEm(s, "rad").flowM3h, Q, 2e-2, "radiator");
+    near(s.heatSourceFlowM3h, Q, SIM, "heat source");
+    near(scenEm(s, "rad").flowM3h, Q, SIM, "radiator");
   });
 
   it("drawn WITH the pressure (a on the supply tee): it opens and short-circuits most of the flow — hand split of two parallel branches at equal Δp", () => {
@@ -753,9 +776,9 @@ describe("E1 — check valve across the radiator", () => {
     const Q = bisect((q) => curveAt(HP_E, q) - mainsE(q) - split(q, radBr, cvBr)[2], 0.01, 2.99);
     const [qRad, qCv] = split(Q, radBr, cvBr);
     expect(qCv).toBeGreaterThan(qRad);
-    near(s.heatSourceFlowM3h, Q, 2e-2, "heat source");
-    near(scenPipe(s, "x1").flowM3h, qCv, 3e-2, "check-valve branch");
-    near(scenEm(s, "rad").flowM3h, qRad, 3e-2, "radiator");
+    near(s.heatSourceFlowM3h, Q, SIM, "heat source");
+    near(scenPipe(s, "x1").flowM3h, qCv, SIM, "check-valve branch");
+    near(scenEm(s, "rad").flowM3h, qRad, SIM, "radiator");
   });
 });
 
@@ -789,8 +812,8 @@ describe("E2 — isolation valve drawn shut on one of two branches", () => {
   });
   it("branch B gets no design flow; branch A and the heat source carry rA's design flow only (the valve is a closed link, contract table)", () => {
     for (const id of ["b1", "b2", "b3"]) dry(pipeR(r, id).flowM3h, id, true);
-    near(pipeR(r, "a2").flowM3h, flowOf(1500, 10, W40), 3e-3, "branch A");
-    near(mode(r).heatSourceFlowM3h, flowOf(1500, 10, W40), 3e-3, "heat source");
+    near(pipeR(r, "a2").flowM3h, flowOf(1500, 10, W40), FLOW, "branch A");
+    near(mode(r).heatSourceFlowM3h, flowOf(1500, 10, W40), FLOW, "heat source");
   });
   it("the unserved radiator rB is named by a warning/error (its heat load cannot be met)", () => {
     expect(naming(r, "rB").length + naming(r, "ivB").length).toBeGreaterThan(0);
@@ -839,7 +862,7 @@ describe("E3 — zone valves + differential bypass set at 8 kPa: 'only zv1 open'
   it("design: zone Δp 2.3 kPa < 8 kPa → bypass shut at design, zones at design flow", () => {
     expect(zoneZ(flowOf(1500, 10, W40))).toBeLessThan(8);
     dry(pipeR(r, "y1").flowM3h, "bypass at design");
-    near(pipeR(r, "a1").flowM3h, flowOf(1500, 10, W40), 3e-3, "zone 1");
+    near(pipeR(r, "a1").flowM3h, flowOf(1500, 10, W40), FLOW, "zone 1");
   });
   it("the default scenario list names 'only zv1 open' and 'only zv2 open'", () => {
     const names = r.scenarios.map((s: AnyR) => s.name);
@@ -859,17 +882,17 @@ describe("E3 — zone valves + differential bypass set at 8 kPa: 'only zv1 open'
     };
     const b = bisect(resid, 0, 2.5);
     const q1 = bisect((q) => zoneZ(q) - bypassZ(b), 0, 3);
-    near(scenEm(s, "r1").flowM3h, q1, 3e-2, "zone 1 flow");
-    near(scenPart(s, "bp").flowM3h, b, 3e-2, "bypass flow");
-    near(s.heatSourceFlowM3h, q1 + b, 3e-2, "heat source = zone + bypass");
+    near(scenEm(s, "r1").flowM3h, q1, SIM, "zone 1 flow");
+    near(scenPart(s, "bp").flowM3h, b, SIM, "bypass flow");
+    near(s.heatSourceFlowM3h, q1 + b, SIM, "heat source = zone + bypass");
     dry(scenEm(s, "r2").flowM3h, "r2 shut");
-    near(scenPart(s, "bp").pressureDropKpa, bypassZ(b) - cuDp(b, "15", 1, W40), 3e-2, "bypass Δp ≈ opening");
+    near(scenPart(s, "bp").pressureDropKpa, bypassZ(b) - cuDp(b, "15", 1, W40), SIM, "bypass Δp ≈ opening");
   });
   it("'all zones shut': all flow through the bypass at the pump/bypass intersection; minFlowMet vs 0.3 m³/h", () => {
     const s = scen(r, "all zones shut");
     const Q = bisect((q) => curveAt(HP_Z, q) - mainsZ(q) - bypassZ(q), 0.01, 2.99);
-    near(s.heatSourceFlowM3h, Q, 3e-2, "heat source");
-    near(r.bypass.heatSourceFlowAllZonesClosedM3h, Q, 3e-2, "bypass section");
+    near(s.heatSourceFlowM3h, Q, SIM, "heat source");
+    near(r.bypass.heatSourceFlowAllZonesClosedM3h, Q, SIM, "bypass section");
     expect(r.bypass.minFlowMet).toBe(Q >= 0.3);
   });
 });
@@ -894,13 +917,13 @@ describe("F — ethylene glycol 20 % by volume (≈ 21.8 % by mass: 20·1.113/(2
   const r = run(caseF(eg, -3));
   // Melinder (refs §2.3) at 40 °C, interpolated to 21.8 % mass between 20 % and 30 %:
   //   ρ 1016.4 + 0.18·(1028.8−1016.4) = 1018.6; cp 3933 − 0.18·(3933−3775) = 3905; μ 1.01 + 0.18·0.28 = 1.06 mPa·s
-  it("ρ ≈ 1018.6 (±0.5 %), cp ≈ 3905 (±1.5 %), ν ≈ 1.04e-6 m²/s (±10 %) at the 40 °C mean — EG, NOT PG or water", () => {
+  it("ρ ≈ 1018.6 (±0.5 %), cp ≈ 3905 (±1.5 %), ν ≈ 1.04e-6 m²/s (±2 %) at the 40 °C mean — EG, NOT PG or water", () => {
     near(r.fluid.densityKgM3, 1018.6, 5e-3, "ρ");
     near(r.fluid.specificHeatJkgK, 3905, 1.5e-2, "cp");
-    near(r.fluid.kinematicViscosityM2s, 1.06e-3 / 1018.6, 0.1, "ν");
+    near(r.fluid.kinematicViscosityM2s, 1.06e-3 / 1018.6, 2e-2, "ν");
   });
   it("design flow with the mixture's ρ·cp: 4000/(1018.6·3905·10) = 0.3620 m³/h", () => {
-    near(pipeR(r, "f").flowM3h, flowOf(4000, 10, { rho: 1018.6, cp: 3905, nu: 0 }), 2e-2, "flow");
+    near(pipeR(r, "f").flowM3h, flowOf(4000, 10, { rho: 1018.6, cp: 3905, nu: 0 }), 1.5e-2, "flow");
   });
   it("freezing ≈ −9 °C (AEG 20 % vol −8.98 °C; ASHRAE mass table interpolated −9.0 °C, refs §2.1): site −3 °C → no frost warning", () => {
     expect(serious(r).filter((f: AnyR) => /frost|glycol/.test(f.code))).toEqual([]);
@@ -911,10 +934,10 @@ describe("F — ethylene glycol 20 % by volume (≈ 21.8 % by mass: 20·1.113/(2
     expect(f.length).toBeGreaterThan(0);
     expect(f.some((x: AnyR) => x.refs.includes("hp"))).toBe(true);
   });
-  it("EG 0 % is water: freezes at 0 °C → site −2 °C gives a frost warning; properties equal water's at 40 °C (±0.1 %)", () => {
+  it("EG 0 % is water: freezes at 0 °C → site −2 °C gives a frost warning; properties equal water's at 40 °C (±0.05 %)", () => {
     const r3 = run(caseF({ kind: "ethylene-glycol", percentByVolume: 0 }, -2));
     expect(serious(r3).filter((f: AnyR) => /frost|glycol/.test(f.code)).length).toBeGreaterThan(0);
-    near(r3.fluid.densityKgM3, W40.rho, 1e-3, "ρ");
+    near(r3.fluid.densityKgM3, W40.rho, 5e-4, "ρ");
   });
   it("EG 20 % expands more than water between 10 and 45 °C (maxFlowTemperatureC null → design flow 45 °C): e > water's 0.958 % (refs §1.4)", () => {
     const d = caseF(eg, null);
@@ -949,32 +972,20 @@ function small(): Json {
     ],
   );
 }
-/** ok:false with an issue whose path starts with `path` and whose message names it, or ok:true with a non-info finding naming `ref`. */
-function rejectedOrFlagged(d: unknown, path: string, ref: string | null): AnyR {
-  const out = raw(d);
-  if (!out.ok) {
-    expect(out.issues.some((i: AnyR) => i.path.startsWith(path) && i.message.includes(path)), JSON.stringify(out.issues)).toBe(true);
-    return out;
-  }
-  const hit = serious(out.results).filter((f: AnyR) => ref === null || f.refs.includes(ref));
-  expect(hit.length, JSON.stringify(out.results.findings)).toBeGreaterThan(0);
-  return out;
-}
-
 describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infinity/throw", () => {
   it("baseline document is clean enough: calculates", () => {
     run(small());
   });
 
   // lib/schematic/schema.ts: "a zero/negative length is an input.* finding" (zero: info, treated as a direct joint).
-  it("zero-length pipe → input.pipe-length finding naming it (or issue at pipes[1].lengthM); its Δp is 0 or null, never NaN", () => {
+  it("zero-length pipe → one input.pipe-length warning naming it; a direct joint: Δp exactly 0, flow still the load's", () => {
     const d = small();
     d.pipes[1].lengthM = 0;
-    const out = rejectedOrFlagged(d, "pipes[1].lengthM", "p2");
-    if (out.ok) {
-      const p = pipeR(out.results, "p2");
-      expect(p.pressureDropKpa === null || p.pressureDropKpa === 0).toBe(true);
-    }
+    const r = run(d);
+    expect(findingsAbout(r, "input.pipe-length")).toEqual([["warning", ["p2"]]]);
+    const p = pipeR(r, "p2");
+    expect(p.pressureDropKpa).toBe(0);
+    near(p.flowM3h, flowOf(2000, 10, W40), FLOW, "p2 flow");
   });
 
   it("a load's own deltaTK 0 → issue at parts[1].props.deltaTK (schema: ≥ 0.5 K), never an infinite flow", () => {
@@ -994,16 +1005,19 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     expect(naming(r, "rad").length).toBeGreaterThan(0);
   });
 
-  it("heat-pump's OWN pumpCurve rising with flow → pump.curve-rising naming hp or issue at parts[0].props.pumpCurve", () => {
+  it("heat-pump's OWN pumpCurve rising with flow (two rising segments) → ONE pump.curve-rising warning naming hp", () => {
     const d = small();
     d.parts[0].props.pumpCurve = [[0, 10], [1, 20], [2, 30]];
-    rejectedOrFlagged(d, "parts[0].props.pumpCurve", "hp");
+    expect(findingsAbout(run(d), "pump.curve-rising")).toEqual([["warning", ["hp"]]]);
   });
 
-  it("pump curve with flows not ascending → issue at parts[0].props.pumpCurve or a finding naming hp", () => {
+  it("pump curve with flows not ascending → pump.curve-invalid warning naming hp; its head at the design flow unknown (null), not ok", () => {
     const d = small();
     d.parts[0].props.pumpCurve = [[0, 30], [2, 8], [1, 22]];
-    rejectedOrFlagged(d, "parts[0].props.pumpCurve", "hp");
+    const r = run(d);
+    expect(findingsAbout(r, "pump.curve-invalid")).toEqual([["warning", ["hp"]]]);
+    expect(mode(r).pump.availableHeadKpa).toBeNull();
+    expect(mode(r).pump.ok).toBe(false);
   });
 
   const island = () => {
@@ -1019,7 +1033,7 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     expect(r.emitters.find((e: AnyR) => e.id === "hl2").ok === true).toBe(false);
   });
   it("the main circuit is sized as before when a disconnected island exists", () => {
-    near(mode(island()).heatSourceFlowM3h, flowOf(3000, 10, W40), 3e-3, "main circuit");
+    near(mode(island()).heatSourceFlowM3h, flowOf(3000, 10, W40), FLOW, "main circuit");
   });
 
   it("a port with two pipes on a load's return → port.two-pipes naming the part and both pipes", () => {
@@ -1075,16 +1089,24 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     const r = run(d);
     const q = partR(r, "hl").flowM3h;
     expect(q === null || Math.abs(q) <= 1e-9).toBe(true);
-    near(partR(r, "rad").flowM3h, flowOf(1000, 10, W40), 3e-3, "rad");
+    near(partR(r, "rad").flowM3h, flowOf(1000, 10, W40), FLOW, "rad");
   });
 
-  it("design ΔT 0 with a cylinder and glycol (both modes) → flows null with input.delta-t, never Infinity", () => {
+  it("design ΔT 0 with a cylinder and glycol (both modes) → an input.delta-t error for the document, no mode sized, no scenario run", () => {
     const d = caseB();
     d.design.returnTemperatureC = 45;
-    const out = raw(d);
-    if (out.ok) {
-      expect(out.results.findings.some((f: AnyR) => f.code === "input.delta-t")).toBe(true);
-      for (const m of out.results.modes) for (const p of m.pipes) expect(p.flowM3h === null || p.flowM3h === 0).toBe(true);
-    } else expect(out.issues.some((i: AnyR) => i.path.startsWith("design"))).toBe(true);
+    const r = run(d);
+    expect(findingsAbout(r, "input.delta-t")).toEqual([["error", []]]);
+    expect(r.modes).toEqual([]);
+    expect(r.scenarios).toEqual([]);
+    expect(r.bypass).toBeNull();
+  });
+});
+
+describe("Sweep — one finding per fault", () => {
+  it("no results document above names the same code and refs twice", () => {
+    expect(ALL_RESULTS.length).toBeGreaterThan(30);
+    const repeats = ALL_RESULTS.flatMap((r: AnyR, i: number) => repeatedFindings(r.findings).map((x) => `doc #${i}: ${x}`));
+    expect(repeats).toEqual([]);
   });
 });

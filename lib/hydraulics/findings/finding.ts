@@ -14,14 +14,18 @@ export function finding(severity: Severity, code: string, message: string, refs:
 /** What a finding was found in: a design mode, or a simulated scenario (with its mode). */
 export type FindingContext = Pick<Finding, "mode" | "scenario">;
 
+const rank: Record<Severity, number> = { info: 0, warning: 1, error: 2 };
+
 /**
- * Collects findings; one collector per calculation (no module state). While
- * `within` runs, every finding added is tagged with that mode or scenario, so
- * the board can show the drawing in the state a finding belongs to.
+ * Collects findings; one collector per calculation (no module state). While `within` runs,
+ * a new finding is tagged with that mode or scenario, so the board can show the drawing in
+ * the state it belongs to. One finding per code and set of refs: a check that trips again for
+ * the same parts — in another mode or scenario — adds its message to the first finding (and
+ * raises its severity if higher) instead of repeating it, so a designer reads one fault once.
  */
 export class Findings {
   readonly list: Finding[] = [];
-  private seen = new Set<string>();
+  private byKey = new Map<string, { finding: Finding; messages: Set<string> }>();
   private context: FindingContext = {};
   within<T>(context: FindingContext, fn: () => T): T {
     const outer = this.context;
@@ -34,14 +38,25 @@ export class Findings {
   }
   /** `fields`: the design conditions the finding is about ("design.safetyValveBar"), so the board can link to them. */
   add(severity: Severity, code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]): void {
-    const { mode, scenario } = this.context;
-    const key = `${code}|${refs.join(",")}|${message}|${mode ?? ""}|${scenario ?? ""}`;
-    if (this.seen.has(key)) return;
-    this.seen.add(key);
-    const f = finding(severity, code, message, refs, fields);
-    if (mode) f.mode = mode;
-    if (scenario !== undefined) f.scenario = scenario;
-    this.list.push(f);
+    const key = `${code}|${[...refs].sort().join(",")}`;
+    const first = this.byKey.get(key);
+    if (!first) {
+      const { mode, scenario } = this.context;
+      const f = finding(severity, code, message, refs, fields);
+      if (mode) f.mode = mode;
+      if (scenario !== undefined) f.scenario = scenario;
+      this.byKey.set(key, { finding: f, messages: new Set([message]) });
+      this.list.push(f);
+      return;
+    }
+    const f = first.finding;
+    if (!first.messages.has(message)) {
+      first.messages.add(message);
+      f.message = `${f.message}; ${message}`;
+    }
+    if (rank[severity] > rank[f.severity]) f.severity = severity;
+    const more = (fields ?? []).filter((x) => !(f.fields ?? []).includes(x));
+    if (more.length > 0) f.fields = [...(f.fields ?? []), ...more];
   }
   error(code: string, message: string, refs: readonly string[] = [], fields?: readonly string[]) {
     this.add("error", code, message, refs, fields);

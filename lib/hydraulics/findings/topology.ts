@@ -28,10 +28,12 @@ export function topologyFindings(doc: Schematic, model: NetworkModel, f: Finding
     }
     const curve = part.type === "pump" ? part.props.curve : part.type === "heat-pump" || part.type === "boiler" ? part.props.pumpCurve : null;
     if (curve) {
-      for (const issue of pumpCurveIssues(curve)) {
-        const code = issue.startsWith("head rises") ? "pump.curve-rising" : "pump.curve-invalid";
-        f.warning(code, `${part.id}: pump curve ${issue}`, [part.id]);
-      }
+      // one finding per code and pump: a curve rising over two segments is one rising curve
+      const issues = pumpCurveIssues(curve);
+      const rising = issues.filter((m) => m.startsWith("head rises"));
+      const invalid = issues.filter((m) => !m.startsWith("head rises"));
+      if (rising.length) f.warning("pump.curve-rising", `${part.id}: pump curve ${rising.join("; ")}`, [part.id]);
+      if (invalid.length) f.warning("pump.curve-invalid", `${part.id}: pump curve ${invalid.join("; ")}`, [part.id]);
     }
   }
   const of = (...types: string[]) => doc.parts.filter((p) => types.includes(p.type));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { colebrook, darcyFrictionFactor, frictionFormulaValid, fullyRoughFrictionFactor, haaland, laminar, reynolds, swameeJain } from "./index";
+import { colebrookUnchecked } from "./colebrook";
+import { colebrook, darcyFrictionFactor, FRICTION_VALIDITY, frictionFormulaValid, fullyRoughFrictionFactor, haaland, laminar, reynolds, swameeJain } from "./index";
 
 const rel = (a: number, e: number) => Math.abs(a / e - 1);
 
@@ -118,5 +119,62 @@ describe("validity as data", () => {
     expect(frictionFormulaValid("swameeJain", 3000, 1e-4)).toBe(false);
     expect(frictionFormulaValid("swameeJain", 1e5, 0)).toBe(false);
     expect(frictionFormulaValid("colebrook", 1e5, 0)).toBe(true);
+  });
+});
+
+describe("stated validity ranges, each bound on both sides", () => {
+  // Colebrook and Haaland: turbulent Re 4e3…1e8, ε/D 0…0.05 (the Moody chart range, White Fig. 6.13);
+  // Swamee–Jain: Re 5e3…1e8, ε/D 1e-6…1e-2 (Swamee & Jain 1976); laminar: Re below 2300 (references §3.2).
+  const table: [keyof typeof FRICTION_VALIDITY, number, number, number, number][] = [
+    ["laminar", 0, 2300, 0, 1],
+    ["colebrook", 4000, 1e8, 0, 0.05],
+    ["swameeJain", 5000, 1e8, 1e-6, 1e-2],
+    ["haaland", 4000, 1e8, 0, 0.05],
+  ];
+  it.each(table)("%s: Re %d…%d, ε/D %d…%d", (method, reMin, reMax, rrMin, rrMax) => {
+    expect(FRICTION_VALIDITY[method]).toEqual({ reMin, reMax, relRoughnessMin: rrMin, relRoughnessMax: rrMax });
+    const rr = (rrMin + rrMax) / 2;
+    const re = (reMin + reMax) / 2;
+    expect(frictionFormulaValid(method, reMin, rr)).toBe(true);
+    expect(frictionFormulaValid(method, reMax, rr)).toBe(true);
+    expect(frictionFormulaValid(method, reMin * 0.99 - 1e-9, rr)).toBe(false);
+    expect(frictionFormulaValid(method, reMax * 1.01, rr)).toBe(false);
+    expect(frictionFormulaValid(method, re, rrMin)).toBe(true);
+    expect(frictionFormulaValid(method, re, rrMax)).toBe(true);
+    expect(frictionFormulaValid(method, re, rrMin * 0.99 - 1e-9)).toBe(false);
+    expect(frictionFormulaValid(method, re, rrMax * 1.01)).toBe(false);
+  });
+});
+
+describe("argument checks of every formula, on both sides of each limit", () => {
+  it.each([["colebrook", colebrook], ["swameeJain", swameeJain], ["haaland", haaland]] as const)("%s: Re > 0 and finite, 0 ≤ ε/D < 1", (_n, f) => {
+    expect(() => f(0, 1e-4)).toThrow(/^re must be > 0 and finite, got 0$/);
+    expect(() => f(Number.POSITIVE_INFINITY, 1e-4)).toThrow(/^re must be > 0 and finite, got Infinity$/);
+    expect(() => f(1e5, -1e-9)).toThrow(/^relRoughness must be in \[0, 1\), got -1e-9$/);
+    expect(() => f(1e5, 1)).toThrow(/^relRoughness must be in \[0, 1\), got 1$/);
+    expect(Number.isFinite(f(1e5, 0))).toBe(true);
+    expect(Number.isFinite(f(1e5, 0.5))).toBe(true);
+  });
+  it("laminar: Re > 0 and finite; fully rough: 0 < ε/D < 1", () => {
+    expect(() => laminar(0)).toThrow(/^re must be > 0 and finite, got 0$/);
+    expect(() => laminar(Number.POSITIVE_INFINITY)).toThrow(/re must be/);
+    expect(laminar(1e-3)).toBeCloseTo(64_000, 6);
+    expect(() => fullyRoughFrictionFactor(0)).toThrow(/^relRoughness must be in \(0, 1\), got 0$/);
+    expect(() => fullyRoughFrictionFactor(1)).toThrow(/relRoughness/);
+    expect(fullyRoughFrictionFactor(0.5)).toBeCloseTo(0.25 / Math.log10(0.5 / 3.7) ** 2, 12);
+  });
+  it("reynolds: v finite, D and ν > 0 and finite, the messages name the value", () => {
+    expect(() => reynolds(Number.NaN, 0.02, 1e-6)).toThrow(/^velocityMps must be finite, got NaN$/);
+    expect(() => reynolds(1, Number.POSITIVE_INFINITY, 1e-6)).toThrow(/^innerDiameterM must be > 0, got Infinity$/);
+    expect(() => reynolds(1, 0.02, -1e-6)).toThrow(/^kinematicViscosityM2s must be > 0, got -0.000001$/);
+    expect(reynolds(0, 0.02, 1e-6)).toBe(0);
+  });
+});
+
+describe("Colebrook from a warm start converges to the same root", () => {
+  it("a caller's guess of 1/√f (far or near) gives Colebrook(1e5, 1e-4) = 0.018513866 to 1e-12", () => {
+    const f = colebrook(1e5, 1e-4);
+    for (const guess of [1, 5, 7.349, 20]) expect(Math.abs(colebrookUnchecked(1e5, 1e-4, guess) / f - 1)).toBeLessThan(1e-12);
+    expect(Math.abs(f / 0.018513866 - 1)).toBeLessThan(1e-7);
   });
 });

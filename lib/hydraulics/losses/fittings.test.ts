@@ -68,3 +68,43 @@ describe("area changes (references.md §5.3, confirmed-in-search via fluids doct
     expect(() => suddenEnlargementK(1.2)).toThrow(/beta/);
   });
 });
+
+describe("the Crane table's bores and names, and the limits of each function on both sides", () => {
+  it("Sch 40 bores are ASME B36.10M inside diameters (inches, from memory; × 25.4 to the table's 0.01 mm)", () => {
+    const inches = [0.622, 0.824, 1.049, 1.38, 1.61, 2.067, 2.469, 3.068, 4.026, 5.047, 6.065, 7.981, 10.02, 11.938, 15.0, 16.876, 22.624];
+    CRANE_FT_TABLE.forEach((r, i) => expect(Math.abs(r.sch40InnerDiameterMm - inches[i]! * 25.4), r.nominal).toBeLessThan(0.006));
+    expect(CRANE_FT_TABLE.map((r) => r.nominal)).toEqual([
+      '1/2"', '3/4"', '1"', '1-1/4"', '1-1/2"', '2"', '2-1/2"', '3"', '4"', '5"', '6"', '8"', '10"', '12"', '16"', '18"', '24"',
+    ]);
+  });
+  it("between two bores the nearer in ratio wins: 18.0 mm → ½\" (0.027), 18.4 mm → ¾\" (0.025); √(15.8·20.93) = 18.185", () => {
+    expect(craneFt(18.0)).toBe(0.027);
+    expect(craneFt(18.4)).toBe(0.025);
+    expect(craneFt(1000)).toBe(0.012); // beyond the table: the largest size
+  });
+  it("craneFt refuses 0, negative and non-finite bores with the message naming the value", () => {
+    expect(() => craneFt(0)).toThrow(/^innerDiameterMm must be > 0, got 0$/);
+    expect(() => craneFt(-5)).toThrow(/innerDiameterMm/);
+    expect(() => craneFt(Number.POSITIVE_INFINITY)).toThrow(/innerDiameterMm/);
+    expect(craneFt(0.5)).toBeCloseTo(0.25 / Math.log10(0.045 / 0.5 / 3.7) ** 2, 12); // tiny bore, fully rough
+  });
+  it("fittingK: a reducer needs a bore > 0; an unknown type is refused by name", () => {
+    expect(() => fittingK("reducer", 0)).toThrow(/^innerDiameterMm must be > 0, got 0$/);
+    expect(() => fittingK("valve" as never, 20)).toThrow(/^type: unknown fitting type valve$/);
+  });
+  it("sumFittingsK: 0 and missing counts add nothing; NaN, Infinity and negatives are refused by name", () => {
+    expect(sumFittingsK({ elbow: 0, teeRun: undefined }, SCH40_ONE_INCH_MM)).toBe(0);
+    expect(sumFittingsK({ bend: 2, reducer: 1 }, SCH40_ONE_INCH_MM)).toBeCloseTo(2 * 0.322 + 0.21875, 9);
+    expect(() => sumFittingsK({ elbow: Number.NaN }, 20)).toThrow(/^fittings.elbow must be ≥ 0, got NaN$/);
+    expect(() => sumFittingsK({ teeRun: Number.POSITIVE_INFINITY }, 20)).toThrow(/fittings.teeRun/);
+  });
+  it("area changes: β = 1 is no change (K 0), above 1 or at 0 is refused; a tiny β is taken", () => {
+    expect(suddenContractionK(1)).toBe(0);
+    expect(suddenEnlargementK(1)).toBe(0);
+    expect(() => suddenContractionK(1.0001)).toThrow(/^beta must be in \(0, 1\], got 1.0001$/);
+    expect(() => suddenEnlargementK(0)).toThrow(/^beta must be in \(0, 1\], got 0$/);
+    expect(() => suddenContractionK(-0.5)).toThrow(/beta/);
+    expect(suddenContractionK(1e-6)).toBeCloseTo(0.5, 9);
+    expect(suddenEnlargementK(1e-6)).toBeCloseTo(1, 9);
+  });
+});

@@ -39,3 +39,29 @@ describe("Cv ↔ Kv (unit definitions: US gpm, psi)", () => {
     expect(cvToKv(1)).toBeCloseTo(0.865, 3);
   });
 });
+
+describe("Kv arguments: each check on both sides, the message naming the field and the value", () => {
+  const fns = {
+    kvPressureDropPa: (q: number, k: number, rho: number) => kvPressureDropPa(q, k, rho),
+    kvForPressureDrop: (q: number, dp: number, rho: number) => kvForPressureDrop(q, dp, rho),
+    kvDpDerivativePaPerM3h: (q: number, k: number, rho: number) => kvDpDerivativePaPerM3h(q, k, rho),
+  };
+  it.each(Object.entries(fns))("%s: flow must be finite; the second argument and ρ > 0 and finite", (name, f) => {
+    const second = name === "kvForPressureDrop" ? "dpPa" : "kv";
+    expect(() => f(Number.POSITIVE_INFINITY, 1, 1000)).toThrow(/^flowM3h must be finite, got Infinity$/);
+    expect(() => f(0.5, 0, 1000)).toThrow(new RegExp(`^${second} must be > 0 and finite, got 0$`));
+    expect(() => f(0.5, Number.POSITIVE_INFINITY, 1000)).toThrow(new RegExp(`^${second} must be > 0 and finite, got Infinity$`));
+    expect(() => f(0.5, 1, 0)).toThrow(/^densityKgM3 must be > 0 and finite, got 0$/);
+    expect(() => f(0.5, 1, -1000)).toThrow(/densityKgM3/);
+    expect(() => f(0.5, 1, Number.NaN)).toThrow(/densityKgM3/);
+    expect(Number.isFinite(f(0.5, 1e-9, 1e-9))).toBe(true); // just above the limits is taken
+  });
+  it("kvForPressureDrop ignores the flow's sign; the derivative is even in Q: 0.5 m³/h either way", () => {
+    expect(kvForPressureDrop(-0.6, 10_000, 1000)).toBeCloseTo(0.6 / Math.sqrt(0.1), 12);
+    expect(kvDpDerivativePaPerM3h(-0.5, 2.5, 1000)).toBeCloseTo(16_000, 9);
+    // ρ enters the derivative as ρ/1000: 980 kg/m³ → 0.98 × 16 kPa per m³/h
+    expect(kvDpDerivativePaPerM3h(0.5, 2.5, 980)).toBeCloseTo(0.98 * 16_000, 9);
+    // and the Kv for a drop as √(ρ/1000): 0.6 m³/h at 10 kPa of a 1018 kg/m³ glycol → 1.897·√1.018
+    expect(kvForPressureDrop(0.6, 10_000, 1018)).toBeCloseTo((0.6 / Math.sqrt(0.1)) * Math.sqrt(1.018), 12);
+  });
+});

@@ -61,7 +61,8 @@ export function sizeBypasses(ctx: EngineContext, heating: ModeRun | null): Bypas
         ];
         for (const [f, b] of pairs) {
           if (!c.passedFlow.includes(f) || !c.passedReturn.includes(b)) continue;
-          const dp = c.pressureDropKpa - (h[r.to]! - h[f]!) - (h[b]! - h[r.from]!);
+          // the circuit less what lies outside the bypass ends: the legs to and from them and the heat source's own loss
+          const dp = c.pressureDropKpa - (h[r.to]! - h[f]!) - (h[b]! - h[r.from]!) - c.rootDpKpa;
           if (Number.isFinite(dp)) zones = Math.max(zones ?? -Infinity, dp);
         }
       }

@@ -25,6 +25,8 @@ export interface TracedCircuit extends Omit<Circuit, "restsOn"> {
   side: number;
   rootLink: number | null;
   flowM3h: number;
+  /** the root heat source's own exchanger loss inside pressureDropKpa (0 for a pump part), kPa */
+  rootDpKpa: number;
   /** watched nodes (dp-bypass ends) on the flow and return legs */
   passedFlow: number[];
   passedReturn: number[];
@@ -131,7 +133,7 @@ function circuitOf(
   const root = rootOfSide.get(side) ?? null;
   const passedFlow: number[] = [];
   const passedReturn: number[] = [];
-  const base = { load: load.id, side, rootLink: root, flowM3h: load.flowM3h, passedFlow, passedReturn, index: false, excessKpa: null, balancingKv: null };
+  const base = { load: load.id, side, rootLink: root, flowM3h: load.flowM3h, rootDpKpa: 0, passedFlow, passedReturn, index: false, excessKpa: null, balancingKv: null };
   if (root === null) return { ...base, pump: null, path: [], pressureDropKpa: null };
   const flowLeg = walk(load.inNode, pf, passedFlow);
   const returnLeg = walk(load.outNode, pr, passedReturn);
@@ -160,7 +162,7 @@ function circuitOf(
     path[lead + flowLeg.length] = load.id;
     for (let i = 0; i < returnLeg.length; i++) path[lead + flowLeg.length + 1 + i] = returnLeg[i]!;
   }
-  return { ...base, pump: r.id, path, pressureDropKpa: Number.isFinite(dp) ? dp : null };
+  return { ...base, rootDpKpa: dpRoot, pump: r.id, path, pressureDropKpa: Number.isFinite(dp) ? dp : null };
 }
 
 function markIndex(ctx: EngineContext, circuits: TracedCircuit[]): void {

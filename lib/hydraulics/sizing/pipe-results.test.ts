@@ -10,6 +10,7 @@
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { Findings } from "@/lib/hydraulics/findings/finding";
+import { COPPER_EPS_MM, COPPER_ID_MM, pipeFlow, WATER } from "@/lib/hydraulics/testing/hand-calc";
 import { smallSystem } from "@/lib/hydraulics/testing/small-system";
 import { parseSchematic } from "@/lib/schematic/parse";
 import { createContext } from "./context";
@@ -35,12 +36,22 @@ describe("no-flow pipes in design results", () => {
     expect(pev.velocityMps).toBe(0);
     expect(pev.pressureDropKpa).toBe(0);
     expect(pev.gradientPaPerM).toBe(0);
-    // a flowing pipe keeps its numbers
+    // a flowing pipe keeps its numbers: 0.26 m³/h in Cu 22 (d 20.2 mm) with water at the 42.5 °C mean,
+    // IAPWS values of references §1.1 taken linearly between 40 and 45 °C (ν to 0.15 %):
+    // v 0.2254 m/s, Re ≈ 7,230, Colebrook f ≈ 0.0340 (±0.2 % on Re, ±0.05 % on f)
+    const w = { rho: (WATER[40].rho + WATER[45].rho) / 2, cp: 0, nu: (WATER[40].nu + WATER[45].nu) / 2 };
+    const hand = pipeFlow(0.26, COPPER_ID_MM["22"], COPPER_EPS_MM, 1, w);
     const p1 = rows.get("p1")!;
-    expect(p1.reynolds!).toBeGreaterThan(4000);
-    expect(p1.frictionFactor!).toBeGreaterThan(0.01);
-    expect(p1.frictionFactor!).toBeLessThan(0.1);
-    expect(p1.suggestedSize).not.toBeNull();
+    expect(Math.abs(p1.velocityMps! / hand.v - 1)).toBeLessThan(1e-9);
+    expect(Math.abs(p1.reynolds! / hand.re - 1)).toBeLessThan(2e-3);
+    expect(Math.abs(p1.frictionFactor! / hand.f - 1)).toBeLessThan(5e-4);
+    // suggested: the smallest copper size within the small system's 1 m/s and 300 Pa/m — 10 mm (d 8.8 mm,
+    // references §4.1) runs at 1.19 m/s; 15 mm at 0.50 m/s and ≈ 280 Pa/m
+    expect(pipeFlow(0.26, 8.8, COPPER_EPS_MM, 1, w).v).toBeGreaterThan(1);
+    const cu15 = pipeFlow(0.26, COPPER_ID_MM["15"], COPPER_EPS_MM, 1, w);
+    expect(cu15.v).toBeLessThan(1);
+    expect(cu15.gradientPaPerM).toBeLessThan(300 * 0.97); // clear of the limit by more than the method difference
+    expect(p1.suggestedSize).toBe("15");
     // one finding for all of them, naming them
     const nf = findings.list.filter((f) => f.code === "pipe.no-flow");
     expect(nf).toHaveLength(1);

@@ -6,9 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
-import { fluidProperties } from "@/lib/hydraulics/fluids";
-import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { findPipeSize, pipePressureDrop } from "@/lib/hydraulics/pipes";
+import { bisect, COPPER_ID_MM, copperDpKpa, en12828NominalL, en442LogW, kvDpKpa, kvForDp, litresPerM, WATER, WATER_EXPANSION_FROM_10C, type Water } from "@/lib/hydraulics/testing/hand-calc";
 import { resultsSchema, type Results } from "@/lib/schematic/results";
 import { smallSystem } from "@/lib/hydraulics/testing/small-system";
 
@@ -18,25 +16,23 @@ function run(doc: unknown = smallSystem()): Results {
   resultsSchema.parse(r.results);
   return r.results;
 }
+const rel = (a: number | null | undefined, b: number) => Math.abs((a ?? NaN) / b - 1);
 
-// Hand calculation, step by step, from the published formulas.
-const water = fluidProperties({ kind: "water" }, 42.5); // mean of 45/40
-const flow = (w: number) => (w / (water.densityKgM3 * water.specificHeatJkgK * 5)) * 3600; // m³/h
-const kvDp = (q: number, kv: number) => kvPressureDropPa(q, kv, water.densityKgM3) / 1000; // kPa
-const pipeDp = (size: string, lengthM: number, q: number) => {
-  const row = findPipeSize("copper", size)!;
-  return (
-    pipePressureDrop({
-      flowM3s: q / 3600,
-      innerDiameterM: row.innerDiameterMm / 1000,
-      lengthM,
-      roughnessM: row.roughnessMm / 1000,
-      densityKgM3: water.densityKgM3,
-      kinematicViscosityM2s: water.kinematicViscosityM2s,
-      sumK: 0,
-    }).dpPa / 1000
-  );
+// Hand calculation, step by step, from the published formulas (testing/hand-calc.ts), none of the
+// engine's own. Water at the 42.5 °C mean of 45/40 °C: IAPWS values of references §1.1 taken
+// linearly between 40 and 45 °C — the table's curvature leaves 3e-5 on ρ·cp and 0.15 % on ν,
+// which moves a Colebrook Δp by < 0.03 %.
+const water: Water = {
+  rho: (WATER[40].rho + WATER[45].rho) / 2,
+  cp: (WATER[40].cp + WATER[45].cp) / 2,
+  nu: (WATER[40].nu + WATER[45].nu) / 2,
 };
+// Tolerances: FLOW 5e-4 (ρ·cp of the engine's water vs the table, measured 2e-4), DP 1e-3 (q² and ν).
+const FLOW = 5e-4;
+const DP = 1e-3;
+const flow = (w: number) => (w / (water.rho * water.cp * 5)) * 3600; // m³/h
+const kvDp = (q: number, kv: number) => kvDpKpa(q, kv, water.rho);
+const pipeDp = (size: "15" | "22", lengthM: number, q: number) => copperDpKpa(q, size, lengthM, water);
 const q1 = flow(1000);
 const q2 = flow(500);
 const q = q1 + q2;
@@ -52,17 +48,19 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   it("load flows follow Q = P/(ρ·cp·ΔT): 1000 W at 5 K ≈ 0.1738 m³/h", () => {
     expect(q1).toBeCloseTo(0.17383, 4);
     const byId = new Map(heating.parts.map((p) => [p.id, p]));
-    expect(byId.get("r1")!.flowM3h).toBeCloseTo(q1, 8);
-    expect(byId.get("r2")!.flowM3h).toBeCloseTo(q2, 8);
-    expect(heating.heatSourceFlowM3h).toBeCloseTo(q, 8);
+    expect(rel(byId.get("r1")!.flowM3h, q1)).toBeLessThan(FLOW);
+    expect(rel(byId.get("r2")!.flowM3h, q2)).toBeLessThan(FLOW);
+    expect(rel(heating.heatSourceFlowM3h, q)).toBeLessThan(FLOW);
   });
 
   it("pipe flows by continuity, pressure drops by Darcy–Weisbach", () => {
     const pipes = new Map(heating.pipes.map((p) => [p.id, p]));
-    expect(pipes.get("p2")!.flowM3h).toBeCloseTo(q1, 8);
-    expect(pipes.get("p3")!.flowM3h).toBeCloseTo(q2, 8);
-    expect(pipes.get("p1")!.flowM3h).toBeCloseTo(q, 8);
-    expect(pipes.get("p3")!.pressureDropKpa).toBeCloseTo(pipeDp("15", 8, q2), 7);
+    expect(rel(pipes.get("p2")!.flowM3h, q1)).toBeLessThan(FLOW);
+    expect(rel(pipes.get("p3")!.flowM3h, q2)).toBeLessThan(FLOW);
+    expect(rel(pipes.get("p1")!.flowM3h, q)).toBeLessThan(FLOW);
+    // p3 runs at Re ≈ 3,590, in the transition zone, where f moves 0.7× as fast as Re: the 0.15 % of the
+    // interpolated ν becomes 0.1 % on f (measured 0.19 % in all) → 3e-3
+    expect(rel(pipes.get("p3")!.pressureDropKpa, pipeDp("15", 8, q2))).toBeLessThan(3e-3);
     expect(Math.abs(pipes.get("pev")!.flowM3h!)).toBeLessThan(1e-9); // the vessel leg carries nothing
   });
 
@@ -70,37 +68,41 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
     const c1 = heating.circuits.find((c) => c.load === "r1")!;
     const c2 = heating.circuits.find((c) => c.load === "r2")!;
     // Hand numbers: r1 ≈ 4.786 kPa (valve 2.995 kPa dominates), r2 ≈ 2.318 kPa.
-    expect(c1.pressureDropKpa).toBeCloseTo(circuit1, 6);
-    expect(c2.pressureDropKpa).toBeCloseTo(circuit2, 6);
+    expect(rel(c1.pressureDropKpa, circuit1)).toBeLessThan(DP);
+    expect(rel(c2.pressureDropKpa, circuit2)).toBeLessThan(DP);
     expect(circuit1).toBeCloseTo(4.786, 2);
     expect(c1.index).toBe(true);
     expect(c2.index).toBe(false);
-    expect(c2.excessKpa).toBeCloseTo(circuit1 - circuit2, 6);
-    // Kv = q·√((ρ/1000)/(Δp/100 kPa)) — the valve that burns the excess at r2's flow.
-    const kv = q2 * Math.sqrt(water.densityKgM3 / 1000 / ((circuit1 - circuit2) / 100));
-    expect(c2.balancingKv).toBeCloseTo(kv, 6);
+    expect(rel(c2.excessKpa, circuit1 - circuit2)).toBeLessThan(2 * DP);
+    // Kv = q·√((ρ/1000)/(Δp/100 kPa)) — the valve that burns the excess at r2's flow (IEC 60534-1).
+    expect(rel(c2.balancingKv, kvForDp(q2, circuit1 - circuit2, water.rho))).toBeLessThan(DP);
     expect(c1.path).toEqual(["p7", "hp", "p1", "p2", "r1", "p4", "p6a", "p6b", "p6c"]);
   });
 
   it("pump: required = index circuit, available read off the curve at design flow", () => {
     expect(heating.pump!.id).toBe("pump");
-    expect(heating.pump!.requiredHeadKpa).toBeCloseTo(circuit1, 6);
-    expect(heating.pump!.availableHeadKpa).toBeCloseTo(40 - 10 * q, 6); // first segment: 40 → 35 kPa over 0.5 m³/h
+    expect(rel(heating.pump!.requiredHeadKpa, circuit1)).toBeLessThan(DP);
+    expect(rel(heating.pump!.availableHeadKpa, 40 - 10 * q)).toBeLessThan(FLOW); // first segment: 40 → 35 kPa over 0.5 m³/h
     expect(heating.pump!.ok).toBe(true);
   });
 
-  it("expansion vessel per EN 12828 from the system volume", () => {
+  it("expansion vessel per EN 12828 from the system volume: V_n 6.18 L against the 8 L drawn", () => {
     const ev = r.expansionVessel!;
-    // Pipes: 22 mm d_i 20.2 (13 m), 15 mm d_i 13.6 (22.8 m) + heat pump 2 L.
-    const vol = (Math.PI / 4) * (20.2 ** 2 * 13 + 13.6 ** 2 * 22.8) / 1000 + 2;
-    expect(ev.systemVolumeL).toBeCloseTo(vol, 6);
-    expect(ev.requiredVolumeL!).toBeGreaterThan(0);
+    // Pipes: 22 mm d_i 20.2 (13 m), 15 mm d_i 13.6 (22.8 m) + heat pump 2 L + radiators 6 L and 3 L.
+    const vol = 13 * litresPerM(COPPER_ID_MM["22"]) + 22.8 * litresPerM(COPPER_ID_MM["15"]) + 2 + 9;
+    expect(ev.systemVolumeL).toBeCloseTo(vol, 9);
+    // e(10 → 45 °C) = 0.958 % (IAPWS-95, references §1.4), 5 m → p_0 0.7 bar, SV 3 bar → p_e 2.5 bar
+    const hand = en12828NominalL(vol, WATER_EXPANSION_FROM_10C[45], 5, 3);
+    expect(hand.nominalL).toBeCloseTo(6.18, 2);
+    // ±0.3 %: e of the engine's water vs the table, ±0.01 points (references §1.4)
+    expect(rel(ev.requiredVolumeL, hand.nominalL)).toBeLessThan(3e-3);
     expect(ev.ok).toBe(true);
   });
 
-  it("emitters: EN 442 output at 45/40/20 = 0.3538 × Φ50", () => {
+  it("emitters: EN 442 output at 45/40/20 = 0.3538 × Φ50 (references §7, logarithmic mean)", () => {
     const e1 = r.emitters.find((e) => e.id === "r1")!;
-    expect(e1.outputAtDesignW! / 3000).toBeCloseTo(0.3538, 3);
+    expect(e1.outputAtDesignW! / 3000).toBeCloseTo(0.3538, 4);
+    expect(rel(e1.outputAtDesignW, en442LogW(3000, 1.3, 45, 40, 20))).toBeLessThan(1e-9);
     expect(e1.ok).toBe(true);
   });
 
@@ -112,8 +114,8 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
     expect(r1.returnTemperatureC!).toBeLessThan(45);
     expect(r1.returnTemperatureC!).toBeGreaterThan(20);
     // heat balance of the emitter: output = ṁ·cp·(45 − t_return)
-    const mdot = (r1.flowM3h! / 3600) * water.densityKgM3;
-    expect(r1.outputW!).toBeCloseTo(mdot * water.specificHeatJkgK * (45 - r1.returnTemperatureC!), 3);
+    const mdot = (r1.flowM3h! / 3600) * water.rho;
+    expect(rel(r1.outputW, mdot * water.cp * (45 - r1.returnTemperatureC!))).toBeLessThan(FLOW);
   });
 });
 
@@ -131,41 +133,32 @@ describe("design sizing with a fixed bypass beside the radiator (hand-checked)",
       part("hp", "heat-pump", { ratedOutputKw: 5, minFlowM3h: 0, kv: 4, waterVolumeL: 2, pumpCurve: [[0, 30], [1, 22], [2, 8], [3, 0]] }),
       part("ta", "tee"),
       part("tb", "tee"),
-      part("rad", "radiator", { outputAtDt50W: 8000, heatLoadW: 2000, valveKv: 1.5 }),
+      part("rad", "radiator", { outputAtDt50W: 8000, heatLoadW: 2000, valveKv: 1.5, waterVolumeL: 10 }),
       part("bv", "balancing-valve", { kv: 0.5 }),
     ],
     pipes: [cu("p1", "hp.flow", "ta.a", 2), cu("p2", "ta.b", "rad.flow", 5), cu("p3", "rad.return", "tb.a", 5), cu("p4", "tb.b", "hp.return", 2), cu("x1", "ta.c", "bv.a", 0.5), cu("x2", "bv.b", "tb.c", 0.5)],
   };
-  const w40 = fluidProperties({ kind: "water" }, 40);
-  const kv40 = (q: number, kv: number) => kvPressureDropPa(q, kv, w40.densityKgM3) / 1000;
-  const cu22 = (q: number, lengthM: number) => {
-    const row = findPipeSize("copper", "22")!;
-    return pipePressureDrop({ flowM3s: q / 3600, innerDiameterM: row.innerDiameterMm / 1000, lengthM, roughnessM: row.roughnessMm / 1000, densityKgM3: w40.densityKgM3, kinematicViscosityM2s: w40.kinematicViscosityM2s, sumK: 0 }).dpPa / 1000;
-  };
-  const qRad = (2000 / (w40.densityKgM3 * w40.specificHeatJkgK * 10)) * 3600;
+  const w40 = WATER[40]; // mean of 45/35 °C, a table point (references §1.1)
+  const kv40 = (q: number, kv: number) => kvDpKpa(q, kv, w40.rho);
+  const cu22 = (q: number, lengthM: number) => copperDpKpa(q, "22", lengthM, w40);
+  const qRad = (2000 / (w40.rho * w40.cp * 10)) * 3600;
   const dpTees = cu22(qRad, 10) + kv40(qRad, 1.5);
   // bypass flow: the q with cu22(q, 1 m) + Kv-drop(q, 0.5) = dpTees, by bisection
-  let lo = 0, hi = 2;
-  for (let i = 0; i < 100; i++) {
-    const mid = (lo + hi) / 2;
-    if (cu22(mid, 1) + kv40(mid, 0.5) < dpTees) lo = mid;
-    else hi = mid;
-  }
-  const qBypass = lo;
+  const qBypass = bisect((x) => cu22(x, 1) + kv40(x, 0.5) - dpTees, 1e-6, 2);
   const results = run(doc);
   const heating = results.modes.find((m) => m.mode === "heating")!;
   const pipe = (id: string) => heating.pipes.find((p) => p.id === id)!;
 
   it("the bypass carries flow from the flow tee to the return tee, as the Δp across the radiator branch drives", () => {
     expect(qBypass).toBeGreaterThan(0.05); // a material flow: a backwards or zero answer cannot pass
-    expect(pipe("x1").flowM3h).toBeCloseTo(qBypass, 4);
-    expect(pipe("p2").flowM3h).toBeCloseTo(qRad, 6);
+    expect(rel(pipe("x1").flowM3h, qBypass)).toBeLessThan(DP);
+    expect(rel(pipe("p2").flowM3h, qRad)).toBeLessThan(FLOW);
   });
 
   it("the heat source carries radiator + bypass, and its required head is the index circuit with that flow", () => {
     const total = qRad + qBypass;
-    expect(heating.heatSourceFlowM3h!).toBeCloseTo(total, 4);
+    expect(rel(heating.heatSourceFlowM3h, total)).toBeLessThan(DP);
     const required = kv40(total, 4) + cu22(total, 4) + dpTees;
-    expect(heating.pump!.requiredHeadKpa!).toBeCloseTo(required, 3);
+    expect(rel(heating.pump!.requiredHeadKpa, required)).toBeLessThan(DP);
   });
 });

@@ -37,9 +37,8 @@ export function smallSystem() {
       { id: "tr", type: "tee" },
       { id: "te", type: "tee" },
       { id: "ts", type: "tee" },
-      // Radiator water content stated (0 L): an empty one takes a typical value, and the hand volumes count none.
-      { id: "r1", type: "radiator", props: { outputAtDt50W: 3000, heatLoadW: 1000, valveKv: 1, waterVolumeL: 0 } },
-      { id: "r2", type: "radiator", props: { outputAtDt50W: 1500, heatLoadW: 500, valveKv: 1, waterVolumeL: 0 } },
+      { id: "r1", type: "radiator", props: { outputAtDt50W: 3000, heatLoadW: 1000, valveKv: 1, waterVolumeL: 6 } },
+      { id: "r2", type: "radiator", props: { outputAtDt50W: 1500, heatLoadW: 500, valveKv: 1, waterVolumeL: 3 } },
       { id: "ev", type: "expansion-vessel", props: { volumeL: 8 } },
       { id: "sv", type: "safety-valve", props: { setBar: 3 } },
     ] as { id: string; type: string; props?: Record<string, unknown> }[],

@@ -39,3 +39,26 @@ describe("ASHRAE diaphragm tank — example D (SI, 200 L, 10 → 55 °C, copper,
     ).toThrow(/maxPressureAbsBar/);
   });
 });
+
+describe("ASHRAE tank inputs: a bad number is a RangeError naming the field, at the boundary too", () => {
+  const ok = { systemVolumeL: 200, expansionFraction: 0.02, linearExpansionPerK: 0, deltaTK: 45, fillPressureAbsBar: 2, maxPressureAbsBar: 3.5 };
+  it.each(["systemVolumeL", "fillPressureAbsBar", "maxPressureAbsBar"] as const)("%s 0, −1 or NaN → '%s must be > 0, got …'", (k) => {
+    for (const bad of [0, -1, Number.NaN]) {
+      expect(() => ashraeDiaphragmTank({ ...ok, [k]: bad })).toThrow(new RegExp(`^${k} must be > 0, got ${bad}$`));
+    }
+  });
+  it.each(["expansionFraction", "linearExpansionPerK", "deltaTK"] as const)("%s non-finite → '%s must be finite'", (k) => {
+    expect(() => ashraeDiaphragmTank({ ...ok, [k]: Number.POSITIVE_INFINITY })).toThrow(new RegExp(`^${k} must be finite, got Infinity$`));
+    // any finite value, negative included (a tank sized for a cooling system), is taken
+    expect(Number.isFinite(ashraeDiaphragmTank({ ...ok, [k]: -0.001 }))).toBe(true);
+  });
+  it("a tiny but positive pressure or volume is taken (the limit is > 0, not ≥ a larger number)", () => {
+    expect(ashraeDiaphragmTank({ ...ok, systemVolumeL: 1e-9 })).toBeCloseTo((1e-9 * 0.02) / (1 - 2 / 3.5), 20);
+  });
+  it("plain tank: atmosphere 0 or below → RangeError naming atmosphereAbsBar; 1.01325 bar → the formula", () => {
+    expect(() => ashraePlainTank({ ...ok, atmosphereAbsBar: 0 })).toThrow(/^atmosphereAbsBar must be > 0, got 0$/);
+    expect(() => ashraePlainTank({ ...ok, atmosphereAbsBar: -1 })).toThrow(/atmosphereAbsBar/);
+    // V_t = 200·0.02/(1.01325/2 − 1.01325/3.5) = 18.42 L
+    expect(ashraePlainTank({ ...ok, atmosphereAbsBar: 1.01325 })).toBeCloseTo(4 / (1.01325 / 2 - 1.01325 / 3.5), 9);
+  });
+});

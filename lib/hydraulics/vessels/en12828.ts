@@ -1,10 +1,11 @@
 /**
- * Diaphragm expansion vessel sizing after EN 12828:2012+A1:2014 Annex D (the
- * formula layout is from memory, corroborated by several public implementations
- * — references.md §8.1; verify against the standard, open item §14.1). A search
- * of stored public pages for the Annex's text (final pressure rule, water
- * reserve, pre-charge margin) found only makers' simplified rules, so the
- * layout stays marked "from memory".
+ * Diaphragm expansion vessel sizing after EN 12828:2012+A1:2014 Annex D. The
+ * formula layout is from memory (references.md §8.1; the standard's text is not
+ * public, open item §14.1). Its acceptance factor (p_e + 1)/(p_e − p_0) is the
+ * diaphragm-tank form 1/(1 − P1/P2) of the ASHRAE Handbook—HVAC Systems and
+ * Equipment (references §8.2), which the tests check it against. The final
+ * pressure p_e = p_SV − 0.5 bar, the pre-charge margin, the water reserve
+ * V_WR = max(0.5 %·V_s, 3 L) and the 0.2 bar margin stay from memory.
  * Pressures are bar gauge; "+1" converts to absolute (1 bar atmosphere, as the
  * Annex does).
  */

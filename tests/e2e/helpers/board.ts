@@ -33,6 +33,12 @@ export async function copySchematic(fromName: string, name: string): Promise<str
   return row!.id;
 }
 
+/** Removes test schematics and any variant saved from them (cleanup in a test's finally). */
+export async function removeSchematics(...ids: string[]): Promise<void> {
+  await sql("delete from schematics where variant_of = any($1::uuid[])", [ids]);
+  await sql("delete from schematics where id = any($1::uuid[])", [ids]);
+}
+
 export async function waitSaved(page: Page) {
   await expect(page.getByTestId("save-status")).toHaveText(/Saved/, { timeout: 20_000 });
 }

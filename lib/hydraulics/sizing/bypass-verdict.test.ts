@@ -1,0 +1,147 @@
+/**
+ * Differential bypass verdicts, worked out by hand:
+ * - recommended opening = the larger of the zones' Δp between the bypass ends at
+ *   design flow and the Δp the pump on its curve puts there with every zone open
+ *   (bypass shut), plus a margin of the larger of 10 % and 2 kPa (common
+ *   practice, sizing/bypass.ts). Two systems: one where 10 % is the larger margin
+ *   (need ≈ 55 kPa), one where 2 kPa is (need ≈ 7 kPa);
+ * - `bypass.opening-low` when a drawn opening is below that need;
+ * - minFlowMet: the heat source's flow with every zone shut (all of it through the
+ *   bypass, opening + (q/Kvs)²) against its minFlowM3h, with `heat-source.min-flow`.
+ * Pump curves are read by straight lines; water at the 40 °C mean (IAPWS, references §1.1).
+ */
+import { describe, expect, it } from "vitest";
+import { calculate } from "@/lib/hydraulics/calculate";
+import { bisect, copperDpKpa, curveHeadKpa, flowM3h, kvDpKpa, WATER } from "@/lib/hydraulics/testing/hand-calc";
+
+const W = WATER[40];
+type Curve = [number, number][];
+const STRONG: Curve = [[0, 60], [0.5, 55], [1, 40], [2, 0]];
+const WEAK: Curve = [[0, 9], [0.5, 8], [1, 5], [2, 0]];
+
+interface Opts { curve: Curve; valveKv: number; opening?: number | null; minFlow?: number; bypassKvs?: number }
+function zones(o: Opts) {
+  const cu = (id: string, from: string, to: string, size: string, lengthM: number) => ({ id, from, to, material: "copper", size, lengthM });
+  const rad = (id: string, heatLoadW: number) => ({ id, type: "radiator", props: { outputAtDt50W: 8000, heatLoadW, valveKv: o.valveKv, waterVolumeL: 8 } });
+  return {
+    format: "loopwright/schematic", version: 1, name: "bypass verdict", fluid: { kind: "water" },
+    design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 1000 },
+    parts: [
+      { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, minFlowM3h: o.minFlow ?? 0, kv: 5, waterVolumeL: 2, pumpCurve: o.curve } },
+      { id: "mf", type: "manifold", props: { outlets: 3 } },
+      { id: "mr", type: "manifold", props: { outlets: 3 } },
+      { id: "zv1", type: "zone-valve", props: { kvs: 4, open: true } },
+      { id: "zv2", type: "zone-valve", props: { kvs: 4, open: true } },
+      rad("r1", 1500),
+      rad("r2", 1000),
+      { id: "bp", type: "dp-bypass-valve", props: { kvs: o.bypassKvs ?? 2, openingKpa: o.opening ?? null } },
+    ],
+    pipes: [
+      cu("fm", "hp.flow", "mf.common", "22", 3), cu("rm", "mr.common", "hp.return", "22", 3),
+      cu("a0", "mf.p1", "zv1.a", "15", 1), cu("a1", "zv1.b", "r1.flow", "15", 4), cu("a2", "r1.return", "mr.p1", "15", 5),
+      cu("b0", "mf.p2", "zv2.a", "15", 1), cu("b1", "zv2.b", "r2.flow", "15", 4), cu("b2", "r2.return", "mr.p2", "15", 5),
+      cu("y1", "mf.p3", "bp.a", "15", 0.5), cu("y2", "bp.b", "mr.p3", "15", 0.5),
+    ],
+  };
+}
+function run(o: Opts) {
+  const out = calculate(zones(o));
+  if (!out.ok) throw new Error(JSON.stringify(out.issues));
+  return out.results;
+}
+
+/** Hand: a zone between the manifolds = 10 m Cu 15 + zone valve Kvs 4 + radiator valve. */
+const zoneDp = (q: number, valveKv: number) => copperDpKpa(q, "15", 10, W) + kvDpKpa(q, 4, W.rho) + kvDpKpa(q, valveKv, W.rho);
+/** Outside the manifolds: heat pump Kv 5 + 6 m Cu 22. */
+const mains = (q: number) => kvDpKpa(q, 5, W.rho) + copperDpKpa(q, "22", 6, W);
+/** Zones' Δp between the bypass ends at design flow: the larger of the two zones. */
+const designDp = (valveKv: number) => Math.max(zoneDp(flowM3h(1500, 10, W), valveKv), zoneDp(flowM3h(1000, 10, W), valveKv));
+/** Every zone open, bypass shut: the identical zones share Q equally; pump curve = mains + zone. */
+function openDp(curve: Curve, valveKv: number) {
+  const q = bisect((x) => curveHeadKpa(curve, x) - mains(x) - zoneDp(x / 2, valveKv), 0.01, 1.99);
+  return zoneDp(q / 2, valveKv);
+}
+/** The margin written out: the larger of +10 % and +2 kPa (common practice). */
+const withMargin = (need: number) => Math.max(1.1 * need, need + 2);
+
+describe("recommended bypass opening: need + max(10 %, 2 kPa)", () => {
+  it("strong pump, stiff radiator valves (Kv 0.3): all-zones-open Δp ≈ 55 kPa governs, the 10 % margin is the larger", () => {
+    const need = Math.max(designDp(0.3), openDp(STRONG, 0.3));
+    expect(openDp(STRONG, 0.3)).toBeGreaterThan(designDp(0.3));
+    expect(need).toBeGreaterThan(50);
+    expect(need).toBeLessThan(60);
+    const r = run({ curve: STRONG, valveKv: 0.3 });
+    // ±0.5 %: the simulated operating point against the hand bisection (Δp ∝ Q², Q to 0.2 %)
+    expect(Math.abs(r.bypass!.recommendedOpeningKpa! / withMargin(need) - 1)).toBeLessThan(5e-3);
+    expect(r.bypass!.recommendedOpeningKpa! / need).toBeGreaterThan(1.095); // a 5 % margin would be 1.05
+  });
+
+  it("weak pump, easy valves (Kv 1): need ≈ 7 kPa, so the 2 kPa margin is the larger", () => {
+    const need = Math.max(designDp(1), openDp(WEAK, 1));
+    expect(need).toBeGreaterThan(5);
+    expect(need).toBeLessThan(10);
+    const r = run({ curve: WEAK, valveKv: 1 });
+    expect(Math.abs(r.bypass!.recommendedOpeningKpa! - withMargin(need))).toBeLessThan(0.05); // kPa: 0.5 % of need
+  });
+
+  it("the zones' design Δp governs when the pump on its curve puts less across the ends: weak pump, Kv 0.3", () => {
+    // zone 1 at its design 0.13022 m³/h: ≈ 19.6 kPa; the weak pump (9 kPa shut-off) cannot put that much across
+    const need = Math.max(designDp(0.3), openDp(WEAK, 0.3));
+    expect(designDp(0.3)).toBeGreaterThan(openDp(WEAK, 0.3));
+    const r = run({ curve: WEAK, valveKv: 0.3 });
+    expect(Math.abs(r.bypass!.recommendedOpeningKpa! / withMargin(need) - 1)).toBeLessThan(5e-3);
+  });
+});
+
+describe("drawn opening against the need: bypass.opening-low", () => {
+  const need = Math.max(designDp(0.3), openDp(STRONG, 0.3));
+  const low = (r: ReturnType<typeof run>) => r.findings.filter((f) => f.code === "bypass.opening-low");
+
+  it("3 % above the need: no finding, the bypass passes nothing with every zone open", () => {
+    const r = run({ curve: STRONG, valveKv: 0.3, opening: 1.03 * need });
+    expect(low(r)).toEqual([]);
+    expect(r.scenarios.find((s) => s.name === "all zones open")!.parts.find((p) => p.id === "bp")!.flowM3h).toBe(0);
+  });
+
+  it("3 % below the need: bypass.opening-low naming the bypass, and it leaks with every zone open", () => {
+    const r = run({ curve: STRONG, valveKv: 0.3, opening: 0.97 * need });
+    expect(low(r).map((f) => [f.severity, f.refs])).toEqual([["warning", ["bp"]]]);
+    expect(r.scenarios.find((s) => s.name === "all zones open")!.parts.find((p) => p.id === "bp")!.flowM3h!).toBeGreaterThan(0);
+  });
+});
+
+describe("heat source minimum flow with every zone shut", () => {
+  // all zones shut: the pump drives the bypass loop, H(Q) = mains(Q) + 1 m Cu 15 + opening 5 kPa + (Q/Kvs 2)²
+  const shutQ = bisect((x) => curveHeadKpa(WEAK, x) - mains(x) - copperDpKpa(x, "15", 1, W) - 7.5 - kvDpKpa(x, 2, W.rho), 0.01, 1.99);
+  const designQ = flowM3h(2500, 10, W); // both zones at design: 0.21707 m³/h
+  const minFlowFindings = (r: ReturnType<typeof run>) => r.findings.filter((f) => f.code === "heat-source.min-flow");
+
+  it("hand: the bypass loop meets the weak curve at ≈ 0.20 m³/h, below the design flow (so only the shut check can trip)", () => {
+    expect(shutQ).toBeGreaterThan(0.15);
+    expect(shutQ).toBeLessThan(0.95 * designQ);
+    const r = run({ curve: WEAK, valveKv: 1, opening: 7.5 });
+    // ±0.5 %: simulation against the hand bisection (both solve the same loop laws)
+    expect(Math.abs(r.bypass!.heatSourceFlowAllZonesClosedM3h! / shutQ - 1)).toBeLessThan(5e-3);
+  });
+
+  it("minimum 3 % below that flow: met, no min-flow finding", () => {
+    const r = run({ curve: WEAK, valveKv: 1, opening: 7.5, minFlow: 0.97 * shutQ });
+    expect(r.bypass!.minFlowMet).toBe(true);
+    expect(minFlowFindings(r)).toEqual([]);
+  });
+
+  it("minimum 3 % above it: not met, heat-source.min-flow naming the heat source", () => {
+    const r = run({ curve: WEAK, valveKv: 1, opening: 7.5, minFlow: 1.03 * shutQ });
+    expect(r.bypass!.minFlowMet).toBe(false);
+    expect(minFlowFindings(r).map((f) => f.refs)).toEqual([["hp"]]);
+  });
+
+  it("the design flow (0.217 m³/h at 2.5 kW) is checked too: a bypass opening at 2 kPa keeps the shut flow high, so only it trips", () => {
+    const r = run({ curve: WEAK, valveKv: 1, opening: 2, minFlow: 1.03 * designQ });
+    expect(Math.abs(r.modes[0]!.heatSourceFlowM3h! / designQ - 1)).toBeLessThan(1e-3);
+    expect(r.bypass!.minFlowMet).toBe(true);
+    expect(minFlowFindings(r).map((f) => f.refs)).toEqual([["hp"]]);
+    expect(minFlowFindings(r)[0]!.message).toMatch(/design flow/);
+    expect(minFlowFindings(run({ curve: WEAK, valveKv: 1, opening: 2, minFlow: 0.97 * designQ }))).toEqual([]);
+  });
+});
