@@ -1,6 +1,7 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { initialsOf } from "@/lib/review/mentions";
+import type { Present } from "@/lib/review/types";
 
 // Who is looking at a board: one row per open live stream, in PostgreSQL so every app
 // instance sees every other's (DEVELOPERS.md: state instances must agree on lives there).
@@ -9,7 +10,7 @@ import { initialsOf } from "@/lib/review/mentions";
 
 export const PRESENCE_STALE_S = 60;
 
-export interface Present { userId: string; name: string; initials: string }
+export type { Present };
 
 export async function arrive(connectionId: string, schematicId: string, userId: string): Promise<void> {
   await db()("board_presence").where("seen_at", "<", db().raw(`now() - interval '${PRESENCE_STALE_S * 5} seconds'`)).delete();

@@ -1,28 +1,29 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { AuthError } from "@/lib/auth/errors";
-import { requireUser } from "@/lib/auth/authorize";
+import { requireProjectRole } from "@/lib/auth/authorize";
 
 // The firm's rule "a reviewer may not approve a revision they authored" (on unless the
-// firm turns it off). Read where approvals are made; changed by a firm owner only.
+// firm turns it off). Read where approvals are made (status-move.ts); shown on a project's
+// Team page; changed there by an owner of the project's firm only.
 
 export async function noSelfApproval(projectId: string): Promise<boolean> {
   const row = await db()("projects as p").join("organisations as o", "o.id", "p.organisation_id").where("p.id", projectId).first("o.no_self_approval");
   return row?.no_self_approval !== false;
 }
 
-/** The caller's firm (the one they own) and its rule; null when they own none. */
-export async function ownedFirm(): Promise<{ id: string; name: string; noSelfApproval: boolean } | null> {
-  const user = await requireUser();
-  const row = await db()("memberships as m").join("organisations as o", "o.id", "m.organisation_id")
-    .where({ "m.user_id": user.id, "m.role": "owner" }).orderBy("o.created_at").first("o.id", "o.name", "o.no_self_approval");
-  return row ? { id: row.id, name: row.name, noSelfApproval: row.no_self_approval } : null;
+/** The project's firm, its rule, and whether the caller owns the firm (may change it). */
+export async function firmRuleOf(projectId: string): Promise<{ firmId: string; firmName: string; noSelfApproval: boolean; mayChange: boolean; userId: string }> {
+  const { user } = await requireProjectRole(projectId, "project.read");
+  const row = await db()("projects as p").join("organisations as o", "o.id", "p.organisation_id")
+    .leftJoin("memberships as m", (j) => j.on("m.organisation_id", "o.id").andOnVal("m.user_id", "=", user.id))
+    .where("p.id", projectId).first("o.id", "o.name", "o.no_self_approval", "m.role");
+  return { firmId: row.id, firmName: row.name, noSelfApproval: row.no_self_approval, mayChange: row.role === "owner", userId: user.id };
 }
 
-export async function setNoSelfApproval(on: boolean): Promise<{ noSelfApproval: boolean; firmId: string; actorId: string }> {
-  const user = await requireUser();
-  const firm = await ownedFirm();
-  if (!firm) throw new AuthError(403, "Only an owner of the firm can change the firm's review rule; you are not one.");
-  await db()("organisations").where({ id: firm.id }).update({ no_self_approval: on });
-  return { noSelfApproval: on, firmId: firm.id, actorId: user.id };
+export async function setNoSelfApproval(projectId: string, on: boolean): Promise<{ noSelfApproval: boolean; firmId: string; actorId: string }> {
+  const firm = await firmRuleOf(projectId);
+  if (!firm.mayChange) throw new AuthError(403, `Only an owner of ${firm.firmName} can change the firm's review rule.`);
+  await db()("organisations").where({ id: firm.firmId }).update({ no_self_approval: on });
+  return { noSelfApproval: on, firmId: firm.firmId, actorId: firm.userId };
 }

@@ -1,5 +1,7 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { audit } from "@/lib/audit";
+import { requestIp } from "@/lib/auth/request-context";
 import { AuthError, UserError } from "@/lib/auth/errors";
 import { requireSchematicAccess } from "@/lib/auth/authorize";
 import { requireRevisionAccess } from "@/lib/auth/revision-access";
@@ -21,7 +23,7 @@ export async function restoreRevision(revisionId: string): Promise<RestoredDraft
   if (!revision) throw new AuthError(404, "Revision not found, or you are not a member of its project.");
   const parsed = parseSchematic(revision.document);
   if (!parsed.ok) throw new UserError(409, `Rev ${revision.number} cannot be restored: its stored document is not valid (${parsed.issues[0]?.message}).`);
-  return db().transaction(async (trx) => {
+  const restored = await db().transaction(async (trx) => {
     const [row] = await trx("schematics").where({ id: schematic.id })
       .update({ draft: JSON.stringify(parsed.doc), lock_version: trx.raw("lock_version + 1"), updated_by: user.id, updated_at: trx.fn.now() })
       .returning(["lock_version", "updated_at"]);
@@ -29,4 +31,7 @@ export async function restoreRevision(revisionId: string): Promise<RestoredDraft
     return { schematicId: schematic.id, lockVersion: row.lock_version, updatedAt: new Date(row.updated_at).toISOString(), document: parsed.doc,
       restoredFrom: { id: revisionId, number: revision.number } };
   });
+  await audit({ actorId: user.id, action: "revision.restored", projectId: schematic.projectId, target: revisionId,
+    detail: { schematicId: schematic.id, number: revision.number }, ip: await requestIp() });
+  return restored;
 }

@@ -65,3 +65,6 @@ export interface HistoryEntry {
   changes: DocDiff;
   events: RevisionEvent[];
 }
+
+/** Someone looking at the board now (live presence). */
+export interface Present { userId: string; name: string; initials: string }

@@ -405,9 +405,9 @@ export const rows: Row[] = [
     call: async (f, cookie) => openStream(f.practiceSchematicId, cookie),
   },
   {
-    // the demo owner owns the firm; setting the rule to what it is changes nothing for other tests
+    // the demo owner owns the fixture's firm; setting the rule to what it is changes nothing for other tests
     name: "action setFirmReviewRuleAction", kind: "action", expect: allow(["owner"]),
-    call: async (_f, cookie) => callAction(async () => (await reviewActions()).setFirmReviewRuleAction({ noSelfApproval: true }), cookie),
+    call: async (f, cookie) => callAction(async () => (await reviewActions()).setFirmReviewRuleAction({ projectId: f.projectId, noSelfApproval: true }), cookie),
   },
 
   // ——— TODO: board routes not written yet; replace each with a real row ———

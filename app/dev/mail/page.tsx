@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { config } from "@/lib/config";
+import { MessageText } from "@/components/review/message-text";
 
 export const metadata: Metadata = { title: "Caught e-mail" };
 export const dynamic = "force-dynamic";
@@ -18,11 +19,6 @@ async function caught(): Promise<CaughtMail[] | string> {
   } catch {
     return `The mail catcher is not answering at ${config.mailWebUrl}. It starts with npm start.`;
   }
-}
-
-function withLinks(text: string) {
-  return text.split(/(https?:\/\/\S+)/g).map((part, i) =>
-    /^https?:\/\//.test(part) ? <a key={i} href={part} className="break-all text-copper-600 underline">{part}</a> : part);
 }
 
 export default async function DevMailPage() {
@@ -44,7 +40,7 @@ export default async function DevMailPage() {
                   <span className="num text-xs text-ink-faint">{m.date ? new Date(m.date).toISOString().replace("T", " ").slice(0, 19) : ""}</span>
                 </div>
                 <p className="text-sm text-ink-soft">to {(m.to ?? []).map((t) => t.address).join(", ")}</p>
-                <pre className="mt-3 whitespace-pre-wrap font-sans text-sm">{withLinks(m.text ?? "")}</pre>
+                <MessageText text={m.text ?? ""} className="mt-3 text-sm" newTab={false} />
               </li>
             ))}
           </ul>
