@@ -56,7 +56,7 @@ export function Composer(props: { people: Person[]; label: string; submitLabel: 
   };
 
   return (
-    <form className="relative" onSubmit={(e) => { e.preventDefault(); void send(); }} data-testid={props.testId ?? "composer"}>
+    <form onSubmit={(e) => { e.preventDefault(); void send(); }} data-testid={props.testId ?? "composer"}>
       <label htmlFor={id} className="sr-only">{props.label}</label>
       <textarea id={id} ref={box} rows={3} value={text} autoFocus={props.autoFocus} placeholder={`${props.label} — @ to mention someone`}
         onChange={(e) => { setText(e.target.value); setCaret(e.target.selectionStart); setActive(0); }}
@@ -64,7 +64,7 @@ export function Composer(props: { people: Person[]; label: string; submitLabel: 
         aria-invalid={error ? true : undefined} aria-describedby={error ? `${id}-err` : undefined}
         className="w-full resize-y rounded-md border border-ink/15 bg-white p-2 text-sm focus:outline-2 focus:outline-copper-500" />
       {matches.length > 0 && (
-        <ul role="listbox" aria-label="Mention someone" className="absolute left-2 top-full z-30 mt-0.5 w-56 rounded-md border border-ink/10 bg-white py-1 text-sm shadow-lg" data-testid="mention-picker">
+        <ul role="listbox" aria-label="Mention someone" className="mt-0.5 rounded-md border border-ink/10 bg-white py-1 text-sm shadow-md" data-testid="mention-picker">
           {matches.map((p, i) => (
             <li key={p.id} role="option" aria-selected={i === active}>
               <button type="button" onMouseDown={(e) => { e.preventDefault(); pick(p); }}

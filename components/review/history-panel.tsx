@@ -71,7 +71,7 @@ function Entry({ h }: { h: HistoryEntry }) {
         {!opened && <Link href={boardPath(session.projectId, session.schematicId, { rev: h.id })} className="text-copper-700 underline" data-testid="history-open">Open (read-only)</Link>}
         {session.mayEdit && <button type="button" className="text-copper-700 underline disabled:opacity-50" disabled={busy} onClick={restore} data-testid="history-restore">Restore as draft</button>}
         {h.events.some((e) => e.threadId) && (
-          <button type="button" className="text-copper-700 underline" onClick={() => { review.setPanel({ open: true, tab: "threads" }); review.select(h.events.findLast((e) => e.threadId)!.threadId); }}>
+          <button type="button" className="text-copper-700 underline" onClick={() => { review.setPanel({ ...review.panel, tab: "threads" }); review.select(h.events.findLast((e) => e.threadId)!.threadId); }}>
             Reason thread
           </button>
         )}

@@ -30,8 +30,8 @@ export function LiveSessionSync() {
     if (m.type === "revision" || m.type === "resync") void refreshRevisions().catch(() => {});
     if (m.type === "resync" || m.type === "draft") void mutate(historyKey(session.schematicId));
     if (m.type !== "draft" || session.viewing.kind !== "draft") return;
-    const mine = m.by !== null && m.by === live?.you;
-    if (m.lockVersion <= session.save.lockVersion() || (mine && session.save.status === "saving")) return; // our own save
+    // our own saves (autosave, a revision, a restore) are handled where they are made
+    if (m.by === live?.you || m.lockVersion <= session.save.lockVersion()) return;
     // the board is remade with the stored draft (this component with it)
     if (session.save.status === "saved") void session.reload().catch(() => setNote("Someone saved the draft; reload the page to see it"));
     else {

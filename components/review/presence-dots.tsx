@@ -1,11 +1,22 @@
 "use client";
 
+import { useEffect, useState } from "react";
+import { createPortal } from "react-dom";
+import { HEADER_SLOT } from "@/components/shell/app-header";
 import { useLive } from "./live-board";
 
 const words = { connecting: "connecting…", live: "live", reconnecting: "reconnecting…", closed: "not live: reload the page" } as const;
 
-/** Who else is looking at this board (initials), and whether the board is live. */
+/** Who else is looking at this board (initials) and whether it is live, in the app's top bar (beside the board's when there is none). */
 export function PresenceDots() {
+  // undefined until mounted (the header is found in the page's DOM)
+  const [slot, setSlot] = useState<HTMLElement | null | undefined>(undefined);
+  useEffect(() => setSlot(document.getElementById(HEADER_SLOT)), []);
+  if (slot === undefined) return null;
+  return slot ? createPortal(<Dots />, slot) : <Dots />;
+}
+
+function Dots() {
   const live = useLive();
   if (!live) return null;
   const others = live.presence.filter((p) => p.userId !== live.you);
@@ -19,7 +30,8 @@ export function PresenceDots() {
           {p.initials}
         </span>
       ))}
-      {others.length > 0 && <span className="sr-only">{others.map((p) => p.name).join(", ")} also looking</span>}
+      {others.length > 0 ? <span className="sr-only">{others.map((p) => p.name).join(", ")} also looking</span>
+        : <span className="hidden text-xs text-ink-faint sm:inline">only you here</span>}
     </span>
   );
 }

@@ -30,8 +30,11 @@ interface ReviewValue {
   setFilter(f: ThreadFilter): void;
   composing: Anchor | null;
   compose(a: Anchor | null): void;
-  panel: { open: boolean; tab: "threads" | "history" };
-  setPanel(p: { open: boolean; tab: "threads" | "history" }): void;
+  /** The panel: folded or open (beside the drawing), which tab; `sheet`: shown over the drawing on a phone. */
+  panel: { open: boolean; tab: "threads" | "history"; sheet: boolean };
+  setPanel(p: { open: boolean; tab: "threads" | "history"; sheet: boolean }): void;
+  /** Open the panel at a tab (on a phone too). */
+  show(tab: "threads" | "history"): void;
   /** Why this person may not write on a revision with this status (null: they may). */
   writeBlock(status: RevisionStatus | null): string | null;
   write(method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown): Promise<WriteResult>;
@@ -71,8 +74,7 @@ export function ReviewProvider(p: ReviewProviderProps) {
   const [focus, setFocus] = useState<ReviewValue["focus"]>(null);
   const [filter, setFilter] = useState<ThreadFilter>({ state: "open", mine: false });
   const [composing, compose] = useState<Anchor | null>(null);
-  const [panel, setPanel] = useState<ReviewValue["panel"]>(() => ({
-    open: p.initialThread !== null || (typeof window !== "undefined" && window.matchMedia("(min-width: 768px)").matches), tab: "threads" }));
+  const [panel, setPanel] = useState<ReviewValue["panel"]>({ open: true, tab: "threads", sheet: p.initialThread !== null });
   const threads = useMemo(() => data?.threads ?? [], [data]);
 
   const select = useCallback((id: string | null, focusIt = true) => {
@@ -103,6 +105,7 @@ export function ReviewProvider(p: ReviewProviderProps) {
   const value: ReviewValue = {
     schematicId: p.schematicId, userId: p.userId, viewing: p.viewing, threads, mentionable: data?.mentionable ?? [],
     loadError: error ? (error as Error).message : null, selected, select, focus, filter, setFilter, composing, compose, panel, setPanel,
+    show: (tab) => setPanel({ open: true, tab, sheet: true }),
     writeBlock: (status) => blockFor(p.role, p.schematic, p.userId, status), write, refresh: () => mutate(),
   };
   return <ReviewContext.Provider value={value}>{p.children}</ReviewContext.Provider>;

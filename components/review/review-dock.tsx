@@ -5,6 +5,7 @@ import { NewThreadButton, NewThreadForm } from "./new-thread";
 import { useReview } from "./review-context";
 import { ThreadList } from "./thread-list";
 import { ThreadView } from "./thread-view";
+import { usePhone } from "./use-phone";
 
 /**
  * The review panel, docked in the right-hand column with the findings (never over the
@@ -13,15 +14,18 @@ import { ThreadView } from "./thread-view";
  */
 export function ReviewDock({ inSheet = false }: { inSheet?: boolean }) {
   const r = useReview();
+  const phone = usePhone();
   const open = inSheet || r.panel.open;
   const openCount = r.threads.filter((t) => !t.resolved).length;
   const thread = r.selected ? r.threads.find((t) => t.id === r.selected) : undefined;
   const tab = (t: "threads" | "history", label: string) => (
-    <button type="button" role="tab" aria-selected={r.panel.tab === t} onClick={() => r.setPanel({ open: true, tab: t })} data-testid={`review-tab-${t}`}
+    <button type="button" role="tab" aria-selected={r.panel.tab === t} onClick={() => r.setPanel({ ...r.panel, open: true, tab: t })} data-testid={`review-tab-${t}`}
       className={`rounded px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wide ${r.panel.tab === t && open ? "text-copper-700" : "text-ink-soft hover:text-ink"}`}>{label}</button>
   );
+  // one panel on the page: the sheet on a phone, the docked one otherwise
+  if (phone !== inSheet) return null;
   return (
-    <div className={`min-h-0 flex-col ${inSheet ? "flex" : "hidden border-b border-ink/10 md:flex"} ${open && !inSheet ? "max-h-[60%]" : ""}`} data-testid={inSheet ? "review-sheet-body" : "review-dock"}>
+    <div className={`flex min-h-0 flex-col ${inSheet ? "" : "border-b border-ink/10"} ${open && !inSheet ? "max-h-[60%]" : ""}`} data-testid={inSheet ? "review-sheet-body" : "review-dock"}>
       <div className="flex shrink-0 items-center gap-1 px-2 py-1.5" role="tablist">
         {tab("threads", `Threads${openCount ? ` · ${openCount} open` : ""}`)}
         {tab("history", "History")}

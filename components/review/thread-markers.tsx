@@ -71,10 +71,10 @@ export function ThreadMarkers() {
         return (
           <button key={m.key} type="button" data-testid="thread-marker" data-anchor={m.key} data-open={m.open}
             title={`${m.threads.length} thread${m.threads.length === 1 ? "" : "s"}, ${m.open} open — click to read`}
-            onClick={() => { r.setPanel({ open: true, tab: "threads" }); r.compose(null); r.select(first.id); }}
-            className={`nodrag nopan pointer-events-auto absolute z-10 flex items-center gap-1 rounded-full rounded-bl-none border px-1.5 py-0.5 text-[11px] font-semibold shadow-sm ${
+            onClick={() => { r.show("threads"); r.compose(null); r.select(first.id); }}
+            className={`nodrag nopan pointer-events-auto absolute flex items-center gap-1 rounded-full rounded-bl-none border px-1.5 py-0.5 text-[11px] font-semibold shadow-sm ${
               m.open > 0 ? "border-copper-600 bg-copper-500 text-white" : "border-ink/20 bg-white text-ink-faint"} ${m.threads.some((t) => t.id === r.selected) ? "ring-2 ring-copper-300" : ""}`}
-            style={{ transform: `translate(${m.x}px, ${m.y}px) translate(-10%, -100%) scale(${1 / Math.max(zoom, 0.4)})`, transformOrigin: "0 100%" }}>
+            style={{ transform: `translate(${m.x}px, ${m.y}px) translate(-10%, -100%) scale(${1 / Math.max(zoom, 0.4)})`, transformOrigin: "0 100%", zIndex: 1000 }}>
             <span className="num">{shown}</span>
             {m.open > 0 && <span className="num rounded-full bg-white px-1 text-[10px] text-copper-700" aria-label={`${m.open} open`}>{m.open}</span>}
           </button>

@@ -7,6 +7,7 @@ import type { Thread, ThreadMessage } from "@/lib/review/types";
 import { anchorText } from "./anchor-text";
 import { Composer } from "./composer";
 import { MessageText } from "./message-text";
+import { NewThreadButton } from "./new-thread";
 import { useReview } from "./review-context";
 import { ago } from "./when";
 
@@ -24,7 +25,7 @@ export function ThreadView({ t }: { t: Thread }) {
     <section className="flex flex-col gap-2 px-2 pb-2 text-sm" data-testid="thread-view" data-thread={t.id} aria-label={`Thread ${t.number}`}>
       <div className="flex items-center gap-2">
         <button type="button" className="text-xs text-copper-700 hover:underline" onClick={() => r.select(null)} data-testid="thread-back">← All threads</button>
-        <span className="ml-auto text-xs text-ink-faint">Rev {t.revisionNumber}</span>
+        <span className="ml-auto"><NewThreadButton /></span>
       </div>
       <header className="flex items-baseline gap-2">
         <span className={`num rounded-full px-1.5 text-xs font-semibold text-white ${t.resolved ? "bg-ink-faint" : "bg-copper-500"}`}>{t.number}</span>
@@ -34,6 +35,7 @@ export function ThreadView({ t }: { t: Thread }) {
             : anchorText(t.anchor, doc)}
         </span>
         {t.kind === "send-back" && <span className="rounded bg-warn/15 px-1 text-[10px] font-semibold uppercase text-warn">sent back</span>}
+        <span className="text-xs text-ink-faint">Rev {t.revisionNumber}</span>
       </header>
       {!t.anchorPresent && (
         <p className="rounded bg-paper-dark px-2 py-1 text-xs text-ink-soft" data-testid="anchor-gone">
