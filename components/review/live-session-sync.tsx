@@ -27,6 +27,8 @@ export function LiveSessionSync() {
   };
 
   useLiveMessages((m) => {
+    // issued: the draft locks ("start a new draft" to edit): open it again as the server now sees it
+    if (m.type === "revision" && m.status === "issued" && session.viewing.kind === "draft" && session.canEdit) return void session.reload().catch(() => {});
     if (m.type === "revision" || m.type === "resync") void refreshRevisions().catch(() => {});
     if (m.type === "resync" || m.type === "draft") void mutate(historyKey(session.schematicId));
     if (m.type !== "draft" || session.viewing.kind !== "draft") return;

@@ -44,7 +44,7 @@ export function NewThreadForm({ anchor }: { anchor: Anchor }) {
   return (
     <div className="px-2 pb-2 text-sm" data-testid="new-thread-form">
       <p className="mb-1 flex flex-wrap items-center gap-1 text-xs text-ink-soft">
-        New thread on <strong className="text-ink">{anchorText(anchor, doc)}</strong>, Rev {target.number}
+        <span>New thread on <strong className="text-ink">{anchorText(anchor, doc)}</strong>, Rev {target.number}</span>
         {anchor.kind !== "schematic" && (
           <button type="button" className="ml-auto text-copper-700 hover:underline" onClick={() => r.compose({ kind: "schematic", id: null })}>whole schematic instead</button>
         )}

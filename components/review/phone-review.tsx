@@ -23,8 +23,7 @@ export function PhoneReview() {
       )}
       {r.panel.sheet && (
         <div className="absolute inset-x-0 bottom-0 z-30 flex max-h-[65%] flex-col rounded-t-xl border-t border-ink/10 bg-paper shadow-2xl" role="dialog" aria-label="Review" data-testid="review-sheet">
-          <button type="button" onClick={() => r.setPanel({ ...r.panel, sheet: false })} className="mx-auto mt-1 h-1.5 w-10 rounded-full bg-ink/20" aria-label="Close the review panel" />
-          <ReviewDock inSheet />
+          <ReviewDock inSheet onClose={() => r.setPanel({ ...r.panel, sheet: false })} />
         </div>
       )}
     </>

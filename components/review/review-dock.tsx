@@ -12,7 +12,7 @@ import { usePhone } from "./use-phone";
  * drawing): the threads, one open thread, a new one being started, and the history.
  * Folds to its header line. On a phone the same panel opens from a button on the canvas.
  */
-export function ReviewDock({ inSheet = false }: { inSheet?: boolean }) {
+export function ReviewDock({ inSheet = false, onClose }: { inSheet?: boolean; onClose?: () => void }) {
   const r = useReview();
   const phone = usePhone();
   const open = inSheet || r.panel.open;
@@ -29,6 +29,7 @@ export function ReviewDock({ inSheet = false }: { inSheet?: boolean }) {
       <div className="flex shrink-0 items-center gap-1 px-2 py-1.5" role="tablist">
         {tab("threads", `Threads${openCount ? ` · ${openCount} open` : ""}`)}
         {tab("history", "History")}
+        {onClose && <button type="button" onClick={onClose} className="ml-auto px-2 text-sm text-ink-soft hover:text-ink" data-testid="close-sheet">Close</button>}
         {!inSheet && (
           <button type="button" onClick={() => r.setPanel({ ...r.panel, open: !open })} aria-expanded={open} aria-label={open ? "Fold the review panel" : "Open the review panel"}
             className="ml-auto px-1 text-xs text-ink-faint hover:text-ink">{open ? "▴" : "▾"}</button>

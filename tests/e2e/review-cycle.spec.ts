@@ -54,6 +54,8 @@ test("designer submits, reviewer threads and sends back, designer answers live, 
     await expect(reviewer.getByTestId("viewing-banner")).toContainText("Rev 1");
     await expect(reviewer.getByTestId("viewing-banner")).toContainText("In review");
     // each sees the other looking
+    // (from when the reviewer's board is live, i.e. connected)
+    await expect(reviewer.getByTestId("presence")).toHaveAttribute("data-state", "live");
     await expect(designer.getByTestId("presence-person")).toHaveText("TV", { timeout: LIVE_MS });
     await expect(reviewer.getByTestId("presence-person")).toHaveText("IP");
 
