@@ -46,12 +46,15 @@ export function LiveBoard({ schematicId, children }: { schematicId: string; chil
     es.onerror = () => setState(es.readyState === EventSource.CLOSED ? "closed" : "reconnecting");
     const on = (name: string, fn: (data: Record<string, unknown>) => void) =>
       es.addEventListener(name, (e) => fn(JSON.parse((e as MessageEvent<string>).data)));
-    on("hello", (d) => setYou(d.you as string));
+    on("hello", (d) => {
+      setYou(d.you as string);
+      // a save made while this board was away is caught up like any other
+      if (typeof d.lockVersion === "number") emit({ type: "draft", lockVersion: d.lockVersion, by: null });
+    });
     on("presence", (d) => setPresence(d.people as Present[]));
     on("thread", (d) => emit({ type: "thread", threadId: d.threadId as string, revisionId: d.revisionId as string }));
     on("revision", (d) => emit({ type: "revision", revisionId: d.revisionId as string, status: d.status as string }));
     on("draft", (d) => emit({ type: "draft", lockVersion: d.lockVersion as number, by: (d.by as string | null) ?? null }));
-    on("resync", () => emit({ type: "resync" }));
     return () => es.close();
   }, [schematicId]);
 

@@ -6,14 +6,15 @@ import { config } from "@/lib/config";
 // handed to other queries and lose the LISTEN), fanned out in process to the open live
 // streams by schematic. What is announced comes from the database's triggers on channel
 // lw_live (db/migrations/…_review_threads.ts), so writes made through any instance reach
-// the streams of every instance. When the connection drops it is made again, and every
-// stream is told to resync (announcements made meanwhile were missed).
+// the streams of every instance. When the connection drops, every stream is told (and
+// ends: its browser reconnects and refetches); the next subscribe connects again.
 
 export const LIVE_CHANNEL = "lw_live";
 
 /** An announcement: s = schematic id, t = what changed, the rest depends on t. */
 export interface LiveEvent {
   s: string;
+  /** resync: this instance stopped hearing announcements (its streams end, clients reconnect and refetch) */
   t: "draft" | "revision" | "thread" | "presence" | "resync";
   /** revision id; st its status (revision and thread events) */
   r?: string;
@@ -31,7 +32,6 @@ class Listener {
   private client: pg.Client | null = null;
   private connecting: Promise<void> | null = null;
   private readonly subs = new Map<string, Set<Subscriber>>();
-  private retryMs = 500;
 
   async subscribe(schematicId: string, fn: Subscriber): Promise<() => void> {
     const set = this.subs.get(schematicId) ?? new Set();
@@ -59,7 +59,6 @@ class Listener {
     await client.connect();
     await client.query(`LISTEN ${LIVE_CHANNEL}`);
     this.client = client;
-    this.retryMs = 500;
   }
 
   private deliver(payload: string | undefined) {
@@ -72,24 +71,20 @@ class Listener {
     for (const fn of this.subs.get(e.s) ?? []) fn(e);
   }
 
+  /**
+   * The LISTEN connection is gone: announcements are missed from now on, so every stream
+   * is told at once (they end, and their browsers reconnect after `retry` and refetch).
+   * The connection is made again by the next subscribe.
+   */
   private lost(client: pg.Client, err: Error | null) {
     if (this.client !== client) return;
     this.client = null;
     if (err) console.error("[loopwright] live listener lost its database connection", err.message);
     client.end().catch(() => {});
-    const again = () => {
-      if (this.subs.size === 0) return; // reconnect on the next subscribe
-      this.ready().then(() => {
-        for (const [s, set] of this.subs) for (const fn of set) fn({ s, t: "resync" });
-      }, () => {
-        this.retryMs = Math.min(this.retryMs * 2, 10_000);
-        setTimeout(again, this.retryMs);
-      });
-    };
-    setTimeout(again, this.retryMs);
+    for (const [s, set] of this.subs) for (const fn of [...set]) fn({ s, t: "resync" });
   }
 
-  /** For tests: drop the connection as a network fault would (it is made again). */
+  /** For tests: drop the connection as a network fault would. */
   async dropForTest(): Promise<void> {
     await this.client?.end();
   }

@@ -2,14 +2,15 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { AuthError, requireSchematicAccess, type SchematicAccess } from "@/lib/auth/authorize";
 import { withRequestCookies } from "@/lib/auth/request-context";
+import { db } from "@/lib/db";
 import { liveListener, type LiveEvent } from "./listener";
 import { arrive, leave, presentOn, stillHere, type Present } from "./presence";
 
 // One board's live stream as Server-Sent Events (text/event-stream, same origin, so a
-// `connect-src 'self'` policy allows it). Events: hello, presence, draft, revision,
-// thread, resync (refetch everything: the stream's instance lost its LISTEN for a moment).
+// `connect-src 'self'` policy allows it). Events: hello, presence, draft, revision, thread.
 // The browser's EventSource reconnects by itself after `retry` ms when the connection
-// drops. A heartbeat keeps proxies from closing an idle stream, refreshes this viewer's
+// drops, and the board refetches what it shows on reconnecting; so when this instance
+// loses its LISTEN connection (and would miss announcements) the stream simply ends. A heartbeat keeps proxies from closing an idle stream, refreshes this viewer's
 // presence, and checks they may still read the board (signed out or removed → closed).
 
 export const RETRY_MS = 2000;
@@ -22,7 +23,6 @@ export function eventFor(access: Pick<SchematicAccess, "issuedOnly">, e: LiveEve
     case "draft": return { event: "draft", data: { lockVersion: e.v, by: e.by ?? null } };
     case "revision": return { event: "revision", data: { revisionId: e.r, status: e.st } };
     case "thread": return { event: "thread", data: { threadId: e.th, revisionId: e.r } };
-    case "resync": return { event: "resync", data: {} };
     default: return null;
   }
 }
@@ -80,16 +80,18 @@ export function liveResponse(req: Request, access: SchematicAccess): Response {
             presenceTimer = setTimeout(() => void sendPresence(), 30);
             return;
           }
+          if (e.t === "resync") return void stop();
           const out = eventFor(access, e);
           if (out) write(frame(out.event, out.data));
-          if (e.t === "resync") void sendPresence();
         });
         await arrive(connectionId, schematicId, access.user.id);
       } catch (err) {
         console.error("[loopwright] live stream could not start", err);
         return void stop();
       }
-      write(frame("hello", { connectionId, you: access.user.id }));
+      // the draft's lock version: a board coming back after a drop sees whether it missed a save
+      const draft = access.issuedOnly ? null : await db()("schematics").where({ id: schematicId }).first("lock_version").catch(() => null);
+      write(frame("hello", { connectionId, you: access.user.id, lockVersion: draft?.lock_version ?? null }));
       await sendPresence();
     },
     cancel() {

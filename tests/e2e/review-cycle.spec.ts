@@ -22,6 +22,19 @@ async function clickPipe(page: Page, id: string) {
 
 const statusOf = (page: Page) => page.getByTestId("revision-status-bar");
 
+/** A write the live triggers do not announce (session_replication_role = replica turns triggers off for the connection). */
+async function unannounced(text: string, values: unknown[]) {
+  const { Client } = await import("pg");
+  const c = new Client({ connectionString: process.env.DATABASE_URL });
+  await c.connect();
+  try {
+    await c.query("set session_replication_role = replica");
+    await c.query(text, values);
+  } finally {
+    await c.end();
+  }
+}
+
 test("designer submits, reviewer threads and sends back, designer answers live, approve, issue — with every e-mail", async ({ browser }) => {
   test.setTimeout(240_000);
   const name = `Review cycle ${Date.now()}`;
@@ -151,6 +164,38 @@ test("designer submits, reviewer threads and sends back, designer answers live, 
   } finally {
     await dCtx.close();
     await rCtx.close();
+    await sql("delete from schematics where id = $1", [id]);
+  }
+});
+
+test("a board whose live connection drops reconnects by itself and catches up on what it missed", async ({ browser }) => {
+  test.setTimeout(120_000);
+  const name = `Reconnect ${Date.now()}`;
+  const [s] = await sql<{ id: string }>(`insert into schematics (project_id, name, kind, owner_id, draft, updated_by)
+    select project_id, $1, 'team', owner_id, draft, updated_by from schematics where project_id = $2 and name = 'Bypass only' returning id`, [name, ORCHARD_END]);
+  const id = s!.id;
+  await sql(`insert into schematic_revisions (schematic_id, number, document, status, author_id) select $1, 1, draft, 'in-review', 'demo-designer' from schematics where id = $1`, [id]);
+  const ctx = await browser.newContext({ viewport: { width: 1366, height: 768 } });
+  const page = await ctx.newPage();
+  try {
+    await signInAs(page, "designer");
+    await page.goto(`/projects/${ORCHARD_END}/schematics/${id}`);
+    const presence = page.getByTestId("presence");
+    await expect(presence).toHaveAttribute("data-state", "live");
+    // a thread written without announcing it (triggers off on this one connection): no board hears of it
+    await unannounced(`with t as (insert into review_threads (schematic_id, revision_id, number, anchor_kind, anchor_id, created_by)
+      select $1, id, 1, 'part', 'bp', 'demo-reviewer' from schematic_revisions where schematic_id = $1 returning id)
+      insert into thread_messages (thread_id, author_id, body) select id, 'demo-reviewer', 'Written while you were away' from t`, [id]);
+    await page.waitForTimeout(500);
+    await expect(page.getByTestId("thread-row")).toHaveCount(0);
+    // the server's LISTEN connection drops: its streams end, the browser reconnects after `retry` and catches up
+    await sql("select pg_terminate_backend(pid) from pg_stat_activity where datname = current_database() and query ilike 'LISTEN%'");
+    await expect(presence).toHaveAttribute("data-state", "reconnecting");
+    await expect(presence).toHaveAttribute("data-state", "live", { timeout: 10_000 });
+    await expect(page.getByTestId("thread-row")).toContainText("Written while you were away");
+    await expect(page.locator('[data-testid=thread-marker][data-anchor="part:bp"]')).toHaveAttribute("data-open", "1");
+  } finally {
+    await ctx.close();
     await sql("delete from schematics where id = $1", [id]);
   }
 });
