@@ -33,7 +33,7 @@ export const statusInput = z.object({
 });
 
 /** `?revision=N`: a revision number of the schematic. */
-export const revisionNumberParam = z.coerce.number({ error: "revision must be a revision number" })
-  .int("revision must be a whole number").min(1, "revision numbers start at 1").optional();
+export const revisionNumberParam = z.coerce.number({ error: "must be a revision number" })
+  .int("must be a whole revision number").min(1, "revision numbers start at 1").optional();
 
 export type AnchorInput = z.infer<typeof anchorInput>;

@@ -1,5 +1,5 @@
 import "server-only";
-import { ZodError } from "zod";
+import { z, ZodError } from "zod";
 import { db } from "@/lib/db";
 import { AuthError, UserError } from "@/lib/auth/errors";
 import { isUuid, requireSchematicAccess, requireUser, type SchematicAccess } from "@/lib/auth/authorize";
@@ -27,7 +27,7 @@ const revisionOf = async (schematicId: string, where: { id?: string; number?: nu
 /** Threads on a schematic, newest first: up to revision N (anchors checked in it), or all (anchors checked in the draft). */
 export async function threadsOf(schematicId: string, revisionParam: unknown): Promise<{ threads: Thread[]; mentionable: Person[] }> {
   const access = await requireSchematicAccess(schematicId, "read");
-  const number = revisionNumberParam.parse(revisionParam ?? undefined);
+  const { revision: number } = z.object({ revision: revisionNumberParam }).parse({ revision: revisionParam ?? undefined });
   let against: q.DocSource = { draftOf: schematicId };
   let status: RevisionStatus | null = null;
   if (number !== undefined) {

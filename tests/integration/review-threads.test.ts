@@ -190,5 +190,8 @@ describe("bad input is refused by field and nothing is half-saved", () => {
     const wrongRev = await list(P, designer.cookie, "?revision=9");
     expect(wrongRev.status).toBe(404);
     expect(wrongRev.body.error).toMatch(/^revision: /);
+    const notANumber = await list(P, designer.cookie, "?revision=two");
+    expect(notANumber.status).toBe(400);
+    expect(notANumber.body.error).toBe("revision: must be a revision number");
   });
 });
