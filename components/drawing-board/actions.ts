@@ -1,15 +1,13 @@
 "use server";
 
 import { z } from "zod";
-import { audit } from "@/lib/audit";
 import { requireActionOnSomeProject, requireProjectRole, requireSchematicAccess, requireUser } from "@/lib/auth/authorize";
-import { requestIp } from "@/lib/auth/request-context";
 import * as q from "@/db/queries/schematics";
 import { parseSchematic } from "@/lib/schematic";
-import { invalidDocument, refusal, Refused, runChecked } from "@/lib/persistence/outcome";
+import { invalidDocument, refusal, runChecked } from "@/lib/persistence/outcome";
 import { Answer, sizeToAnswer } from "@/lib/persistence/size";
 import { makeVariant } from "@/lib/persistence/variants";
-import { findTransition, revisionStatuses } from "@/lib/revisions/transitions";
+import { moveRevisionStatus } from "@/lib/review/status-move";
 import { keepDraftSizing, resultsForNewRevision } from "@/lib/revisions/with-results";
 
 // Server actions of the drawing board. Each: zod-check the envelope, check the role
@@ -47,23 +45,11 @@ export async function saveRevision(input: { schematicId: string; lockVersion: nu
   });
 }
 
-export async function setRevisionStatus(input: { revisionId: string; status: string }) {
+/** The approval path (lib/review/status-move.ts; the board calls POST /api/v1/revisions/{id}/status). */
+export async function setRevisionStatus(input: { revisionId: string; status: string; reason?: string }) {
   return runChecked(async () => {
-    const i = z.object({ revisionId: z.uuid(), status: z.enum(revisionStatuses) }).parse(input);
-    // who first: nothing about the revision (not even its status) is told before the caller may read it
-    await requireUser();
-    const revision = await q.getRevision(i.revisionId);
-    if (!revision) return new Refused(404, "Revision not found.");
-    const access = await requireSchematicAccess(revision.schematicId, "read");
-    if (access.issuedOnly && revision.status !== "issued") return new Refused(404, "Revision not found.");
-    const move = findTransition(revision.status, i.status);
-    if (!move) return new Refused(409, `A revision cannot move from ${revision.status} to ${i.status}.`);
-    const { user } = await requireProjectRole(revision.projectId, move.action);
-    const r = await q.setRevisionStatus({ revisionId: i.revisionId, from: revision.status, to: i.status });
-    if (!r.ok) return new Refused(409, "Someone changed this revision's status first; reload to see it.");
-    await audit({ actorId: user.id, action: "revision.status", projectId: revision.projectId, target: i.revisionId,
-      detail: { schematicId: revision.schematicId, number: revision.number, from: revision.status, to: i.status }, ip: await requestIp() });
-    return r.revision;
+    const i = z.object({ revisionId: z.uuid(), status: z.string(), reason: z.string().optional() }).parse(input);
+    return (await moveRevisionStatus(i.revisionId, { status: i.status, reason: i.reason })).revision;
   });
 }
 

@@ -5,6 +5,8 @@ const nav = [
   { href: "/projects", label: "Projects" },
 ];
 
+export const HEADER_SLOT = "app-header-slot";
+
 export function AppHeader({ right }: { right?: React.ReactNode }) {
   return (
     <header className="sticky top-0 z-20 border-b border-ink/10 bg-paper/95 backdrop-blur">
@@ -17,7 +19,9 @@ export function AppHeader({ right }: { right?: React.ReactNode }) {
             <Link key={n.href} href={n.href} className="rounded px-2 py-1 text-ink-soft hover:bg-paper-dark hover:text-ink">{n.label}</Link>
           ))}
         </nav>
-        <div className="ml-auto">{right}</div>
+        {/* pages put live bits here (the board: who else is looking), through a portal */}
+        <div id={HEADER_SLOT} className="ml-auto flex items-center gap-2" />
+        <div>{right}</div>
       </div>
     </header>
   );

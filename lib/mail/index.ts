@@ -23,3 +23,4 @@ export async function sendMail(m: Message): Promise<void> {
 }
 
 export * from "./templates";
+export * from "./review-templates";

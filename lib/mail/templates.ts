@@ -5,7 +5,7 @@ import type { Message } from "./message";
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
-function html(paragraphs: string[], button: { label: string; href: string }, after: string[]): string {
+export function html(paragraphs: string[], button: { label: string; href: string }, after: string[]): string {
   const p = (t: string) => `<p style="margin:0 0 14px">${esc(t)}</p>`;
   return `<!doctype html><html><body style="margin:0;background:#faf7f2;font-family:'IBM Plex Sans',Arial,sans-serif;color:#1f1d1a">
 <div style="max-width:520px;margin:0 auto;padding:28px 24px">

@@ -3,6 +3,7 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { docChanges } from "./doc-changes";
+import { diffFromNothing, docDiff } from "./doc-diff";
 import { parseSchematic } from "./parse";
 import { resultsChanges } from "./results-changes";
 
@@ -71,5 +72,43 @@ describe("resultsChanges: what a second sizing computed differently", () => {
     const old = { ...now, hotWater: null, modes: now.modes.map((m) => ({ ...m, pumps: undefined })) };
     const what = resultsChanges(old, now).map((c) => c.what);
     expect(what).toContain("cylinder cyl reheat (min)");
+  });
+});
+
+// docDiff: the comparison the revision history, the out-of-date note and side by side share.
+type Item = { id: string; [k: string]: any };
+
+describe("docDiff: parts and pipes added, removed and changed, by id, with the fields that changed", () => {
+  it("names each kind of change once", () => {
+    const after = load((d) => {
+      d.parts.find((p: Item) => p.id === "rad-lounge").props.heatLoadW = 2500;
+      d.parts.find((p: Item) => p.id === "bp").props.openingKpa = 30;
+      d.parts.push({ id: "rad-new", type: "radiator", x: 0, y: 0 });
+      d.pipes.find((p: Item) => p.id === "z1-f0").lengthM = 80;
+      d.pipes.find((p: Item) => p.id === "z1-f0").size = "28";
+      d.pipes = d.pipes.filter((p: Item) => p.id !== "acc-dc");
+      d.design.flowTemperatureC = 50;
+      d.fluid = { kind: "propylene-glycol", percentByVolume: 25 };
+    });
+    const d = docDiff(load(), after);
+    expect(d.added).toEqual(["rad-new"]);
+    expect(d.removed).toEqual(["acc-dc"]);
+    // in document order (parts, then pipes)
+    expect(d.changed).toEqual([{ id: "bp", fields: ["openingKpa"] }, { id: "rad-lounge", fields: ["heatLoadW"] }, { id: "z1-f0", fields: ["size", "lengthM"] }]);
+    expect(d.settings).toEqual(["design.flowTemperatureC", "fluid"]);
+  });
+  it("leaves moves and labels out for sizing, and names them for the history", () => {
+    const after = load((d) => { d.parts[0].x += 40; d.parts[1].label = "Renamed"; d.parts[2].rotation = 90; });
+    expect(docDiff(load(), after)).toEqual({ added: [], removed: [], changed: [], settings: [] });
+    const withLayout = docDiff(load(), after, { layout: true });
+    expect(withLayout.changed).toEqual([
+      { id: raw.parts[0].id, fields: ["position"] }, { id: raw.parts[1].id, fields: ["label"] }, { id: raw.parts[2].id, fields: ["rotation"] }]);
+  });
+  it("a part that changes type is one change of its type; the first revision is all added", () => {
+    const after = load((d) => { const p = d.parts.find((x: Item) => x.id === "zv1"); p.type = "isolation-valve"; p.props = {}; });
+    expect(docDiff(load(), after).changed).toEqual([{ id: "zv1", fields: ["type"] }]);
+    const first = diffFromNothing(load());
+    expect(first.added).toHaveLength(raw.parts.length + raw.pipes.length);
+    expect(first.added).toContain("z1-f0");
   });
 });

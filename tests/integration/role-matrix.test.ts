@@ -17,6 +17,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
+  await (await import("@/lib/live/listener")).liveListener().close();
   await dropFixtures();
   await db().destroy();
   await pgPool().end();

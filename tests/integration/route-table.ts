@@ -61,6 +61,29 @@ const unitActions = () => import("@/components/units/actions");
 const designRoute = () => import("@/app/api/v1/projects/[projectId]/design-conditions/route");
 const designActions = () => import("@/components/design-conditions/actions");
 const projectDefaults = { fluid: { kind: "water" }, design: { flowTemperatureC: 50, returnTemperatureC: 43 } };
+const reviewActions = () => import("@/components/review/actions");
+const projectSchematicsRoute = () => import("@/app/api/v1/projects/[projectId]/schematics/route");
+const threadsRoute = () => import("@/app/api/v1/schematics/[schematicId]/threads/route");
+const historyRoute = () => import("@/app/api/v1/schematics/[schematicId]/revisions/route");
+const eventsRoute = () => import("@/app/api/v1/schematics/[schematicId]/events/route");
+const threadRoute = () => import("@/app/api/v1/threads/[threadId]/route");
+const repliesRoute = () => import("@/app/api/v1/threads/[threadId]/replies/route");
+const messageRoute = () => import("@/app/api/v1/messages/[messageId]/route");
+const statusRoute = () => import("@/app/api/v1/revisions/[revisionId]/status/route");
+const restoreRoute = () => import("@/app/api/v1/revisions/[revisionId]/restore/route");
+
+/** The live stream answers 200 and stays open: read its status and the first bytes, then hang up. */
+async function openStream(schematicId: string, cookie: string | null): Promise<Outcome> {
+  const { GET } = await eventsRoute();
+  const headers = new Headers(cookie ? { cookie } : {});
+  const res = await (GET as never as (r: Request, c: unknown) => Promise<Response>)(
+    new Request(`http://test.local/api/v1/schematics/${schematicId}/events`, { headers }), { params: Promise.resolve({ schematicId }) });
+  if (res.status !== 200) return { status: res.status, body: await res.json(), setCookies: [] };
+  const reader = res.body!.getReader();
+  const first = new TextDecoder().decode((await reader.read()).value);
+  await reader.cancel();
+  return { status: first.startsWith("retry:") && /event-stream/.test(res.headers.get("content-type") ?? "") ? 200 : 500, body: null, setCookies: [] };
+}
 
 export const rows: Row[] = [
   // ——— session ———
@@ -248,7 +271,7 @@ export const rows: Row[] = [
   },
   {
     name: "action setRevisionStatus in-review → draft (send back)", kind: "action", fixture: { revisionStatus: "in-review" }, expect: allow(["owner", "reviewer"]),
-    call: async (f, cookie) => callAction(async () => (await boardActions()).setRevisionStatus({ revisionId: f.revisionId, status: "draft" }), cookie),
+    call: async (f, cookie) => callAction(async () => (await boardActions()).setRevisionStatus({ revisionId: f.revisionId, status: "draft", reason: "Matrix: send back" }), cookie),
   },
   {
     name: "action setRevisionStatus approved → issued (issue)", kind: "action", fixture: { revisionStatus: "approved" }, expect: allow(["owner", "designer"]),
@@ -349,7 +372,121 @@ export const rows: Row[] = [
     call: async (_f, _cookie, who) => callAction(async () => (await authActions()).signOutAction(form({})), await cookieFor(who)),
   },
 
+  // ——— review: threads, history, approval path, live events ———
+  {
+    name: "GET /api/v1/projects/[projectId]/schematics", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await projectSchematicsRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/schematics`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/threads team, draft only", kind: "route", expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => callRoute((await threadsRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}/threads`, cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/threads?revision=1 team, issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await threadsRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}/threads?revision=1`, cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/threads practice variant", kind: "route", expect: allow(["owner", "trainee"]),
+    call: async (f, cookie) => callRoute((await threadsRoute()).GET as never, { path: `/api/v1/schematics/${f.practiceSchematicId}/threads`, cookie, params: { schematicId: f.practiceSchematicId } }),
+  },
+  {
+    name: "POST /api/v1/schematics/[id]/threads team, revision in draft", kind: "route", expect: allow(["owner", "designer", "reviewer"], 201),
+    call: async (f, cookie) => callRoute((await threadsRoute()).POST as never, { method: "POST", path: `/api/v1/schematics/${f.teamSchematicId}/threads`, cookie,
+      params: { schematicId: f.teamSchematicId }, body: { anchor: { kind: "schematic" }, body: "Matrix thread", revisionId: f.revisionId } }),
+  },
+  {
+    // installers write on issued revisions (questions from site)
+    name: "POST /api/v1/schematics/[id]/threads team, issued", kind: "route", fixture: { revisionStatus: "issued" },
+    expect: allow(["owner", "designer", "reviewer", "installer"], 201),
+    call: async (f, cookie) => callRoute((await threadsRoute()).POST as never, { method: "POST", path: `/api/v1/schematics/${f.teamSchematicId}/threads`, cookie,
+      params: { schematicId: f.teamSchematicId }, body: { anchor: { kind: "schematic" }, body: "Matrix question from site" } }),
+  },
+  {
+    name: "POST /api/v1/schematics/[id]/threads practice variant", kind: "route", expect: allow(["owner", "trainee"], 201),
+    call: async (f, cookie) => callRoute((await threadsRoute()).POST as never, { method: "POST", path: `/api/v1/schematics/${f.practiceSchematicId}/threads`, cookie,
+      params: { schematicId: f.practiceSchematicId }, body: { anchor: { kind: "schematic" }, body: "Matrix practice note" } }),
+  },
+  {
+    name: "POST /api/v1/threads/[id]/replies team, revision in draft", kind: "route", expect: allow(["owner", "designer", "reviewer"], 201),
+    call: async (f, cookie) => callRoute((await repliesRoute()).POST as never, { method: "POST", path: `/api/v1/threads/${f.threadId}/replies`, cookie,
+      params: { threadId: f.threadId }, body: { body: "Matrix reply" } }),
+  },
+  {
+    name: "POST /api/v1/threads/[id]/replies team, issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(["owner", "designer", "reviewer", "installer"], 201),
+    call: async (f, cookie) => callRoute((await repliesRoute()).POST as never, { method: "POST", path: `/api/v1/threads/${f.threadId}/replies`, cookie,
+      params: { threadId: f.threadId }, body: { body: "Matrix reply from site" } }),
+  },
+  {
+    name: "POST /api/v1/threads/[id]/replies practice variant", kind: "route", expect: allow(["owner", "trainee"], 201),
+    call: async (f, cookie) => callRoute((await repliesRoute()).POST as never, { method: "POST", path: `/api/v1/threads/${f.practiceThreadId}/replies`, cookie,
+      params: { threadId: f.practiceThreadId }, body: { body: "Matrix practice reply" } }),
+  },
+  {
+    name: "PATCH /api/v1/threads/[id] resolve", kind: "route", expect: allow(["owner", "designer", "reviewer"]),
+    call: async (f, cookie) => callRoute((await threadRoute()).PATCH as never, { method: "PATCH", path: `/api/v1/threads/${f.threadId}`, cookie,
+      params: { threadId: f.threadId }, body: { resolved: true } }),
+  },
+  {
+    // the fixture's thread message is the reviewer's: only they may change it
+    name: "PATCH /api/v1/messages/[id] (the reviewer's own)", kind: "route", expect: allow(["reviewer"]),
+    call: async (f, cookie) => callRoute((await messageRoute()).PATCH as never, { method: "PATCH", path: `/api/v1/messages/${f.messageId}`, cookie,
+      params: { messageId: f.messageId }, body: { body: "Edited by the matrix" } }),
+  },
+  {
+    name: "DELETE /api/v1/messages/[id] (the reviewer's own)", kind: "route", expect: allow(["reviewer"]),
+    call: async (f, cookie) => callRoute((await messageRoute()).DELETE as never, { method: "DELETE", path: `/api/v1/messages/${f.messageId}`, cookie,
+      params: { messageId: f.messageId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/revisions team, draft only", kind: "route", expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => callRoute((await historyRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}/revisions`, cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/revisions team, issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await historyRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}/revisions`, cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/status draft → in-review (submit)", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await statusRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/status`, cookie,
+      params: { revisionId: f.revisionId }, body: { status: "in-review" } }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/status in-review → approved", kind: "route", fixture: { revisionStatus: "in-review" }, expect: allow(["owner", "reviewer"]),
+    call: async (f, cookie) => callRoute((await statusRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/status`, cookie,
+      params: { revisionId: f.revisionId }, body: { status: "approved" } }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/status in-review → draft (send back, with a reason)", kind: "route", fixture: { revisionStatus: "in-review" }, expect: allow(["owner", "reviewer"]),
+    call: async (f, cookie) => callRoute((await statusRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/status`, cookie,
+      params: { revisionId: f.revisionId }, body: { status: "draft", reason: "The bypass opening is below the zones' design Δp." } }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/status approved → issued", kind: "route", fixture: { revisionStatus: "approved" }, expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await statusRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/status`, cookie,
+      params: { revisionId: f.revisionId }, body: { status: "issued" } }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/restore", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await restoreRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/restore`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/restore practice variant", kind: "route", expect: allow(["trainee"]),
+    call: async (f, cookie) => callRoute((await restoreRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.practiceRevisionId}/restore`, cookie, params: { revisionId: f.practiceRevisionId } }),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/events team, draft only", kind: "route", expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => openStream(f.teamSchematicId, cookie),
+  },
+  {
+    name: "GET /api/v1/schematics/[id]/events practice variant", kind: "route", expect: allow(["owner", "trainee"]),
+    call: async (f, cookie) => openStream(f.practiceSchematicId, cookie),
+  },
+  {
+    // the demo owner owns the fixture's firm; setting the rule to what it is changes nothing for other tests
+    name: "action setFirmReviewRuleAction", kind: "action", expect: allow(["owner"]),
+    call: async (f, cookie) => callAction(async () => (await reviewActions()).setFirmReviewRuleAction({ projectId: f.projectId, noSelfApproval: true }), cookie),
+  },
+
   // ——— TODO: board routes not written yet; replace each with a real row ———
-  { name: "POST /api/v1/revisions/[id]/comments", kind: "route", todo: "expect allow(['owner','designer','reviewer'], 201)" },
   { name: "POST /api/v1/revisions/[id]/site-records", kind: "route", todo: "expect allow(['owner','installer'], 201) on an issued revision" },
 ];

@@ -99,14 +99,15 @@ describe("revisions", () => {
     const saved = await as("designer", () => actions.saveRevision({ schematicId: id, lockVersion: 1, doc: seedDoc, message: "for review" }));
     if (!saved.ok) throw new Error(saved.error);
     const revisionId = saved.data.revision.id;
-    const move = (who: string, status: string) => as(who, () => actions.setRevisionStatus({ revisionId, status }));
+    const move = (who: string, status: string, reason?: string) => as(who, () => actions.setRevisionStatus({ revisionId, status, reason }));
 
     expect(await move("trainee", "in-review")).toMatchObject({ ok: false, status: 403 });
     expect(await move("reviewer", "in-review")).toMatchObject({ ok: false, status: 403 });
     expect(await move("designer", "issued")).toMatchObject({ ok: false, status: 409 }); // not approved yet
     expect(await move("designer", "in-review")).toMatchObject({ ok: true, data: { status: "in-review" } });
     expect(await move("designer", "approved")).toMatchObject({ ok: false, status: 403 });
-    expect(await move("reviewer", "draft")).toMatchObject({ ok: true, data: { status: "draft" } }); // sent back
+    expect(await move("reviewer", "draft")).toMatchObject({ ok: false, status: 400, issues: [{ path: "reason" }] }); // a reason is required
+    expect(await move("reviewer", "draft", "Bypass opening too low")).toMatchObject({ ok: true, data: { status: "draft" } }); // sent back
     await move("designer", "in-review");
     expect(await move("reviewer", "approved")).toMatchObject({ ok: true, data: { status: "approved" } });
     expect(await move("reviewer", "issued")).toMatchObject({ ok: false, status: 403 });

@@ -1,50 +1,26 @@
-import { spawn, type ChildProcess } from "node:child_process";
-import fs from "node:fs";
-import path from "node:path";
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db";
 import { pgPool } from "@/lib/auth/pg-pool";
 import { ACCOUNT_LIMIT } from "@/lib/auth/rate-limit";
+import { startInstances, stopInstances, url } from "./helpers/instances";
+import { dropReviewProjects, makeReviewProject } from "./helpers/review-project";
+import { SseReader } from "./helpers/sse";
 
 // Two `next start` processes on the already-built .next (scripts/test.sh builds first),
 // one database: a session made on one is honoured by the other, signing out on one ends it
-// on both, and sign-in failures count across both (rate-limit counters live in PostgreSQL).
-
-const root = process.cwd();
-const ports = [Number(process.env.TWO_PORT_A ?? 3201), Number(process.env.TWO_PORT_B ?? 3202)] as const;
-const servers: ChildProcess[] = [];
-const url = (i: 0 | 1, p: string) => `http://127.0.0.1:${ports[i]}${p}`;
-
-async function waitUp(port: number, child: ChildProcess, log: () => string) {
-  const until = Date.now() + 45_000;
-  while (Date.now() < until) {
-    if (child.exitCode !== null) throw new Error(`next start on ${port} exited: ${log()}`);
-    try { if ((await fetch(`http://127.0.0.1:${port}/sign-in`)).ok) return; } catch { /* not yet */ }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`next start on ${port} did not answer within 45 s: ${log()}`);
-}
+// on both, sign-in failures count across both (rate-limit counters live in PostgreSQL), and
+// a live board hears through one instance what was written through the other (LISTEN/NOTIFY).
 
 beforeAll(async () => {
   expect(process.env.DATABASE_URL ?? "").toMatch(/_test$/);
-  if (!fs.existsSync(path.join(root, ".next/BUILD_ID"))) throw new Error("No production build in .next: run `npx next build` (npm test does it first).");
-  await Promise.all(ports.map((port) => {
-    let out = "";
-    const child = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-p", String(port), "-H", "127.0.0.1"], {
-      cwd: root, env: { ...process.env, PORT: String(port), NEXT_TELEMETRY_DISABLED: "1" }, stdio: ["ignore", "pipe", "pipe"], detached: true,
-    });
-    child.stdout!.on("data", (d) => { out += d; });
-    child.stderr!.on("data", (d) => { out += d; });
-    servers.push(child);
-    return waitUp(port, child, () => out.slice(-2000));
-  }));
+  await startInstances();
 }, 90_000);
 
 afterAll(async () => {
-  // each server was started in its own process group: stop the group (next start forks)
-  for (const s of servers) if (s.pid && s.exitCode === null) { try { process.kill(-s.pid, "SIGTERM"); } catch { /* gone */ } }
+  stopInstances();
   await db()("users").where("email", "like", "two-%@example.test").delete();
+  await dropReviewProjects();
   await db().destroy();
   await pgPool().end();
 });
@@ -90,4 +66,64 @@ describe("two app instances, one database", () => {
       expect(locked.headers.get("retry-after")).toMatch(/^\d+$/);
     }
   });
+});
+
+describe("live boards across two instances", () => {
+  const listen = async (i: 0 | 1, schematicId: string, cookie: string) => {
+    const res = await fetch(url(i, `/api/v1/schematics/${schematicId}/events`), { headers: { cookie, accept: "text/event-stream" } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toMatch(/^text\/event-stream/);
+    expect(res.headers.get("content-encoding")).toBeNull(); // never compressed (it would be held back)
+    return new SseReader(res);
+  };
+  const pct = (xs: number[], q: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(q * xs.length))]!;
+
+  it("threads and a status move written through A reach a viewer on B (and B's reach A), each well within 2 s; presence spans both", async () => {
+    const p = await makeReviewProject("in-review");
+    const { designer, reviewer } = p.people;
+    const onB = await listen(1, p.schematicId, designer.cookie);
+    const onA = await listen(0, p.schematicId, reviewer.cookie);
+    try {
+      await onB.next((e) => e.event === "hello");
+      await onA.next((e) => e.event === "hello");
+      // who is looking, whichever instance they are on
+      const seen = await onB.next((e) => e.event === "presence" && e.data.people.length === 2);
+      expect(seen.data.people.map((x: { name: string }) => x.name).sort()).toEqual(["Ivo Marsh", "Tamsin Reyes"]);
+
+      const write = (i: 0 | 1, path: string, cookie: string, body: unknown) =>
+        fetch(url(i, path), { method: "POST", headers: { cookie, "content-type": "application/json" }, body: JSON.stringify(body) });
+      const latencies: Record<string, number[]> = { "A→B": [], "B→A": [] };
+      const afterAnswer: number[] = [];
+      for (let k = 0; k < 10; k++) {
+        for (const [from, reader, cookie] of [[0, onB, reviewer.cookie], [1, onA, designer.cookie]] as const) {
+          const mark = reader.events.length;
+          const t0 = performance.now();
+          const res = await write(from, `/api/v1/schematics/${p.schematicId}/threads`, cookie, { anchor: { kind: "pipe", id: "z1-f0" }, body: `Round ${k}` });
+          const t1 = performance.now();
+          expect(res.status).toBe(201);
+          const { thread } = (await res.json()) as { thread: { id: string } };
+          const heard = await reader.next((e) => e.event === "thread" && e.data.threadId === thread.id, 2000, mark);
+          latencies[from === 0 ? "A→B" : "B→A"]!.push(heard.at - t0);
+          afterAnswer.push(heard.at - t1);
+        }
+      }
+      const back = await write(0, `/api/v1/revisions/${p.rev1}/status`, reviewer.cookie, { status: "draft", reason: "Zone 2 flow needs a second look." });
+      expect(back.status).toBe(200);
+      expect((await onB.next((e) => e.event === "revision", 2000)).data).toEqual({ revisionId: p.rev1, status: "draft" });
+      for (const [dir, xs] of Object.entries(latencies)) {
+        // write sent through one instance → event read by a client of the other (includes the write itself)
+        console.log(`[live] ${dir}: median ${pct(xs, 0.5).toFixed(1)} ms, p95 ${pct(xs, 0.95).toFixed(1)} ms, max ${Math.max(...xs).toFixed(1)} ms over ${xs.length} threads`);
+        expect(Math.max(...xs)).toBeLessThan(2000);
+      }
+      // the same events measured from when the writer had its answer (negative: the other instance's viewer heard first)
+      console.log(`[live] after the writer's answer: median ${pct(afterAnswer, 0.5).toFixed(1)} ms, max ${Math.max(...afterAnswer).toFixed(1)} ms`);
+      // hanging up on B is seen on A as one person fewer
+      const mark = onA.events.length;
+      await onB.close();
+      await onA.next((e) => e.event === "presence" && e.data.people.length === 1, 5000, mark);
+    } finally {
+      await onA.close();
+      await onB.close();
+    }
+  }, 60_000);
 });

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { config } from "@/lib/config";
+import { MessageText } from "@/components/review/message-text";
 import { demoDomainsText, isDemoAddress } from "@/lib/mail/demo-addresses";
 
 export const metadata: Metadata = { title: "Caught e-mail" };
@@ -24,11 +25,6 @@ async function caught(): Promise<CaughtMail[] | string> {
   }
 }
 
-function withLinks(text: string) {
-  return text.split(/(https?:\/\/\S+)/g).map((part, i) =>
-    /^https?:\/\//.test(part) ? <a key={i} href={part} className="break-all text-copper-600 underline">{part}</a> : part);
-}
-
 export default async function DevMailPage() {
   if (!config.mailViewer) notFound();
   const mail = await caught();
@@ -48,7 +44,7 @@ export default async function DevMailPage() {
                   <span className="num text-xs text-ink-faint">{m.date ? new Date(m.date).toISOString().replace("T", " ").slice(0, 19) : ""}</span>
                 </div>
                 <p className="text-sm text-ink-soft">to {(m.to ?? []).map((t) => t.address).join(", ")}</p>
-                <pre className="mt-3 whitespace-pre-wrap font-sans text-sm">{withLinks(m.text ?? "")}</pre>
+                <MessageText text={m.text ?? ""} className="mt-3 text-sm" newTab={false} />
               </li>
             ))}
           </ul>

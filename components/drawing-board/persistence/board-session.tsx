@@ -85,7 +85,7 @@ function Saving(p: Omit<Props, "units"> & { opened: Opened; revisions: Schematic
   const [sizing, setSizing] = useState<SizingMeta | null>(() => metaOf(p.opened.sizing));
   const value = {
     schematicId: p.view.schematic.id, projectId: p.view.schematic.projectId, name: p.view.schematic.name, projectName: p.projectName, role: p.role,
-    viewing: p.view.viewing, draftVisible: p.view.draftVisible, sizing, setSizing,
+    viewing: viewingNow(p.view.viewing, p.revisions), draftVisible: p.view.draftVisible, sizing, setSizing,
     canEdit: p.view.mayEdit && !p.opened.readOnly, mayEdit: p.view.mayEdit, canSize: p.canSize, readOnlyReason: p.readOnlyReason,
     revisions: p.revisions, setRevisions: p.setRevisions, save, reload: p.reload, unlock: p.unlock,
   };
@@ -95,6 +95,11 @@ function Saving(p: Omit<Props, "units"> & { opened: Opened; revisions: Schematic
       <ConflictDialog open={save.status === "conflict"} />
     </BoardSessionContext.Provider>
   );
+}
+
+/** The revision opened, with its status as it is now (it moves while the board is open). */
+function viewingNow(v: SchematicView["viewing"], revisions: SchematicView["revisions"]): SchematicView["viewing"] {
+  return v.kind === "revision" ? { kind: "revision", revision: revisions.find((r) => r.id === v.revision.id) ?? v.revision } : v;
 }
 
 function metaOf(sizing: SchematicView["sizing"]): SizingMeta | null {

@@ -1,9 +1,12 @@
 "use client";
 
 import { useState } from "react";
-import { setRevisionStatus, startNewDraft } from "@/components/drawing-board/actions";
+import { startNewDraft } from "@/components/drawing-board/actions";
+import { SendBackDialog } from "@/components/review/send-back-dialog";
 import { StatusBadge } from "@/components/projects/status-badge";
 import { Button } from "@/components/ui/button";
+import { fetchJson } from "@/lib/fetch-json";
+import type { RevisionRecord } from "@/db/queries/schematic-rows";
 import { transitionsFor, type RevisionStatus } from "@/lib/revisions/transitions";
 import { SaveRevisionDialog } from "./save-revision-dialog";
 import { SaveStatus } from "./save-status";
@@ -15,16 +18,24 @@ export function RevisionStatusBar() {
   const [dialog, setDialog] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  const [sendBack, setSendBack] = useState(false);
   const latest = session.revisions[0];
 
-  const move = async (to: RevisionStatus) => {
-    if (!latest) return;
+  /** POST /api/v1/revisions/{id}/status (lib/review/status-move.ts); the server's message when refused. */
+  const move = async (to: RevisionStatus, reason?: string): Promise<string | null> => {
+    if (!latest) return null;
     setBusy(true);
-    const r = await setRevisionStatus({ revisionId: latest.id, status: to });
-    setBusy(false);
-    if (!r.ok) return setError(r.error);
-    setError(null);
-    session.setRevisions(session.revisions.map((x) => (x.id === r.data.id ? { ...x, ...r.data, authorName: x.authorName } : x)));
+    try {
+      const r = await fetchJson<{ revision: RevisionRecord }>(`/api/v1/revisions/${latest.id}/status`, { method: "POST", body: JSON.stringify({ status: to, reason }) });
+      setError(null);
+      session.setRevisions(session.revisions.map((x) => (x.id === r.revision.id ? { ...x, ...r.revision, authorName: x.authorName } : x)));
+      return null;
+    } catch (e) {
+      if (!reason) setError((e as Error).message);
+      return (e as Error).message;
+    } finally {
+      setBusy(false);
+    }
   };
   const newDraft = async () => {
     setBusy(true);
@@ -44,7 +55,8 @@ export function RevisionStatusBar() {
       ) : <span className="text-ink-faint">No revision yet</span>}
       <SaveStatus />
       {latest && transitionsFor(latest.status, session.role).map((t) => (
-        <Button key={t.to} variant="secondary" className="px-2 py-1 text-xs" disabled={busy} onClick={() => move(t.to)}>{t.label}</Button>
+        <Button key={t.to} variant="secondary" className="px-2 py-1 text-xs" disabled={busy} data-testid={`move-${t.to}`}
+          onClick={() => (t.to === "draft" ? setSendBack(true) : void move(t.to))}>{t.label}</Button>
       ))}
       {session.canEdit && <Button variant="secondary" className="px-2 py-1 text-xs" onClick={() => setDialog(true)}>Save revision</Button>}
       {session.readOnlyReason === "issued" && session.mayEdit && (
@@ -52,6 +64,7 @@ export function RevisionStatusBar() {
       )}
       {error && <span role="alert" className="text-xs text-fault">{error}</span>}
       {session.canEdit && <SaveRevisionDialog open={dialog} onClose={() => setDialog(false)} />}
+      {latest && <SendBackDialog open={sendBack} revisionNumber={latest.number} onClose={() => setSendBack(false)} onSend={(reason) => move("draft", reason)} />}
     </div>
   );
 }

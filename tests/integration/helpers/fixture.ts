@@ -9,11 +9,14 @@ import { loadDemoDocument } from "@/db/seeds/demo/projects";
 
 // A throw-away project per matrix cell, so an allowed call that changes or deletes things
 // never disturbs another cell: the five demo people in their roles, a team schematic with
-// one revision, the trainee's practice variant, and a pending invitation.
+// one revision, the trainee's practice variant with one, a review thread on each, and a
+// pending invitation.
 
 export type Fixture = {
   projectId: string; projectName: string; teamSchematicId: string; practiceSchematicId: string;
   revisionId: string; invitationId: string; invitationToken: string; lockVersion: number; doc: Record<string, unknown>;
+  /** Review: the reviewer's thread (and its first message) on the team revision; the trainee's on their practice variant's revision. */
+  threadId: string; messageId: string; practiceRevisionId: string; practiceThreadId: string;
 };
 
 // Tagged per test file (each vitest file has its own module instance), so one file's
@@ -36,8 +39,17 @@ export async function makeFixture(o: { revisionStatus?: "draft" | "in-review" | 
     const [rev] = await trx("schematic_revisions").insert({ schematic_id: team.id, number: 1, document: doc, status: o.revisionStatus ?? "draft", author_id: "demo-designer" }).returning("id");
     const [practice] = await trx("schematics").insert({ project_id: projectId, name: "Nia's practice", kind: "practice", owner_id: "demo-trainee", variant_of: team.id, draft: doc, updated_by: "demo-trainee" }).returning("id");
     if (o.rooms) await trx("project_rooms").insert({ project_id: projectId, rooms: JSON.stringify(demoRooms()), updated_by: "demo-designer" });
+    const [prev] = await trx("schematic_revisions").insert({ schematic_id: practice.id, number: 1, document: doc, status: "draft", author_id: "demo-trainee" }).returning("id");
+    const thread = async (schematicId: string, revisionId: string, by: string) => {
+      const [t] = await trx("review_threads").insert({ schematic_id: schematicId, revision_id: revisionId, number: 1, anchor_kind: "schematic", created_by: by }).returning("id");
+      const [m] = await trx("thread_messages").insert({ thread_id: t.id, author_id: by, body: "Check the bypass setting." }).returning("id");
+      return { threadId: t.id as string, messageId: m.id as string };
+    };
+    const team1 = await thread(team.id, rev.id, "demo-reviewer");
+    const practice1 = await thread(practice.id, prev.id, "demo-trainee");
     const [inv] = await trx("invitations").insert({ project_id: projectId, email: `pending-${projectId.slice(0, 8)}@example.test`, role: "designer", token_hash: hash, invited_by: "demo-owner", expires_at: new Date(Date.now() + 86_400_000) }).returning("id");
-    return { projectId, projectName, teamSchematicId: team.id, practiceSchematicId: practice.id, revisionId: rev.id, invitationId: inv.id, invitationToken: token, lockVersion: 1, doc };
+    return { projectId, projectName, teamSchematicId: team.id, practiceSchematicId: practice.id, revisionId: rev.id, invitationId: inv.id, invitationToken: token, lockVersion: 1, doc,
+      ...team1, practiceRevisionId: prev.id, practiceThreadId: practice1.threadId };
   });
 }
 
@@ -50,7 +62,10 @@ export async function snapshot(f: Fixture): Promise<string> {
     k("invitations").where({ project_id: f.projectId }).orderBy("id").select("*"),
     k("schematics").where({ project_id: f.projectId }).orderBy("id").select("*"),
     k("schematic_revisions").whereIn("schematic_id", [f.teamSchematicId, f.practiceSchematicId]).orderBy("id").select("*"),
-    k("comments").whereIn("revision_id", [f.revisionId]).select("*"),
+    k("review_threads").whereIn("schematic_id", [f.teamSchematicId, f.practiceSchematicId]).orderBy("id").select("*"),
+    k("thread_messages").whereIn("thread_id", k("review_threads").whereIn("schematic_id", [f.teamSchematicId, f.practiceSchematicId]).select("id")).orderBy("id").select("*"),
+    k("revision_events").whereIn("schematic_id", [f.teamSchematicId, f.practiceSchematicId]).orderBy("id").select("*"),
+    k("organisations").where({ id: demoFirm.id }).select("no_self_approval"),
     k("site_records").whereIn("revision_id", [f.revisionId]).select("*"),
     k("users").where("id", "like", "demo-%").orderBy("id").select("id", "email", "password_hash"),
     k("projects").where("name", "like", `${FIXTURE_PREFIX} new %`).count("* as n"),

@@ -21,3 +21,23 @@ export function linkIn(text: string, path: string): string {
   if (!m) throw new Error(`no ${path} link in: ${text}`);
   return m[1]!;
 }
+
+/** Every message caught for an address so far, oldest first. */
+export async function mailsTo(address: string): Promise<Caught[]> {
+  const all = (await (await fetch(`${base()}/api/email`)).json()) as Caught[];
+  return all.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+}
+
+/** Waits until an address has `n` messages (then a moment longer, to catch an unwanted extra one). */
+export async function waitForMails(address: string, n: number, timeoutMs = 5000): Promise<Caught[]> {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const mine = await mailsTo(address);
+    if (mine.length >= n) {
+      await new Promise((r) => setTimeout(r, 300));
+      return mailsTo(address);
+    }
+    if (Date.now() > until) return mine;
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}

@@ -8,6 +8,8 @@ import { NotAllowed } from "@/components/ui/not-allowed";
 import { getProjectHead } from "@/db/queries/project-admin";
 import { listMembers } from "@/lib/team/members";
 import { listPendingInvitations } from "@/lib/team/invitations";
+import { FirmRuleForm } from "@/components/review/firm-rule-form";
+import { firmRuleOf } from "@/lib/review/firm-rule";
 import { InviteForm, RemoveMemberButton, RevokeInvitationButton, RoleSelect } from "@/components/team/team-forms";
 
 export const metadata: Metadata = { title: "Team" };
@@ -28,8 +30,8 @@ export default async function TeamPage({ params, searchParams }: { params: Promi
   if (!access.ok) return <NotAllowed message={access.message} />;
   const { user, role } = access.value;
   const manage = can(role, "members.manage");
-  const [project, members, invitations] = await Promise.all([
-    getProjectHead(projectId), listMembers(projectId), manage ? listPendingInvitations(projectId) : Promise.resolve([]),
+  const [project, members, invitations, rule] = await Promise.all([
+    getProjectHead(projectId), listMembers(projectId), manage ? listPendingInvitations(projectId) : Promise.resolve([]), firmRuleOf(projectId),
   ]);
   if (!project) notFound();
 
@@ -65,6 +67,11 @@ export default async function TeamPage({ params, searchParams }: { params: Promi
             </li>
           ))}
         </ul>
+      </section>
+
+      <section className="mt-6 rounded-lg border border-ink/10 bg-white p-4 shadow-sm" aria-labelledby="review-rule-h">
+        <h2 id="review-rule-h" className="mb-2 font-semibold">Review</h2>
+        <FirmRuleForm projectId={projectId} firmName={rule.firmName} initial={rule.noSelfApproval} mayChange={rule.mayChange} />
       </section>
 
       {manage && (
