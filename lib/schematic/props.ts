@@ -7,6 +7,7 @@
  * engine, which reports them as `input.*` findings naming the part or pipe.
  */
 import { z } from "zod";
+import { valveModelOptions } from "./valve-models";
 
 const kv = (what: string) =>
   z.number().min(0.001).max(1000).describe(`${what}, Kv in m³/h at 1 bar`);
@@ -39,6 +40,9 @@ const heatSource = z.object({
 
 const empty = z.object({});
 
+/** A valve model with a turns table (lib/schematic/valve-models.ts): the site sheet gives presets in turns too. */
+const valveModelField = z.enum(valveModelOptions).optional().describe("valve model, for presets in turns on the site sheet");
+
 export const partPropsSchemas = {
   "heat-pump": heatSource,
   boiler: heatSource,
@@ -67,7 +71,7 @@ export const partPropsSchemas = {
       .default(null)
       .describe("opening differential pressure, kPa (null: recommend one)"),
   }),
-  "balancing-valve": z.object({ kv: optionalKv("preset (null: compute the preset)") }),
+  "balancing-valve": z.object({ kv: optionalKv("preset (null: compute the preset)"), valveModel: valveModelField }),
   "isolation-valve": z.object({
     kv: optionalKv("open"),
     open: z.boolean().default(true).describe("open as drawn"),
@@ -95,6 +99,7 @@ export const partPropsSchemas = {
     roomTemperatureC: z.number().min(-10).max(40).default(20).describe("room temperature, °C"),
     heatLoadW: powerW("room heat load").nullable().default(null),
     valveKv: optionalKv("radiator valve (lockshield) preset"),
+    valveModel: valveModelField,
     deltaTK,
     waterVolumeL: volumeL("water content").nullable().default(null),
   }),

@@ -52,3 +52,15 @@ export function kvDpDerivativePaPerM3h(flowM3h: number, kv: number, densityKgM3:
 export const cvToKv = (cv: number): number => cv * KV_PER_CV;
 /** Kv → Cv: Cv = 1.1561·Kv. */
 export const kvToCv = (kv: number): number => kv / KV_PER_CV;
+
+/**
+ * The one Kv of devices in series (same flow through each, so their Δp add):
+ * from Δp = 1e5·(Q/Kv)²·ρ/1000 for each, 1/Kv² = Σ 1/Kvᵢ² (IEC 60534-1 definition
+ * of Kv applied to each device). Kv 1.0 and Kv 1.0 in series → 0.7071.
+ */
+export function kvInSeries(...kvs: number[]): number {
+  if (kvs.length === 0) throw new RangeError("kvInSeries needs at least one Kv");
+  let sum = 0;
+  kvs.forEach((kv, i) => { positive(`kvs[${i}]`, kv); sum += 1 / (kv * kv); });
+  return 1 / Math.sqrt(sum);
+}

@@ -44,7 +44,8 @@ export async function snapshot(f: Fixture): Promise<string> {
     k("schematics").where({ project_id: f.projectId }).orderBy("id").select("*"),
     k("schematic_revisions").whereIn("schematic_id", [f.teamSchematicId, f.practiceSchematicId]).orderBy("id").select("*"),
     k("comments").whereIn("revision_id", [f.revisionId]).select("*"),
-    k("site_records").whereIn("revision_id", [f.revisionId]).select("*"),
+    k("site_events").where({ project_id: f.projectId }).orderBy("seq").select("*"),
+    k("attachments").where({ project_id: f.projectId }).orderBy("id").select("*"),
     k("users").where("id", "like", "demo-%").orderBy("id").select("id", "email", "password_hash"),
     k("projects").where("name", "like", `${FIXTURE_PREFIX} new %`).count("* as n"),
   ]);
