@@ -51,11 +51,12 @@ function relative(label: string, measured: number, design: number | null, unit: 
   return { label, measured: shown, design: `${design.toFixed(d)} ${unit}`, deviation: `${sign(dev, d)} ${unit} (${sign(pct, 1)} %)`, ok: Math.abs(pct) <= tol + 1e-9, tolerance };
 }
 
-function absolute(label: string, measured: number, design: number | null, unit: string, d: number, tol: number, shown: string): ReadingCheck {
-  const tolerance = `±${tol} ${unit}`;
+/** `unit` of the values; `devUnit` of differences (a temperature difference is in K). */
+function absolute(label: string, measured: number, design: number | null, unit: string, d: number, tol: number, shown: string, devUnit = unit): ReadingCheck {
+  const tolerance = `±${tol} ${devUnit}`;
   if (design === null) return { label, measured: shown, design: "—", deviation: "", ok: null, tolerance };
   const dev = measured - design;
-  return { label, measured: shown, design: `${design.toFixed(d)} ${unit}`, deviation: `${sign(dev, d)} ${unit}`, ok: Math.abs(dev) <= tol + 1e-9, tolerance };
+  return { label, measured: shown, design: `${design.toFixed(d)} ${unit}`, deviation: `${sign(dev, d)} ${devUnit}`, ok: Math.abs(dev) <= tol + 1e-9, tolerance };
 }
 
 export function checkReading(r: Reading, design: CommissioningDesign): ReadingCheck {
@@ -64,9 +65,9 @@ export function checkReading(r: Reading, design: CommissioningDesign): ReadingCh
     case "heat-source-flow":
       return relative("Heat-source flow (heat meter)", flowToM3h(r.value, r.unit), design.heatSourceFlowM3h, "m³/h", 2, TOLERANCES.flowPercent, shown);
     case "flow-temperature":
-      return absolute("Flow temperature", r.value, design.flowTemperatureC, "K", 1, TOLERANCES.temperatureK, shown);
+      return absolute("Flow temperature", r.value, design.flowTemperatureC, "°C", 1, TOLERANCES.temperatureK, shown, "K");
     case "return-temperature":
-      return absolute("Return temperature", r.value, design.returnTemperatureC, "K", 1, TOLERANCES.temperatureK, shown);
+      return absolute("Return temperature", r.value, design.returnTemperatureC, "°C", 1, TOLERANCES.temperatureK, shown, "K");
     case "bypass-opening":
       return relative("Bypass opening as set", pressureToKpa(r.value, r.unit, design.densityKgM3), design.bypass?.openingKpa ?? null, "kPa", 1, TOLERANCES.openingPercent, shown);
     case "pump-head": {

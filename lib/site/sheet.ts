@@ -8,12 +8,11 @@
  * the vessel, safety valve, vents, drains) under "Plant and accessories". Each group
  * keeps the order the circuit's path meets its pipes and parts, flow leg first.
  */
-import { partRegistry, splitPortRef, type Part, type Pipe, type Results, type Schematic } from "@/lib/schematic";
+import { splitPortRef, type Pipe, type Results, type Schematic } from "@/lib/schematic";
 import { balancingTargets } from "./balancing";
+import { partName } from "./names";
 import { partCaution, partSettings } from "./settings";
 import type { PartRow, PipeRow, SiteGroup, SiteRow } from "./types";
-
-export const partName = (p: Pick<Part, "id" | "type" | "label">) => p.label?.trim() || `${partRegistry[p.type]?.label ?? p.type} ${p.id}`;
 
 const fittingWords: Record<string, [string, string]> = {
   elbow: ["elbow", "elbows"], bend: ["bend", "bends"], teeRun: ["tee (run)", "tees (run)"],
