@@ -23,6 +23,7 @@ const expected: Record<Action, Record<ProjectRole, boolean>> = {
   "comment.write":     { owner: Y, designer: Y, reviewer: Y, installer: n, trainee: n },
   "site.read":         { owner: Y, designer: Y, reviewer: Y, installer: Y, trainee: Y },
   "site.record":       { owner: Y, designer: n, reviewer: n, installer: Y, trainee: n },
+  "site.rules":        { owner: Y, designer: n, reviewer: n, installer: n, trainee: n },
 };
 
 describe("can(role, action)", () => {
