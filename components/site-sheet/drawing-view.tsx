@@ -32,10 +32,10 @@ export function DrawingView({ sheet, ticks, focus, onPick, onBack }: {
     el?.scrollIntoView({ block: "center", inline: "center" });
   }, [focus, zoom]);
 
-  useEffect(() => { // fit the sheet's width to the screen first
+  useEffect(() => { // fit the sheet's height to the box first: readable, scrolled sideways with a thumb
     const svgEl = box.current?.querySelector("svg");
-    const w = Number(svgEl?.getAttribute("width"));
-    if (w && box.current) setZoom(Math.min(1, box.current.clientWidth / w));
+    const h = Number(svgEl?.getAttribute("height"));
+    if (h && box.current) setZoom(Math.min(1, box.current.clientHeight / h));
   }, [sheet.revision.id]);
 
   const pick = (e: React.MouseEvent) => {

@@ -12,7 +12,7 @@ export function Field({ label, hint, children }: { label: string; hint?: ReactNo
     <label className="block text-sm font-medium text-ink">
       {label}
       {children}
-      {hint ? <span className="mt-0.5 block text-sm font-normal text-ink-soft">{hint}</span> : null}
+      {hint ? <span className="mt-0.5 block text-sm font-normal text-ink">{hint}</span> : null}
     </label>
   );
 }

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { pressureTestData } from "@/lib/site/events";
 import { evaluatePressureTest, isolateBeforeTest } from "@/lib/site/pressure-test";
 import type { SiteSheet } from "@/lib/site/site-view";
-import { bigButton, Caution, Field, num, NumberInput, Select, TextInput, Verdict } from "./field";
+import { bigButton, Caution, Field, inputClass, num, NumberInput, Select, TextInput, Verdict } from "./field";
 
 const localNow = (minutesAgo = 0) => {
   const d = new Date(Date.now() - minutesAgo * 60_000);
@@ -50,11 +50,11 @@ export function PressureTestForm({ sheet, corrects, onSave }: { sheet: SiteSheet
       <p className="text-sm">Your firm&apos;s rule: at most <strong className="num">{rule.maxDropBar} bar</strong> drop over <strong className="num">{rule.holdMinutes} min</strong>. Basis: {rule.basis}.</p>
       <Field label="Medium"><Select name="medium" defaultValue="water"><option value="water">Water</option><option value="air">Air</option><option value="inert-gas">Inert gas</option></Select></Field>
       <Field label="Test pressure, bar"><NumberInput name="testPressureBar" required onChange={(e) => setTestBar(num(e.target.value) ?? null)} /></Field>
+      <Field label="Started"><input type="datetime-local" name="startedAt" required defaultValue={localNow(60)} className={inputClass} /></Field>
+      <Field label="Ended"><input type="datetime-local" name="endedAt" required defaultValue={localNow()} className={inputClass} /></Field>
       <div className="grid grid-cols-2 gap-3">
         <Field label="Start reading, bar"><NumberInput name="startPressureBar" required /></Field>
         <Field label="End reading, bar"><NumberInput name="endPressureBar" required /></Field>
-        <Field label="Started"><input type="datetime-local" name="startedAt" required defaultValue={localNow(60)} className="mt-1 block h-12 w-full rounded-md border border-ink/30 bg-white px-2 text-base" /></Field>
-        <Field label="Ended"><input type="datetime-local" name="endedAt" required defaultValue={localNow()} className="mt-1 block h-12 w-full rounded-md border border-ink/30 bg-white px-2 text-base" /></Field>
         <Field label="Ambient at start, °C"><NumberInput name="ambientStartC" required /></Field>
         <Field label="Ambient at end, °C"><NumberInput name="ambientEndC" required /></Field>
       </div>

@@ -52,7 +52,7 @@ export function SiteRowView({ row, tick, mayRecord, highlighted, onToggle, onDra
   row: SiteRow; tick?: ShownTick; mayRecord: boolean; highlighted: boolean; onToggle: () => void; onDrawing?: () => void; onPhoto?: () => void;
 }) {
   return (
-    <li id={`row-${row.id}`} data-row={row.id} className={`flex scroll-mt-44 gap-3 border-b border-ink/10 px-3 py-3 ${highlighted ? "bg-copper-50 outline-2 outline-copper-500" : "bg-white"}`}>
+    <li id={`row-${row.id}`} data-row={row.id} className={`flex scroll-mt-48 gap-3 border-b border-ink/10 px-3 py-3 ${highlighted ? "bg-copper-50 outline-2 outline-copper-500" : "bg-white"}`}>
       <TickButton id={row.id} tick={tick} disabled={!mayRecord} onToggle={onToggle} />
       <div className="min-w-0 flex-1">
         {row.kind === "pipe" ? <PipeBody row={row} /> : <PartBody row={row} />}

@@ -43,16 +43,14 @@ export function SiteSheetApp({ initial }: { initial: SiteSheet }) {
     <OfflineShell>
       <div className="mx-auto max-w-3xl pb-24" data-testid="site-sheet">
         <div className="sticky top-14 z-20 border-b border-ink/15 bg-paper">
-          <div className="flex flex-wrap items-center justify-between gap-2 px-3 pt-2">
-            <div className="min-w-0">
-              <h1 className="truncate text-base font-bold">{sheet.project.name} · {sheet.schematic.name}</h1>
-              <p className="text-sm text-ink-soft">Site sheet · Rev {sheet.revision.number} (issued)</p>
-            </div>
+          <h1 className="truncate px-3 pt-2 text-base font-bold">{sheet.project.name} · {sheet.schematic.name}</h1>
+          <div className="flex flex-wrap items-center justify-between gap-x-2 gap-y-1 px-3">
+            <p className="text-sm text-ink">Site sheet · Rev {sheet.revision.number} (issued)</p>
             <SyncStatus link={data.link} sending={data.sending} items={items} onRetry={() => void data.sync()} />
           </div>
-          <nav className="mt-1 grid grid-cols-5" aria-label="Site sheet">
+          <nav className="mt-1 grid grid-cols-5" aria-label="Site sheet" role="tablist">
             {tabs.map(([id, label]) => (
-              <button key={id} type="button" onClick={() => setTab(id)} aria-current={tab === id ? "page" : undefined}
+              <button key={id} type="button" role="tab" onClick={() => setTab(id)} aria-selected={tab === id}
                 className={`min-h-12 border-b-4 text-sm font-semibold ${tab === id ? "border-copper-600 text-ink" : "border-transparent text-ink-soft"}`}>
                 {label}
               </button>

@@ -7,13 +7,14 @@
  */
 import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, type PrecacheEntry } from "serwist";
 
-const scope = self as unknown as { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
+// `self.__SW_MANIFEST` is replaced by the precache list when the worker is built (it must stay written this way).
+type WithManifest = { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
 
 const sitePage = /^\/projects\/[^/]+\/schematics\/[^/]+\/site\/?$/;
 const thumbnail = /^\/api\/v1\/uploads\/[^/]+\/thumbnail$/;
 
 const serwist = new Serwist({
-  precacheEntries: scope.__SW_MANIFEST,
+  precacheEntries: (self as unknown as WithManifest).__SW_MANIFEST,
   skipWaiting: true,
   clientsClaim: true,
   navigationPreload: false,
