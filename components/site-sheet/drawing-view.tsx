@@ -29,7 +29,12 @@ export function DrawingView({ sheet, ticks, focus, onPick, onBack }: {
 
   useEffect(() => {
     const el = focus ? box.current?.querySelector(`[data-pipe="${esc(focus)}"],[data-part="${esc(focus)}"]`) : null;
-    el?.scrollIntoView({ block: "center", inline: "center" });
+    if (!el || !box.current) return;
+    // centre it inside the drawing's own scroll box (scrollIntoView would move the page too)
+    const b = box.current.getBoundingClientRect();
+    const r = el.getBoundingClientRect();
+    box.current.scrollLeft += r.left + r.width / 2 - (b.left + b.width / 2);
+    box.current.scrollTop += r.top + r.height / 2 - (b.top + b.height / 2);
   }, [focus, zoom]);
 
   useEffect(() => { // fit the sheet's height to the box first: readable, scrolled sideways with a thumb

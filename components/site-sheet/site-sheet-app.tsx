@@ -30,8 +30,9 @@ export function SiteSheetApp({ initial }: { initial: SiteSheet }) {
   const [corrects, setCorrects] = useState<string | null>(null);
   const ticks = useMemo(() => shownTicks(sheet.ticks, items, sheet.me.name), [sheet.ticks, items, sheet.me.name]);
 
-  useEffect(() => { // a jump from the drawing: bring its row into view
+  useEffect(() => { // a jump from the drawing brings its row into view; another tab opens at its top
     if (tab === "sheet" && highlight) document.getElementById(`row-${highlight}`)?.scrollIntoView({ block: "start" });
+    else if (tab !== "sheet") window.scrollTo({ top: 0 });
   }, [tab, highlight]);
 
   const save = (kind: "pressure-test" | "fill" | "commissioning") => async (d: unknown) => {
@@ -41,7 +42,7 @@ export function SiteSheetApp({ initial }: { initial: SiteSheet }) {
 
   return (
     <OfflineShell>
-      <div className="mx-auto max-w-3xl pb-24" data-testid="site-sheet">
+      <div className="mx-auto max-w-3xl pb-24" data-testid="site-sheet" data-served-at={initial.asOf}>
         <div className="sticky top-14 z-20 border-b border-ink/15 bg-paper">
           <h1 className="truncate px-3 pt-2 text-base font-bold">{sheet.project.name} · {sheet.schematic.name}</h1>
           <div className="flex flex-wrap items-center justify-between gap-x-2 gap-y-1 px-3">
