@@ -33,7 +33,8 @@ test("installer works offline and everything is sent once back online", async ({
   await page.goto(url);
   await expect(page.getByTestId("sync-state")).toHaveText("All sent");
   // the service worker runs the page and has kept it (and its scripts) for later
-  await page.waitForFunction(async () => !!navigator.serviceWorker?.controller && !!(await caches.match(location.href, { ignoreVary: true })), null, { timeout: 30_000 });
+  await expect(page.locator("html")).toHaveAttribute("data-offline-ready", "true", { timeout: 30_000 });
+  expect(await page.evaluate(async () => (await caches.match(location.href, { ignoreVary: true }))?.status)).toBe(200);
   await page.screenshot({ path: `${shots}/site-online.png` });
 
   await context.setOffline(true);
