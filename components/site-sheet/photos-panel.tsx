@@ -8,10 +8,17 @@ import { bigButton, Field, Select } from "./field";
 const MB = 1024 * 1024;
 const limitFor = (type: string) => (type === "application/pdf" ? 25 * MB : 15 * MB);
 
+function Placeholder({ text }: { text: string }) {
+  return <span className="flex h-20 w-20 shrink-0 items-center justify-center rounded bg-paper-dark text-sm font-bold">{text}</span>;
+}
+
+/** The photo as taken, from the phone's own copy (a blob: URL) until the server has its thumbnail. */
 function Preview({ p }: { p: OutboxPhoto }) {
+  const [broken, setBroken] = useState(false);
   const url = useMemo(() => (p.contentType.startsWith("image/") ? URL.createObjectURL(p.file) : null), [p.file, p.contentType]);
   useEffect(() => () => { if (url) URL.revokeObjectURL(url); }, [url]);
-  return url ? <img src={url} alt={p.filename} className="h-20 w-20 rounded object-cover" /> : <span className="flex h-20 w-20 items-center justify-center rounded bg-paper-dark text-sm font-bold">PDF</span>;
+  if (!url || broken) return <Placeholder text={p.contentType === "application/pdf" ? "PDF" : "file"} />;
+  return <img src={url} alt={p.filename} onError={() => setBroken(true)} className="h-20 w-20 shrink-0 rounded object-cover" />;
 }
 
 /** Photos and documents: camera or file, pinned to the project or a part or pipe; sent when there is a network. */
@@ -23,7 +30,7 @@ export function PhotosPanel({ sheet, items, attachments, pinTo, onAdd }: {
   const [error, setError] = useState<string | null>(null);
   useEffect(() => setPin(pinTo ?? ""), [pinTo]);
   const waiting = items.filter((i): i is OutboxPhoto => i.type === "photo");
-  const label = (id: string | null) => (id ? (sheet.rows[id]?.kind === "part" ? `${(sheet.rows[id] as { label: string }).label} (${id})` : `pipe ${id}`) : "the project");
+  const label = (id: string | null | undefined) => (id ? (sheet.rows[id]?.kind === "part" ? `${(sheet.rows[id] as { label: string }).label} (${id})` : `pipe ${id}`) : "this schematic");
 
   const take = async (files: FileList | null) => {
     const file = files?.[0];
@@ -64,7 +71,7 @@ export function PhotosPanel({ sheet, items, attachments, pinTo, onAdd }: {
             <Preview p={p} />
             <div className="min-w-0 text-sm">
               <p className="truncate font-semibold">{p.filename}</p>
-              <p>On {label(p.target?.id ?? null)}</p>
+              <p>On {p.target ? label(p.target.id) : "the project"}</p>
               {p.state === "waiting" ? <p className="font-semibold text-warn">waiting to send</p> : <p className="font-semibold text-fault">refused: {p.error}</p>}
             </div>
           </li>
@@ -72,7 +79,7 @@ export function PhotosPanel({ sheet, items, attachments, pinTo, onAdd }: {
         {(attachments ?? []).map((a) => (
           <li key={a.id} className="flex gap-3 rounded-md border border-ink/15 bg-white p-2" data-testid="photo-listed" data-id={a.id}>
             {a.thumbnailUrl ? <img src={a.thumbnailUrl} alt={a.fileName} className="h-20 w-20 rounded object-cover" data-testid="photo-thumb" />
-              : <span className="flex h-20 w-20 items-center justify-center rounded bg-paper-dark text-sm font-bold">PDF</span>}
+              : <Placeholder text="PDF" />}
             <div className="min-w-0 text-sm">
               <a href={a.url} target="_blank" rel="noreferrer" className="block truncate font-semibold text-copper-700 underline">{a.fileName}</a>
               <p>On {a.target?.schematicId === sheet.schematic.id ? label(a.target.id) : a.target ? "another schematic" : "the project"}</p>

@@ -47,7 +47,7 @@ export function SiteSheetApp({ initial }: { initial: SiteSheet }) {
           <h1 className="truncate px-3 pt-2 text-base font-bold">{sheet.project.name} · {sheet.schematic.name}</h1>
           <div className="flex flex-wrap items-center justify-between gap-x-2 gap-y-1 px-3">
             <p className="text-sm text-ink">Site sheet · Rev {sheet.revision.number} (issued)</p>
-            <SyncStatus link={data.link} sending={data.sending} items={items} onRetry={() => void data.sync()} />
+            <SyncStatus link={data.link} sending={data.sending} items={items} onRetry={() => void data.sync()} onDismiss={(seq) => void data.dismiss(seq)} />
           </div>
           <nav className="mt-1 grid grid-cols-5" aria-label="Site sheet" role="tablist">
             {tabs.map(([id, label]) => (

@@ -9,7 +9,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import type { SiteEvent, SiteEventKind } from "@/lib/site/events";
 import type { SiteSheet } from "@/lib/site/site-view";
 import type { PublicAttachment } from "@/lib/storage/uploads";
-import { enqueue, keepAttachments, keepSheet, keptAttachments, keptSheet, outbox, type OutboxItem, type OutboxPhoto } from "./store";
+import { enqueue, keepAttachments, keepSheet, keptAttachments, keptSheet, outbox, removeItems, type OutboxItem, type OutboxPhoto } from "./store";
 import { NoNetwork, SignedOut, syncOutbox } from "./sync";
 
 /** A v4 uuid even where crypto.randomUUID is missing (plain-http pages on a phone). */
@@ -94,7 +94,10 @@ export function useSiteData(initial: SiteSheet) {
     void sync();
   }, [schematicId, projectId, reloadItems, sync]);
 
-  return { sheet, attachments, items, link, sending, record, addPhoto, sync };
+  /** A refused item, read and put aside by the installer. */
+  const dismiss = useCallback(async (seq: number) => { await removeItems([seq]); await reloadItems(); }, [reloadItems]);
+
+  return { sheet, attachments, items, link, sending, record, addPhoto, sync, dismiss };
 }
 
 export type SiteData = ReturnType<typeof useSiteData>;
