@@ -10,6 +10,7 @@ import { OfflineShell } from "./offline/offline-shell";
 import { shownTicks } from "./overlay";
 import { PhotosPanel } from "./photos-panel";
 import { PressureTestForm } from "./pressure-test-form";
+import { Notes } from "./notes";
 import { CheckedRecords, PressureRecords } from "./records-list";
 import { RuleEditor } from "./rule-editor";
 import { SheetList } from "./sheet-list";
@@ -82,6 +83,7 @@ export function SiteSheetApp({ initial }: { initial: SiteSheet }) {
             {sheet.me.mayRecord && <FillForm sheet={sheet} onSave={save("fill")} />}
             <h2 className="px-3 text-lg font-bold">Flush and fill records</h2>
             <CheckedRecords sheet={sheet} items={items} kind="fill" />
+            <Notes sheet={sheet} items={items} onSave={(target, d) => data.record("note", target, d)} />
           </div>
         )}
         {tab === "readings" && (

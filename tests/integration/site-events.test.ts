@@ -130,6 +130,17 @@ describe("site events", () => {
     expect(rec.checks[1].ok).toBe(true);
   });
 
+  it("notes, on the schematic or pinned to a part, come back with their author", async () => {
+    const pinned = { id: randomUUID(), kind: "note", target: "ev", madeAt: at(85), data: { text: "Vessel charged before filling (invented note)" } };
+    const loose = { id: randomUUID(), kind: "note", madeAt: at(86), data: { text: "Filling loop disconnected" } };
+    const empty = { id: randomUUID(), kind: "note", madeAt: at(87), data: { text: "  " } };
+    const r = await post(installer, { events: [pinned, loose, empty] });
+    expect(r.body.results.map((x: { status: string }) => x.status)).toEqual(["applied", "applied", "error"]);
+    expect(r.body.results[2].error).toMatch(/^data\.text: write the note/);
+    const notes = (await read(owner)).body.records.notes;
+    expect(notes.map((n: { target: string | null; author: { name: string } }) => [n.target, n.author.name])).toEqual([["ev", "Callum Ash"], [null, "Callum Ash"]]);
+  });
+
   it("designers, reviewers and trainees read the sheet but cannot record; nothing is recorded without an issued revision", async () => {
     for (const who of ["designer", "reviewer", "trainee"] as const) {
       const c = await cookieFor(who);
