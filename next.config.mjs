@@ -4,7 +4,7 @@ import { apiContentSecurityPolicy, commonSecurityHeaders } from "./lib/http/secu
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // knex ships optional drivers (sqlite, mssql…) the bundler cannot resolve; keep it external.
-  serverExternalPackages: ["knex", "pg", "nodemailer", "rate-limiter-flexible"],
+  serverExternalPackages: ["knex", "pg", "nodemailer", "rate-limiter-flexible", "esbuild", "sharp"],
   poweredByHeader: false,
   experimental: {
     // One body limit for server actions and route handlers (lib/http/limits.mjs); proxy.ts

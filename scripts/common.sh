@@ -143,7 +143,7 @@ start_services() {
   STARTED_PIDS=()
   mkdir -p .run/mail .run/s3
   start_service mail "$SMTP_PORT" node_modules/.bin/maildev --smtp "$SMTP_PORT" --web "$MAIL_WEB_PORT" --ip 127.0.0.1 --web-ip 127.0.0.1 --mail-directory .run/mail
-  start_service s3 "$S3_PORT" node_modules/.bin/s3rver -d .run/s3 -a 127.0.0.1 -p "$S3_PORT" --silent --configure-bucket "${S3_BUCKET:-loopwright-uploads}"
+  start_service s3 "$S3_PORT" node_modules/.bin/s3rver -d .run/s3 -a 127.0.0.1 -p "$S3_PORT" --silent --configure-bucket "${S3_BUCKET:-loopwright-uploads}" scripts/s3-cors.xml
 }
 
 stop_started() {

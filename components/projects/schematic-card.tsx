@@ -28,6 +28,9 @@ export function SchematicCard({ projectId, s, compact = false, canVariant = fals
       </div>
       <div className="mt-3 flex flex-wrap items-center gap-2">
         <Link href={href} className="rounded-md bg-copper-500 px-3 py-1.5 text-sm font-medium text-white hover:bg-copper-600">Open</Link>
+        {s.revisions.some((r) => r.status === "issued") && (
+          <Link href={`${href}/site`} className="rounded-md border border-copper-500 px-3 py-1.5 text-sm font-medium text-copper-700 hover:bg-copper-50" data-testid="site-sheet-link">Site sheet</Link>
+        )}
         {canVariant && <NewVariantButton schematicId={s.id} label={variantLabel} />}
       </div>
       {s.revisions.length > 0 && (

@@ -24,6 +24,7 @@ const expected: Record<Action, Record<ProjectRole, boolean>> = {
   "site.read":         { owner: Y, designer: Y, reviewer: Y, installer: Y, trainee: Y },
   "site.record":       { owner: Y, designer: n, reviewer: n, installer: Y, trainee: n },
   "rooms.edit":        { owner: Y, designer: Y, reviewer: n, installer: n, trainee: n },
+  "site.rules":        { owner: Y, designer: n, reviewer: n, installer: n, trainee: n },
 };
 
 describe("can(role, action)", () => {

@@ -9,7 +9,7 @@ export const actions = [
   "project.read", "project.update", "project.delete", "members.manage",
   "schematic.read", "schematic.edit", "schematic.size", "variant.practice", "variant.compare",
   "revision.save", "revision.submit", "revision.review", "revision.issue",
-  "comment.write", "site.read", "site.record", "rooms.edit",
+  "comment.write", "site.read", "site.record", "rooms.edit", "site.rules",
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -48,6 +48,7 @@ export const actionWords: Record<Action, string> = {
   "revision.save": "save revisions", "revision.submit": "submit a revision for review", "revision.review": "approve or send back a revision",
   "revision.issue": "issue an approved revision", "comment.write": "write comments", "site.read": "read the site sheet",
   "site.record": "record site work", "rooms.edit": "change the rooms or the firm's emitter list",
+  "site.rules": "set the firm's site rules (pressure-test drop and hold time)",
 };
 
 /** Roles that may do an action, for "needs owner or designer" messages. */

@@ -7,6 +7,7 @@
  * engine, which reports them as `input.*` findings naming the part or pipe.
  */
 import { z } from "zod";
+import { valveModelOptions } from "./valve-models";
 
 /** A Kv field: `label` is what the form shows ("Kvs", "Kv (open)"), `what` its one-line meaning. */
 const kv = (label: string, what: string) =>
@@ -42,6 +43,9 @@ const heatSource = z.object({
 
 const empty = z.object({});
 
+/** A valve model with a turns table (lib/schematic/valve-models.ts): the site sheet gives presets in turns too. */
+const valveModelField = z.enum(valveModelOptions).optional().describe("valve model, for presets in turns on the site sheet");
+
 export const partPropsSchemas = {
   "heat-pump": heatSource,
   boiler: heatSource,
@@ -70,7 +74,7 @@ export const partPropsSchemas = {
       .default(null)
       .describe("opening differential pressure, kPa (null: computed by sizing)"),
   }),
-  "balancing-valve": z.object({ kv: optionalKv("Kv (preset)", "the valve's setting") }),
+  "balancing-valve": z.object({ kv: optionalKv("Kv (preset)", "the valve's setting"), valveModel: valveModelField }),
   "isolation-valve": z.object({
     kv: optionalKv("Kv (open)", "fully open"),
     open: z.boolean().default(true).describe("open as drawn"),
@@ -99,6 +103,7 @@ export const partPropsSchemas = {
     roomTemperatureC: z.number().min(-10).max(40).default(20).describe("room temperature, °C"),
     heatLoadW: powerW("room heat load", "its output at design is taken as its load").nullable().default(null),
     valveKv: optionalKv("Valve Kv", "radiator valve and lockshield together"),
+    valveModel: valveModelField,
     deltaTK,
     waterVolumeL: volumeL("water content").nullable().default(null),
   }),

@@ -53,3 +53,17 @@ describe("rounding to zero", () => {
     expect(showPressure(-1.5, { flow: "m3/h", pressure: "kPa" }).value).toBe("-1.50");
   });
 });
+
+describe("readings back to SI (inverse conversions)", () => {
+  it("1 l/s = 3.6 m³/h and 10 l/min = 0.6 m³/h (1 L = 1e-3 m³, SI Brochure 9th ed. Table 8)", async () => {
+    const { flowToM3h } = await import("./display");
+    expect(flowToM3h(1, "l/s")).toBeCloseTo(3.6, 12);
+    expect(flowToM3h(10, "l/min")).toBeCloseTo(0.6, 12);
+  });
+  it("1.5 bar = 150 kPa; 1 m of water at 1000 kg/m³ = 9.80665 kPa (ρ·g·h, gn = 9.80665 m/s²)", async () => {
+    const { pressureToKpa, convertPressure } = await import("./display");
+    expect(pressureToKpa(1.5, "bar")).toBeCloseTo(150, 12);
+    expect(pressureToKpa(1, "m", 1000)).toBeCloseTo(9.80665, 9);
+    expect(convertPressure(pressureToKpa(3.2, "m", 990), "m", 990)).toBeCloseTo(3.2, 12);
+  });
+});

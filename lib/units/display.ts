@@ -49,6 +49,18 @@ export function convertPressure(pressureKpa: number, to: PressureUnit, densityKg
   return (divide(unit(pressureKpa, "kPa"), weight) as unknown as Unit).toNumber("m");
 }
 
+/** A flow read in `from` back to m³/h (the inverse of convertFlow). */
+export function flowToM3h(value: number, from: FlowUnit): number {
+  return unit(value, mathjsFlow[from]).toNumber("m^3/h");
+}
+
+/** A pressure read in `from` back to kPa (the inverse of convertPressure; metres of head through ρ·g). */
+export function pressureToKpa(value: number, from: PressureUnit, densityKgM3?: number | null): number {
+  if (from !== "m") return unit(value, from).toNumber("kPa");
+  const rho = unit(densityKgM3 ?? CONVENTIONAL_WATER_DENSITY, "kg/m^3");
+  return (multiply(multiply(rho, unit(STANDARD_GRAVITY_MPS2, "m/s^2")), unit(value, "m")) as unknown as Unit).toNumber("kPa");
+}
+
 // Decimals sized to what a designer can read off a gauge or a meter, per unit.
 const decimals: Record<FlowUnit | PressureUnit, number> = { "m3/h": 3, "l/s": 3, "l/min": 1, kPa: 2, bar: 3, m: 2 };
 

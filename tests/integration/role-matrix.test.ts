@@ -32,8 +32,9 @@ describe.each(rows)("$name", (row) => {
     const want = row.expect[who];
     it(`${who} → ${want}`, async () => {
       const f = await makeFixture(row.fixture);
+      const prepared = row.prepare ? await row.prepare(f) : undefined;
       const before = await snapshot(f);
-      const out = await row.call!(f, cookies[who], who);
+      const out = await row.call!(f, cookies[who], who, prepared);
       expect(out.status, JSON.stringify(out.body)).toBe(want);
       if (want >= 400) {
         // a denial (401/403/404) or refused input (400/409): a message, and nothing changed

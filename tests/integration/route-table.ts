@@ -4,6 +4,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { callAction, callRoute, cookieFor, form, type Outcome, type Who } from "./helpers/call";
 import { FIXTURE_PREFIX, type Fixture } from "./helpers/fixture";
+import { fixturePhoto } from "./helpers/photo";
 
 // The registry of every API route and server action, for the role matrix
 // (role-matrix.test.ts). One row per route/action: how to call it against a fresh fixture
@@ -23,7 +24,9 @@ export type Row = {
   kind: "route" | "action";
   /** Fixture options, e.g. an issued revision for installer rows. */
   fixture?: { revisionStatus?: "draft" | "in-review" | "approved" | "issued"; rooms?: boolean };
-  call?: (f: Fixture, cookie: string | null, who: Who) => Promise<Outcome>;
+  /** Set-up a row needs beyond the fixture (made before the "nothing changed" snapshot); its result is passed to call. */
+  prepare?: (f: Fixture) => Promise<string>;
+  call?: (f: Fixture, cookie: string | null, who: Who, prepared?: string) => Promise<Outcome>;
   expect?: Expect;
   /** A route that does not exist yet: shown as a todo in the test report. */
   todo?: string;
@@ -84,6 +87,15 @@ async function openStream(schematicId: string, cookie: string | null): Promise<O
   await reader.cancel();
   return { status: first.startsWith("retry:") && /event-stream/.test(res.headers.get("content-type") ?? "") ? 200 : 500, body: null, setCookies: [] };
 }
+const siteRoute = () => import("@/app/api/v1/schematics/[schematicId]/site/route");
+const siteEventsRoute = () => import("@/app/api/v1/schematics/[schematicId]/site/events/route");
+const uploadsRoute = () => import("@/app/api/v1/projects/[projectId]/uploads/route");
+const attachmentsRoute = () => import("@/app/api/v1/projects/[projectId]/attachments/route");
+const completeRoute = () => import("@/app/api/v1/uploads/[uploadId]/complete/route");
+const thumbnailRoute = () => import("@/app/api/v1/uploads/[uploadId]/thumbnail/route");
+const fileRoute = () => import("@/app/api/v1/uploads/[uploadId]/file/route");
+const siteActions = () => import("@/components/site-sheet/actions");
+const siteTick = () => ({ events: [{ id: randomUUID(), kind: "tick", target: "pri-f1", data: {}, madeAt: new Date().toISOString() }] });
 
 export const rows: Row[] = [
   // ——— session ———
@@ -341,6 +353,54 @@ export const rows: Row[] = [
     name: "PUT /api/v1/projects/[projectId]/emitter-list", kind: "route", expect: allow(["owner", "designer"]),
     call: async (f, cookie) => callRoute((await emitterListRoute()).PUT as never, { method: "PUT", path: `/api/v1/projects/${f.projectId}/emitter-list`, cookie, params: { projectId: f.projectId }, rawBody: demoFile("fernbank-emitters.csv"), contentType: "text/csv" }),
   },
+  // ——— site sheet: installers and owners record, every member reads (issued revisions only) ———
+  {
+    name: "GET /api/v1/schematics/[id]/site issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await siteRoute()).GET as never, { path: "", cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    // no issued revision: no sheet (installers do not even see the schematic yet)
+    name: "GET /api/v1/schematics/[id]/site draft only", kind: "route",
+    expect: { owner: 404, designer: 404, reviewer: 404, installer: 403, trainee: 404, anon: 401 },
+    call: async (f, cookie) => callRoute((await siteRoute()).GET as never, { path: "", cookie, params: { schematicId: f.teamSchematicId } }),
+  },
+  {
+    name: "POST /api/v1/schematics/[id]/site/events issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(["owner", "installer"]),
+    call: async (f, cookie) => callRoute((await siteEventsRoute()).POST as never, { method: "POST", path: "", cookie, params: { schematicId: f.teamSchematicId }, body: siteTick() }),
+  },
+  {
+    name: "POST /api/v1/projects/[id]/uploads", kind: "route", expect: allow(["owner", "installer"], 201),
+    call: async (f, cookie) => callRoute((await uploadsRoute()).POST as never, {
+      method: "POST", path: "", cookie, params: { projectId: f.projectId }, body: { filename: "plant.jpg", contentType: "image/jpeg", size: 2048 },
+    }),
+  },
+  {
+    // the installer uploaded it; a project owner may complete it too
+    name: "POST /api/v1/uploads/[id]/complete", kind: "route",
+    expect: { owner: 200, designer: 403, reviewer: 403, installer: 200, trainee: 403, anon: 401 },
+    prepare: (f) => fixturePhoto(f, "pending"),
+    call: async (_f, cookie, _who, id) => callRoute((await completeRoute()).POST as never, { method: "POST", path: "", cookie, params: { uploadId: id! } }),
+  },
+  {
+    name: "GET /api/v1/projects/[id]/attachments", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await attachmentsRoute()).GET as never, { path: "", cookie, params: { projectId: f.projectId } }),
+  },
+  {
+    name: "GET /api/v1/uploads/[id]/thumbnail", kind: "route", expect: { ...allow(members), anon: 401 },
+    prepare: (f) => fixturePhoto(f, "listed"),
+    call: async (_f, cookie, _who, id) => callRoute((await thumbnailRoute()).GET as never, { path: "", cookie, params: { uploadId: id! } }),
+  },
+  {
+    name: "GET /api/v1/uploads/[id]/file (redirect to a presigned GET)", kind: "route", expect: { ...allow(members, 302), anon: 401 },
+    prepare: (f) => fixturePhoto(f, "listed"),
+    call: async (_f, cookie, _who, id) => callRoute((await fileRoute()).GET as never, { path: "", cookie, params: { uploadId: id! } }),
+  },
+  {
+    // the fixture belongs to the shared demo firm: the owner saves the default rule, so other test files see no change
+    name: "action saveSiteRulesAction", kind: "action", expect: allow(["owner"]),
+    call: async (f, cookie) => callAction(async () => (await siteActions()).saveSiteRulesAction({ projectId: f.projectId,
+      pressureTest: (await import("@/lib/site/pressure-test")).DEFAULT_PRESSURE_TEST_RULE }), cookie),
+  },
 
   // ——— public account actions: the same answer whoever calls (no role involved) ———
   {
@@ -488,5 +548,4 @@ export const rows: Row[] = [
   },
 
   // ——— TODO: board routes not written yet; replace each with a real row ———
-  { name: "POST /api/v1/revisions/[id]/site-records", kind: "route", todo: "expect allow(['owner','installer'], 201) on an issued revision" },
 ];

@@ -50,7 +50,8 @@ function Title({ x, y, t }: { x: number; y: number; t: TitleBlock }) {
   );
 }
 
-export function DrawingSheet({ doc, title, tags }: { doc: Schematic; title: TitleBlock; tags: "label" | "id" }) {
+/** `hitWidth`: an invisible wider stroke under each pipe, so a finger can tap it (site sheet's drawing). */
+export function DrawingSheet({ doc, title, tags, hitWidth }: { doc: Schematic; title: TitleBlock; tags: "label" | "id"; hitWidth?: number }) {
   const auto = autoOrient(doc);
   const orient = (p: Part) => explicitOrientation(p) ?? auto.get(p.id) ?? IDENTITY;
   const byId = new Map(doc.parts.map((p) => [p.id, p]));
@@ -77,7 +78,8 @@ export function DrawingSheet({ doc, title, tags }: { doc: Schematic; title: Titl
         const [d, lx, ly] = getSmoothStepPath({ sourceX: a.x, sourceY: a.y, targetX: z.x, targetY: z.y, sourcePosition: a.position, targetPosition: z.position, ...PIPE_STEP });
         return (
           <g key={pipe.id} data-pipe={pipe.id}>
-            <path d={d} fill="none" stroke={sideColour[sides.get(pipe.id) ?? "none"]} strokeWidth={2} />
+            {hitWidth ? <path d={d} fill="none" stroke="transparent" strokeWidth={hitWidth} data-hit="" /> : null}
+            <path d={d} fill="none" stroke={sideColour[sides.get(pipe.id) ?? "none"]} strokeWidth={2} data-run="" />
             <text x={lx} y={ly - 4} textAnchor="middle" fontFamily={FONT} fontSize={8} fill="#4a453e" stroke="#ffffff" strokeWidth={2.5} paintOrder="stroke">
               {pipeCaption(pipe)}
             </text>

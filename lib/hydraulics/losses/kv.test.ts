@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { cvToKv, kvDpDerivativePaPerM3h, kvForPressureDrop, kvPressureDropPa, kvToCv } from "./kv";
+import { cvToKv, kvDpDerivativePaPerM3h, kvForPressureDrop, kvInSeries, kvPressureDropPa, kvToCv } from "./kv";
 
 // IEC 60534-1 definition of Kv (references.md §6, confirmed-in-search: Smith & Zappe, Valve
 // Selection Handbook p. 33). Worked examples are exact arithmetic of the definition → 1e-9.
@@ -63,5 +63,18 @@ describe("Kv arguments: each check on both sides, the message naming the field a
     expect(kvDpDerivativePaPerM3h(0.5, 2.5, 980)).toBeCloseTo(0.98 * 16_000, 9);
     // and the Kv for a drop as √(ρ/1000): 0.6 m³/h at 10 kPa of a 1018 kg/m³ glycol → 1.897·√1.018
     expect(kvForPressureDrop(0.6, 10_000, 1018)).toBeCloseTo((0.6 / Math.sqrt(0.1)) * Math.sqrt(1.018), 12);
+  });
+});
+
+describe("Kv in series (Δp of devices carrying one flow add)", () => {
+  it("two Kv 1.0 devices → 1/√2 = 0.7071; the series Δp equals the sum of each Δp", () => {
+    expect(kvInSeries(1, 1)).toBeCloseTo(Math.SQRT1_2, 12);
+    const [a, b, q] = [1.2, 0.8, 0.4];
+    const sum = kvPressureDropPa(q, a, 1000) + kvPressureDropPa(q, b, 1000);
+    expect(kvPressureDropPa(q, kvInSeries(a, b), 1000)).toBeCloseTo(sum, 9);
+  });
+  it("one device is itself; a non-positive Kv throws naming its place", () => {
+    expect(kvInSeries(2.5)).toBe(2.5);
+    expect(() => kvInSeries(1, 0)).toThrow(/kvs\[1\]/);
   });
 });

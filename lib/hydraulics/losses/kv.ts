@@ -68,3 +68,15 @@ export function kvForLossCoefficient(k: number, innerDiameterMm: number): number
 
 /** The citation shown with Kv workings. */
 export const KV_SOURCE = "IEC 60534-1 flow coefficient: Kv = Q·√((ρ/1000)/(Δp/1 bar)), Q in m³/h";
+
+/**
+ * The one Kv of devices in series (same flow through each, so their Δp add):
+ * from Δp = 1e5·(Q/Kv)²·ρ/1000 for each, 1/Kv² = Σ 1/Kvᵢ² (IEC 60534-1 definition
+ * of Kv applied to each device). Kv 1.0 and Kv 1.0 in series → 0.7071.
+ */
+export function kvInSeries(...kvs: number[]): number {
+  if (kvs.length === 0) throw new RangeError("kvInSeries needs at least one Kv");
+  let sum = 0;
+  kvs.forEach((kv, i) => { positive(`kvs[${i}]`, kv); sum += 1 / (kv * kv); });
+  return 1 / Math.sqrt(sum);
+}

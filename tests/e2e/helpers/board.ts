@@ -5,7 +5,7 @@ export const ORCHARD_END = "6a0f3c1e-0000-4000-8000-000000000102";
 export const MILLBROOK = "6a0f3c1e-0000-4000-8000-000000000101";
 export const shots = "test-results/screens";
 
-export async function signInAs(page: Page, role: "designer" | "owner" | "reviewer" | "trainee") {
+export async function signInAs(page: Page, role: "designer" | "owner" | "reviewer" | "trainee" | "installer") {
   await page.goto("/sign-in");
   await page.getByLabel("E-mail address").fill(`${role}@fernbank.example`);
   await page.getByLabel("Password").fill(`copper-loop-${role}`);
