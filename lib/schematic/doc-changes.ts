@@ -1,11 +1,12 @@
 /**
- * What changed between two versions of a schematic, in the terms sizing sees:
- * parts (type, props), pipes (ends, material, size, length, fittings, bore),
- * design conditions, fluid and scenarios. Positions and labels are left out:
- * they change the drawing, not the numbers. Pure and client-safe; the board
- * uses it to say why kept results are out of date, review and compare may too.
+ * What changed between two versions of a schematic, in words, in the terms sizing sees:
+ * parts (type, props), pipes (ends, material, size, length, fittings, bore), design
+ * conditions, fluid and scenarios. Positions and labels are left out: they change the
+ * drawing, not the numbers. Pure and client-safe; the board uses it to say why kept
+ * results are out of date. The comparison itself is doc-diff.ts.
  */
-import type { Part, Pipe, Schematic } from "./schema";
+import { docDelta, type Delta, type DiffDoc } from "./doc-diff";
+import type { Part, Pipe } from "./schema";
 
 export interface DocChange {
   kind: "added" | "removed" | "changed";
@@ -15,56 +16,34 @@ export interface DocChange {
   text: string;
 }
 
-type Doc = Pick<Schematic, "parts" | "pipes" | "design" | "fluid"> & { scenarios?: Schematic["scenarios"] };
-
 const show = (v: unknown): string => (v === undefined ? "—" : typeof v === "string" ? v : JSON.stringify(v));
-const same = (a: unknown, b: unknown) => a === b || JSON.stringify(a) === JSON.stringify(b);
-
-/** Keys whose values differ between two flat records, as "key a → b". */
-function fieldChanges(a: Record<string, unknown>, b: Record<string, unknown>, keys?: readonly string[]): string[] {
-  const all = keys ?? [...new Set([...Object.keys(a), ...Object.keys(b)])];
-  return all.filter((k) => !same(a[k], b[k])).map((k) => `${k} ${show(a[k])} → ${show(b[k])}`);
-}
-
-const PIPE_FIELDS = ["from", "to", "material", "size", "lengthM", "fittings", "innerDiameterMm", "roughnessMm"] as const;
+const change = (word: string, a: unknown, b: unknown) => `${word} ${show(a)} → ${show(b)}`;
 const pipeWords: Record<string, string> = { lengthM: "length", innerDiameterMm: "bore", roughnessMm: "roughness" };
+type Rec = Record<string, unknown>;
 
-function pipeChange(a: Pipe, b: Pipe): string[] {
-  return PIPE_FIELDS.filter((k) => !same(a[k], b[k])).map((k) =>
-    k === "lengthM" ? `length ${a.lengthM} → ${b.lengthM} m` : `${pipeWords[k] ?? k} ${show(a[k])} → ${show(b[k])}`);
+function pipeText(a: Pipe, b: Pipe, k: string): string {
+  return k === "lengthM" ? `length ${a.lengthM} → ${b.lengthM} m` : change(pipeWords[k] ?? k, (a as Rec)[k], (b as Rec)[k]);
 }
 
-function partChange(a: Part, b: Part): string[] {
-  if (a.type !== b.type) return [`type ${a.type} → ${b.type}`];
-  return fieldChanges(a.props as Record<string, unknown>, b.props as Record<string, unknown>);
+function partText(a: Part, b: Part, k: string): string {
+  return k === "type" ? `type ${a.type} → ${b.type}` : change(k, (a.props as Rec)[k], (b.props as Rec)[k]);
 }
 
-function byId<T extends { id: string }>(
-  before: readonly T[], after: readonly T[], noun: string, changed: (a: T, b: T) => string[], describe: (x: T) => string,
-): DocChange[] {
-  const out: DocChange[] = [];
-  const old = new Map(before.map((x) => [x.id, x]));
-  const now = new Set(after.map((x) => x.id));
-  for (const x of after) {
-    const was = old.get(x.id);
-    if (!was) out.push({ kind: "added", ref: x.id, text: `${noun} ${x.id} added (${describe(x)})` });
-    else if (was !== x) {
-      const what = changed(was, x);
-      if (what.length > 0) out.push({ kind: "changed", ref: x.id, text: `${noun} ${x.id}: ${what.join(", ")}` });
-    }
-  }
-  for (const x of before) if (!now.has(x.id)) out.push({ kind: "removed", ref: x.id, text: `${noun} ${x.id} removed` });
-  return out;
+function worded<T extends { id: string }>(d: Delta<T>, noun: string, field: (a: T, b: T, k: string) => string, describe: (x: T) => string): DocChange[] {
+  return [
+    ...d.added.map((x) => ({ kind: "added" as const, ref: x.id, text: `${noun} ${x.id} added (${describe(x)})` })),
+    ...d.changed.map((c) => ({ kind: "changed" as const, ref: c.after.id, text: `${noun} ${c.after.id}: ${c.fields.map((k) => field(c.before, c.after, k)).join(", ")}` })),
+    ...d.removed.map((x) => ({ kind: "removed" as const, ref: x.id, text: `${noun} ${x.id} removed` })),
+  ];
 }
 
-export function docChanges(before: Doc, after: Doc): DocChange[] {
+export function docChanges(before: DiffDoc, after: DiffDoc): DocChange[] {
   if (before === after) return [];
+  const d = docDelta(before, after);
   const out: DocChange[] = [];
-  const design = fieldChanges(before.design as Record<string, unknown>, after.design as Record<string, unknown>);
-  if (design.length > 0) out.push({ kind: "changed", ref: "design", text: `design: ${design.join(", ")}` });
-  if (!same(before.fluid, after.fluid)) out.push({ kind: "changed", ref: "fluid", text: `fluid ${show(before.fluid)} → ${show(after.fluid)}` });
-  if (!same(before.scenarios ?? null, after.scenarios ?? null)) out.push({ kind: "changed", ref: "scenarios", text: "scenarios changed" });
-  if (before.parts !== after.parts) out.push(...byId(before.parts, after.parts, "part", partChange, (p) => p.type));
-  if (before.pipes !== after.pipes) out.push(...byId(before.pipes, after.pipes, "pipe", pipeChange, (p) => `${p.from} → ${p.to}`));
+  if (d.design.length > 0) out.push({ kind: "changed", ref: "design", text: `design: ${d.design.map((k) => change(k, (before.design as Rec)[k], (after.design as Rec)[k])).join(", ")}` });
+  if (d.fluid) out.push({ kind: "changed", ref: "fluid", text: `fluid ${show(before.fluid)} → ${show(after.fluid)}` });
+  if (d.scenarios) out.push({ kind: "changed", ref: "scenarios", text: "scenarios changed" });
+  out.push(...worded(d.parts, "part", partText, (p) => p.type), ...worded(d.pipes, "pipe", pipeText, (p) => `${p.from} → ${p.to}`));
   return out;
 }
