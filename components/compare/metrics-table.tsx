@@ -10,6 +10,20 @@ import { formatDiff, formatValue } from "./format";
 export const rowClass = "grid grid-cols-3 gap-x-2 border-t border-ink/10 px-2 py-1.5 md:table-row md:px-0";
 export const cellClass = "md:px-3 md:py-1.5 md:align-top";
 
+/** The column heads A, B, B − A; the first (the row names) only where rows are a table (wider than a phone). */
+export function CompareHead({ first }: { first: string }) {
+  return (
+    <thead className="text-left text-xs text-ink-soft">
+      <tr className={rowClass.replace("border-t ", "")}>
+        <th scope="col" className={`hidden md:table-cell md:w-[34%] ${cellClass}`}>{first}</th>
+        <th scope="col" className={cellClass}>A</th>
+        <th scope="col" className={cellClass}>B</th>
+        <th scope="col" className={cellClass}>B − A</th>
+      </tr>
+    </thead>
+  );
+}
+
 function Value({ row, side, prefs, density }: { row: MetricRow; side: Side; prefs: UnitPrefs; density: number | null }) {
   const text = row.kind === "number" ? formatValue(row.quantity, row[side], prefs, density) : row[side] ?? "—";
   const note = row.kind === "number" ? row.note?.[side] : undefined;
@@ -30,14 +44,7 @@ export function MetricsTable({ rows, prefs, densities }: { rows: MetricRow[]; pr
   return (
     <table className="w-full text-sm md:table-fixed" data-testid="compare-metrics">
       <caption className="sr-only">Sizing results of A and B, and B − A</caption>
-      <thead className="text-left text-xs text-ink-soft">
-        <tr className={rowClass.replace("border-t ", "")}>
-          <th scope="col" className={`hidden md:table-cell md:w-[34%] ${cellClass}`}>Metric</th>
-          <th scope="col" className={cellClass}>A</th>
-          <th scope="col" className={cellClass}>B</th>
-          <th scope="col" className={cellClass}>B − A</th>
-        </tr>
-      </thead>
+      <CompareHead first="Metric" />
       <tbody>
         {rows.map((r) => (
           <tr key={r.key} className={rowClass} data-metric={r.key} data-better={r.better ?? undefined}>

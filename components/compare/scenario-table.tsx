@@ -3,7 +3,7 @@ import { difference } from "@/lib/compare/rows";
 import type { SharedScenario } from "@/lib/compare/scenarios";
 import type { UnitPrefs } from "@/lib/units/display";
 import { formatDiff, formatValue } from "./format";
-import { cellClass, rowClass } from "./metrics-table";
+import { cellClass, CompareHead, rowClass } from "./metrics-table";
 
 
 export function ScenarioTable({ scenarios, prefs }: { scenarios: SharedScenario[]; prefs: UnitPrefs }) {
@@ -16,14 +16,7 @@ export function ScenarioTable({ scenarios, prefs }: { scenarios: SharedScenario[
   return (
     <table className="w-full text-sm md:table-fixed" data-testid="compare-scenarios">
       <caption className="sr-only">Simulated scenarios both designs share</caption>
-      <thead className="text-left text-xs text-ink-soft">
-        <tr className={rowClass.replace("border-t ", "")}>
-          <th scope="col" className={`hidden md:table-cell md:w-[34%] ${cellClass}`}>Scenario</th>
-          <th scope="col" className={cellClass}>A</th>
-          <th scope="col" className={cellClass}>B</th>
-          <th scope="col" className={cellClass}>B − A</th>
-        </tr>
-      </thead>
+      <CompareHead first="Scenario" />
       <tbody>
         {lines.map((l) => (
           <tr key={l.key} className={rowClass} data-scenario={l.key}>
