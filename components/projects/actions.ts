@@ -6,9 +6,7 @@ import { createSchematic } from "@/db/queries/schematics";
 import { copyDemoProject, createProject, updateProject } from "@/lib/projects/admin";
 import { refusal, runChecked } from "@/lib/persistence/outcome";
 import { makeVariant } from "@/lib/persistence/variants";
-import { parseSchematic } from "@/lib/schematic";
-import { projectDefaultsFrom, withProjectDefaults } from "@/lib/schematic/project-defaults";
-import { getProjectDesignConditions } from "@/db/queries/project-design";
+import { blankSchematic } from "@/lib/persistence/new-schematic";
 
 // Projects and their schematics: a new project (anyone in a firm), a copy of the demo project,
 // changing or archiving a project (owners, designers); a new, empty team schematic that starts
@@ -34,10 +32,7 @@ export async function createSchematicAction(input: { projectId: string; name: st
   return runChecked(async () => {
     const i = z.object({ projectId: z.uuid(), name: z.string().trim().min(1, "give the schematic a name").max(160) }).parse(input);
     const { user } = await requireProjectRole(i.projectId, "schematic.edit");
-    const blank = parseSchematic({ format: "loopwright/schematic", version: 1, name: i.name });
-    if (!blank.ok) throw new Error("the blank schematic does not parse"); // a bug, not user input
-    // A new schematic starts with the project's design conditions.
-    const doc = withProjectDefaults(blank.doc, projectDefaultsFrom(await getProjectDesignConditions(i.projectId)));
+    const doc = await blankSchematic(i.projectId, i.name);
     const r = await createSchematic({ projectId: i.projectId, name: i.name, doc, userId: user.id, kind: "team" });
     return r.ok ? { id: r.schematic.id } : refusal(r);
   });

@@ -1,11 +1,12 @@
 import "server-only";
 import { db } from "@/lib/db";
-import type { ProjectRole } from "@/lib/auth/policy";
+import { can, type ProjectRole } from "@/lib/auth/policy";
 import { mapRevision, type SchematicSummary } from "./schematic-rows";
 
 /**
  * The project page's list: team schematics and their variants for every member,
- * practice variants only for the trainee who made them (they are private), each
+ * practice variants for the trainee who made them and for the roles that read others'
+ * (lib/auth/policy.ts "variant.read-practice", the rule requireSchematicAccess applies), each
  * with its revisions newest first. Installers, who work only from issued revisions,
  * get only schematics with an issued revision and only the issued revisions (messages
  * included), as the API serves them. Two queries, grouped here, instead of one per schematic.
@@ -16,9 +17,9 @@ export async function listProjectSchematics(projectId: string, userId: string, r
   const issuedOnly = role === "installer";
   const list = db()("schematics as s").leftJoin("users as u", "u.id", "s.owner_id")
     .where("s.project_id", projectId)
-    .andWhere((q) => q.where("s.kind", "team").orWhere("s.owner_id", userId))
     .select("s.id", "s.name", "s.kind", "s.owner_id", "u.name as owner_name", "s.variant_of", "s.updated_at")
     .orderBy([{ column: "s.kind", order: "asc" }, { column: "s.created_at", order: "asc" }]);
+  if (!can(role, "variant.read-practice")) list.andWhere((q) => q.where("s.kind", "team").orWhere("s.owner_id", userId));
   if (issuedOnly) list.where("s.kind", "team").whereExists(issued().whereRaw("i.schematic_id = s.id"));
   const rows = await list;
   const ids = rows.map((r) => r.id as string);

@@ -15,6 +15,7 @@ const expected: Record<Action, Record<ProjectRole, boolean>> = {
   "schematic.edit":    { owner: Y, designer: Y, reviewer: n, installer: n, trainee: n },
   "schematic.size":    { owner: Y, designer: Y, reviewer: n, installer: n, trainee: Y },
   "variant.practice":  { owner: Y, designer: Y, reviewer: n, installer: n, trainee: Y },
+  "variant.read-practice": { owner: Y, designer: n, reviewer: Y, installer: n, trainee: n },
   "variant.compare":   { owner: Y, designer: Y, reviewer: Y, installer: n, trainee: Y },
   "revision.save":     { owner: Y, designer: Y, reviewer: n, installer: n, trainee: n },
   "revision.submit":   { owner: Y, designer: Y, reviewer: n, installer: n, trainee: n },

@@ -71,8 +71,9 @@ export type SchematicAccess = {
  * Schematic-level checks on top of the role table:
  * - team schematic: read → any member (installers only once a revision is issued, and then
  *   only issued revisions); edit and size → owner or designer.
- * - practice variant (a trainee's private copy): read → its maker or the project owner;
- *   edit and size → its maker only.
+ * - practice variant (a trainee's private copy): read → its maker and whoever reads others'
+ *   practice variants (policy "variant.read-practice": the project's owners and reviewers);
+ *   edit and size → its maker only. To anyone else it answers 404, as if it did not exist.
  */
 export async function requireSchematicAccess(schematicId: string, mode: "read" | "edit" | "size"): Promise<SchematicAccess> {
   const user = await requireUser();
@@ -86,7 +87,7 @@ export async function requireSchematicAccess(schematicId: string, mode: "read" |
   let issuedOnly = false;
 
   if (schematic.kind === "practice") {
-    if (mode === "read" && !(mine || role === "owner")) throw new AuthError(403, "Practice variants are private to the person who made them.");
+    if (!mine && !can(role, "variant.read-practice")) throw new AuthError(404, "Schematic not found, or you are not a member of its project.");
     if (mode !== "read" && !mine) throw new AuthError(403, "Only the person who made this practice variant can change or size it.");
     if (mode !== "read" && !can(role, "variant.practice")) throw forbidden("variant.practice", role);
   } else if (mode === "read") {

@@ -7,7 +7,7 @@ export type ProjectRole = (typeof projectRoles)[number];
 
 export const actions = [
   "project.read", "project.update", "project.delete", "members.manage",
-  "schematic.read", "schematic.edit", "schematic.size", "variant.practice", "variant.compare",
+  "schematic.read", "schematic.edit", "schematic.size", "variant.practice", "variant.read-practice", "variant.compare",
   "revision.save", "revision.submit", "revision.review", "revision.issue",
   "comment.write", "site.read", "site.record", "rooms.edit", "site.rules",
 ] as const;
@@ -18,6 +18,8 @@ const R = true;
 // Rooms are read by every member (project.read).
 // reviewer: read everything, comment, approve/send back. installer: issued revision and
 // site sheet. trainee: read, private practice variants, size them, compare any two.
+// Practice variants are private: read by the trainee who made them and by those who
+// read others' (variant.read-practice: the project's owners and reviewers).
 const table: Record<ProjectRole, Partial<Record<Action, true>>> = {
   owner: Object.fromEntries(actions.map((a) => [a, R])),
   designer: {
@@ -26,7 +28,7 @@ const table: Record<ProjectRole, Partial<Record<Action, true>>> = {
     "comment.write": R, "site.read": R, "rooms.edit": R,
   },
   reviewer: {
-    "project.read": R, "schematic.read": R, "variant.compare": R, "revision.review": R, "comment.write": R, "site.read": R,
+    "project.read": R, "schematic.read": R, "variant.read-practice": R, "variant.compare": R, "revision.review": R, "comment.write": R, "site.read": R,
   },
   installer: { "project.read": R, "schematic.read": R, "site.read": R, "site.record": R },
   trainee: { "project.read": R, "schematic.read": R, "schematic.size": R, "variant.practice": R, "variant.compare": R, "site.read": R },
@@ -44,7 +46,7 @@ export function isProjectRole(value: unknown): value is ProjectRole {
 export const actionWords: Record<Action, string> = {
   "project.read": "open this project", "project.update": "change the project's details", "project.delete": "delete the project",
   "members.manage": "manage members and invitations", "schematic.read": "read this schematic", "schematic.edit": "edit the team's schematics",
-  "schematic.size": "run sizing", "variant.practice": "make practice variants", "variant.compare": "compare variants",
+  "schematic.size": "run sizing", "variant.practice": "make practice variants", "variant.read-practice": "read trainees' practice variants", "variant.compare": "compare variants",
   "revision.save": "save revisions", "revision.submit": "submit a revision for review", "revision.review": "approve or send back a revision",
   "revision.issue": "issue an approved revision", "comment.write": "write comments", "site.read": "read the site sheet",
   "site.record": "record site work", "rooms.edit": "change the rooms or the firm's emitter list",

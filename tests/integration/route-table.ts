@@ -96,6 +96,14 @@ const thumbnailRoute = () => import("@/app/api/v1/uploads/[uploadId]/thumbnail/r
 const fileRoute = () => import("@/app/api/v1/uploads/[uploadId]/file/route");
 const siteActions = () => import("@/components/site-sheet/actions");
 const siteTick = () => ({ events: [{ id: randomUUID(), kind: "tick", target: "pri-f1", data: {}, madeAt: new Date().toISOString() }] });
+const compareRoute = () => import("@/app/api/v1/compare/route");
+// practice variants: their maker, and the project's owners and reviewers; to anyone else 404, as if absent
+const practiceReaders = (e: Expect): Expect => ({ ...e, designer: 404, installer: 404 });
+const compare = async (cookie: string | null, a: string, b: string) =>
+  callRoute((await compareRoute()).GET as never, { path: `/api/v1/compare?a=${encodeURIComponent(a)}&b=${encodeURIComponent(b)}`, cookie });
+const newSchematic = async (f: Fixture, cookie: string | null, body: Record<string, unknown>) => callRoute((await projectSchematicsRoute()).POST as never, {
+  method: "POST", path: `/api/v1/projects/${f.projectId}/schematics`, cookie, params: { projectId: f.projectId }, body: { name: `New ${randomUUID().slice(0, 6)}`, ...body },
+});
 
 export const rows: Row[] = [
   // ——— session ———
@@ -226,7 +234,7 @@ export const rows: Row[] = [
     call: async (f, cookie) => callRoute((await schematicRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}`, cookie, params: { schematicId: f.teamSchematicId } }),
   },
   {
-    name: "GET /api/v1/schematics/[id] practice variant", kind: "route", expect: allow(["owner", "trainee"]),
+    name: "GET /api/v1/schematics/[id] practice variant", kind: "route", expect: practiceReaders(allow(["owner", "reviewer", "trainee"])),
     call: async (f, cookie) => callRoute((await schematicRoute()).GET as never, { path: `/api/v1/schematics/${f.practiceSchematicId}`, cookie, params: { schematicId: f.practiceSchematicId } }),
   },
   {
@@ -236,7 +244,7 @@ export const rows: Row[] = [
     }),
   },
   {
-    name: "PUT /api/v1/schematics/[id] practice variant", kind: "route", expect: allow(["trainee"]),
+    name: "PUT /api/v1/schematics/[id] practice variant", kind: "route", expect: practiceReaders(allow(["trainee"])),
     call: async (f, cookie) => callRoute((await schematicRoute()).PUT as never, {
       method: "PUT", path: `/api/v1/schematics/${f.practiceSchematicId}`, cookie, params: { schematicId: f.practiceSchematicId }, body: { lockVersion: f.lockVersion, doc: f.doc },
     }),
@@ -249,6 +257,34 @@ export const rows: Row[] = [
   {
     name: "GET /api/v1/revisions/[id] issued revision", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
     call: async (f, cookie) => callRoute((await revisionRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}`, cookie, params: { revisionId: f.revisionId } }),
+  },
+
+  // ——— side by side (issue 10): compare needs the right to read both designs and the role to compare ———
+  {
+    // installers read issued revisions only: a draft is not theirs to read (404, like a missing one)
+    name: "GET /api/v1/compare draft vs its revision", kind: "route", expect: { ...allow(["owner", "designer", "reviewer", "trainee"]), installer: 404 },
+    call: async (f, cookie) => compare(cookie, `schematic:${f.teamSchematicId}`, `revision:${f.revisionId}`),
+  },
+  {
+    // an installer can read an issued revision but may not compare (policy variant.compare)
+    name: "GET /api/v1/compare issued revision with itself", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(["owner", "designer", "reviewer", "trainee"]),
+    call: async (f, cookie) => compare(cookie, `revision:${f.revisionId}`, `revision:${f.revisionId}`),
+  },
+  {
+    name: "GET /api/v1/compare practice variant vs team draft", kind: "route", expect: practiceReaders(allow(["owner", "reviewer", "trainee"])),
+    call: async (f, cookie) => compare(cookie, `schematic:${f.practiceSchematicId}`, `schematic:${f.teamSchematicId}`),
+  },
+  {
+    name: "POST /api/v1/projects/[projectId]/schematics team, from the draft", kind: "route", expect: allow(["owner", "designer"], 201),
+    call: async (f, cookie) => newSchematic(f, cookie, { kind: "team", from: `schematic:${f.teamSchematicId}` }),
+  },
+  {
+    name: "POST /api/v1/projects/[projectId]/schematics practice, from the revision", kind: "route", expect: allow(["owner", "designer", "trainee"], 201),
+    call: async (f, cookie) => newSchematic(f, cookie, { kind: "practice", from: `revision:${f.revisionId}` }),
+  },
+  {
+    name: "POST /api/v1/projects/[projectId]/schematics practice, empty", kind: "route", expect: allow(["owner", "designer", "trainee"], 201),
+    call: async (f, cookie) => newSchematic(f, cookie, { kind: "practice" }),
   },
 
   // ——— drawing board server actions (app/(app)/projects/[projectId]/…/actions.ts) ———
@@ -266,7 +302,7 @@ export const rows: Row[] = [
     call: async (f, cookie) => callAction(async () => (await boardActions()).autosaveDraft({ schematicId: f.teamSchematicId, lockVersion: f.lockVersion, doc: f.doc }), cookie),
   },
   {
-    name: "action autosaveDraft practice variant", kind: "action", expect: allow(["trainee"]),
+    name: "action autosaveDraft practice variant", kind: "action", expect: practiceReaders(allow(["trainee"])),
     call: async (f, cookie) => callAction(async () => (await boardActions()).autosaveDraft({ schematicId: f.practiceSchematicId, lockVersion: f.lockVersion, doc: f.doc }), cookie),
   },
   {
@@ -298,7 +334,7 @@ export const rows: Row[] = [
     call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ schematicId: f.teamSchematicId, doc: f.doc }), cookie),
   },
   {
-    name: "action sizeSchematic practice variant", kind: "action", expect: allow(["trainee"]),
+    name: "action sizeSchematic practice variant", kind: "action", expect: practiceReaders(allow(["trainee"])),
     call: async (f, cookie) => callAction(async () => (await boardActions()).sizeSchematic({ schematicId: f.practiceSchematicId, doc: f.doc }), cookie),
   },
 

@@ -1,6 +1,7 @@
 "use client";
 
 import { UnitsPicker } from "@/components/units/units-picker";
+import { CompareWithLink } from "@/components/compare/compare-with-link";
 import { SizeItButton } from "../overlay/size-it-button";
 import { ExportMenu } from "./export-menu";
 import { SizeProposalButton } from "../proposal/size-proposal-button";
@@ -13,6 +14,7 @@ export function BoardToolbar() {
       <RevisionStatusBar />
       <UnitsPicker />
       <ExportMenu />
+      <CompareWithLink />
       <SizeItButton />
       <SizeProposalButton />
     </>

@@ -10,6 +10,7 @@ import { NewSchematicForm } from "@/components/projects/new-schematic-form";
 import { ProjectSettings } from "@/components/projects/project-settings";
 import { readDesignDefaults } from "@/lib/projects/design-defaults";
 import { SchematicCard } from "@/components/projects/schematic-card";
+import { CompareTicks } from "@/components/compare/compare-ticks";
 import { ProjectDefaultsForm } from "@/components/design-conditions/project-defaults-form";
 import { projectDefaultsFrom } from "@/lib/schematic/project-defaults";
 import { getProjectDesignConditions } from "@/db/queries/project-design";
@@ -31,6 +32,21 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
   const canCreate = can(role, "schematic.edit");
   const canPractice = role === "trainee" ? can(role, "variant.practice") : canCreate;
   const design = readDesignDefaults(project.design);
+  const canCompare = can(role, "variant.compare");
+  const list = (
+    <ul className="mt-4 space-y-4" data-testid="schematic-list">
+      {roots.map((s) => (
+        <li key={s.id}>
+          <SchematicCard projectId={projectId} s={s} canVariant={canPractice} variantLabel={role === "trainee" ? "New practice variant" : "New variant"} canCompare={canCompare} />
+          {variantsOf(s.id).length > 0 && (
+            <ul className="mt-2 ml-4 space-y-2 border-l-2 border-copper-100 pl-4 sm:ml-6">
+              {variantsOf(s.id).map((v) => <li key={v.id}><SchematicCard projectId={projectId} s={v} compact canCompare={canCompare} /></li>)}
+            </ul>
+          )}
+        </li>
+      ))}
+    </ul>
+  );
 
   return (
     <main className="mx-auto max-w-5xl px-4 py-8">
@@ -69,18 +85,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           {canCreate && <NewSchematicForm projectId={projectId} />}
         </div>
         {roots.length === 0 && <p className="mt-4 text-sm text-ink-soft">No schematics yet.{canCreate ? " Create the first one." : ""}</p>}
-        <ul className="mt-4 space-y-4" data-testid="schematic-list">
-          {roots.map((s) => (
-            <li key={s.id}>
-              <SchematicCard projectId={projectId} s={s} canVariant={canPractice} variantLabel={role === "trainee" ? "New practice variant" : "New variant"} />
-              {variantsOf(s.id).length > 0 && (
-                <ul className="mt-2 ml-4 space-y-2 border-l-2 border-copper-100 pl-4 sm:ml-6">
-                  {variantsOf(s.id).map((v) => <li key={v.id}><SchematicCard projectId={projectId} s={v} compact /></li>)}
-                </ul>
-              )}
-            </li>
-          ))}
-        </ul>
+        {canCompare && schematics.length > 0 ? <CompareTicks projectId={projectId}>{list}</CompareTicks> : list}
       </section>
       <ProjectDefaultsForm projectId={projectId} initial={projectDefaultsFrom(defaults)} canEdit={can(role, "project.update")} />
     </main>
