@@ -12,6 +12,9 @@ test("the second save gets the conflict message; save mine as a variant keeps bo
     const b = await (await browser.newContext({ viewport: { width: 1440, height: 900 } })).newPage();
     await signInAs(a, "designer");
     await signInAs(b, "owner");
+    // B's live connection is down (a patchy network): it does not hear A's save, so its own
+    // save is the one that meets the conflict (with it up, B's board would reload A's draft first)
+    await b.route(/\/api\/v1\/schematics\/[^/]+\/events/, (route) => route.abort());
     await a.goto(url);
     await b.goto(url);
     await expect(a.getByTestId("drawing-board")).toBeVisible();

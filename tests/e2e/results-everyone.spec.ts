@@ -147,8 +147,11 @@ test("findings grouped by check, docked beside the drawing; a finding shows its 
   await group.getByRole("button").first().click();
   const items = group.getByTestId("finding");
   await expect(items).toHaveCount(count);
-  const hot = items.filter({ hasText: "hot-water mode" }).first();
-  await expect(hot.getByTestId("finding-view")).toHaveText("Design · hot water");
+  // a pipe of the cylinder's coil is too fast in hot-water mode only: its finding shows that mode
+  // (a pipe too fast in both modes has one finding naming both, shown in every view)
+  const hot = items.filter({ has: page.getByTestId("finding-view").getByText("Design · hot water", { exact: true }) }).first();
+  await expect(hot).toContainText("hot-water mode");
+  await expect(hot).not.toContainText("heating mode");
   await hot.click();
   await expect(page.getByTestId("results-view").first()).toHaveValue("hot-water");
   await page.screenshot({ path: `${shots}/findings-open.png` });

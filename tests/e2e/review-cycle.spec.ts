@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { ORCHARD_END, shots, signInAs, sql } from "./helpers/board";
+import { ORCHARD_END, removeSchematics, shots, signInAs, sql } from "./helpers/board";
 import { caughtMail, linkInMail } from "./helpers/mail";
 
 // The review cycle end to end, two people at once: the designer submits; the reviewer pins
@@ -164,7 +164,7 @@ test("designer submits, reviewer threads and sends back, designer answers live, 
   } finally {
     await dCtx.close();
     await rCtx.close();
-    await sql("delete from schematics where id = $1", [id]);
+    await removeSchematics(id);
   }
 });
 
@@ -196,6 +196,6 @@ test("a board whose live connection drops reconnects by itself and catches up on
     await expect(page.locator('[data-testid=thread-marker][data-anchor="part:bp"]')).toHaveAttribute("data-open", "1");
   } finally {
     await ctx.close();
-    await sql("delete from schematics where id = $1", [id]);
+    await removeSchematics(id);
   }
 });

@@ -29,6 +29,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
+import { bisect, curveHeadKpa } from "@/lib/hydraulics/testing/hand-calc";
 import { repeatedFindings } from "@/lib/hydraulics/testing/repeated-findings";
 
 /* ------------------------------------------------------------------ *
@@ -91,26 +92,6 @@ const kvFor = (q: number, dpKpa: number, rho: number) => q / Math.sqrt((dpKpa / 
 /** Q = P/(ρ·cp·ΔT), m³/h. */
 const flowOf = (powerW: number, dT: number, w: { rho: number; cp: number }) => (powerW / (w.rho * w.cp * dT)) * 3600;
 /** Linear interpolation in a pump curve (the plain reading of "interpolated"). */
-function curveAt(curve: [number, number][], q: number): number {
-  for (let i = 1; i < curve.length; i++) {
-    const [q0, h0] = curve[i - 1]!;
-    const [q1, h1] = curve[i]!;
-    if (q <= q1) return h0 + ((h1 - h0) * (q - q0)) / (q1 - q0);
-  }
-  return NaN;
-}
-function bisect(fn: (x: number) => number, lo: number, hi: number): number {
-  let flo = fn(lo);
-  for (let i = 0; i < 200; i++) {
-    const mid = (lo + hi) / 2;
-    const fm = fn(mid);
-    if (Math.sign(fm) === Math.sign(flo)) {
-      lo = mid;
-      flo = fm;
-    } else hi = mid;
-  }
-  return (lo + hi) / 2;
-}
 /** EN 442-2 characteristic equation with the logarithmic mean excess temperature (references §7). */
 function en442(phi50: number, n: number, tf: number, tr: number, troom: number): number {
   const dtln = (tf - tr) / Math.log((tf - troom) / (tr - troom));
@@ -354,9 +335,9 @@ describe("Case 1 — heat pump + pump + radiator, one loop (45/35 °C)", () => {
     expect(pump.id).toBe("pu");
     near(pump.designFlowM3h, Q1, 3e-3, "designFlowM3h");
     near(pump.requiredHeadKpa, loop1DpKpa(Q1), 1.5e-2, "requiredHeadKpa");
-    near(curveAt(CURVE1, Q1), 42.396, 1e-4, "hand");
+    near(curveHeadKpa(CURVE1, Q1), 42.396, 1e-4, "hand");
     // ±1 %: a smooth (spline) interpolation between the points differs from linear by < 1 % here
-    near(pump.availableHeadKpa, curveAt(CURVE1, Q1), 1e-2, "availableHeadKpa");
+    near(pump.availableHeadKpa, curveHeadKpa(CURVE1, Q1), 1e-2, "availableHeadKpa");
     expect(pump.ok).toBe(true);
   });
 
@@ -395,7 +376,7 @@ describe("Case 1 — heat pump + pump + radiator, one loop (45/35 °C)", () => {
     expect(s).toBeDefined();
     expect(s.converged).toBe(true);
     // operating point: H_pump(Q) = Σ Δp(Q) — bisection on the linear curve and the hand loop model
-    const qOp = bisect((q) => curveAt(CURVE1, q) - loop1DpKpa(q), 0.01, 1.49);
+    const qOp = bisect((q) => curveHeadKpa(CURVE1, q) - loop1DpKpa(q), 0.01, 1.49);
     // ±2 %: the system curve is Δp ∝ Q^1.8..2 so a 1.5 % Δp error moves Q by < 1 %; + interpolation
     near(s.heatSourceFlowM3h, qOp, 2e-2, "scenario heat-source flow");
     near(scenEm(s, "rad").flowM3h, qOp, 2e-2, "scenario radiator flow");
@@ -499,7 +480,7 @@ describe("Case 2 — two radiators in parallel on tees: index circuit, excess an
     const pump = mode(r).pump;
     expect(pump.id).toBe("hp");
     near(pump.requiredHeadKpa, common + br1, 1.5e-2, "requiredHeadKpa");
-    near(pump.availableHeadKpa, curveAt(CURVE2, q1 + q2), 1e-2, "availableHeadKpa");
+    near(pump.availableHeadKpa, curveHeadKpa(CURVE2, q1 + q2), 1e-2, "availableHeadKpa");
     expect(pump.ok).toBe(true);
     expect(circ(r, "r1").pump ?? "hp").toBe("hp");
   });
@@ -510,7 +491,7 @@ describe("Case 2 — two radiators in parallel on tees: index circuit, excess an
     const split = (qt: number) => bisect((q) => br1f(q) - br2f(qt - q), 0, qt);
     const qOp = bisect((qt) => {
       const a = split(qt);
-      return curveAt(CURVE2, qt) - kvDp(qt, 5, W40.rho) - pipeCalc(qt, 20.2, CU_EPS, 16, W40).dpKpa - br1f(a);
+      return curveHeadKpa(CURVE2, qt) - kvDp(qt, 5, W40.rho) - pipeCalc(qt, 20.2, CU_EPS, 16, W40).dpKpa - br1f(a);
     }, 0.01, 1.49);
     const q1op = split(qOp);
     const s = scen(r, "all zones open");
@@ -1052,7 +1033,7 @@ describe("Case 11 — boiler type, 70/50 °C (mean 60 °C)", () => {
     const dp = pipeCalc(q, 20.2, CU_EPS, 24, W60).dpKpa + kvDp(q, 6, W60.rho) + kvDp(q, 4, W60.rho);
     near(circ(r, "hl").pressureDropKpa, dp, 1.5e-2, "circuit Δp");
     expect(mode(r).pump.id).toBe("pu");
-    near(mode(r).pump.availableHeadKpa, curveAt(curve, q), 1e-2, "available head");
+    near(mode(r).pump.availableHeadKpa, curveHeadKpa(curve, q), 1e-2, "available head");
     near(partR(r, "b").pressureDropKpa, kvDp(q, 6, W60.rho), 1e-2, "boiler Δp");
   });
 });

@@ -50,6 +50,7 @@
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
 import { repeatedFindings } from "@/lib/hydraulics/testing/repeated-findings";
+import { bisect } from "@/lib/hydraulics/testing/hand-calc";
 
 /* ------------------------------------------------------------------ *
  * Independent hand-calculation helpers                                *
@@ -103,19 +104,6 @@ function curveAt(c: [number, number][], q: number): number {
     if (q <= q1) return h0 + ((h1 - h0) * (q - q0)) / (q1 - q0);
   }
   return -1e9;
-}
-/** Root of a monotone function by bisection. */
-function bisect(fn: (x: number) => number, lo: number, hi: number): number {
-  let flo = fn(lo);
-  for (let i = 0; i < 200; i++) {
-    const mid = (lo + hi) / 2;
-    const fm = fn(mid);
-    if (Math.sign(fm) === Math.sign(flo)) {
-      lo = mid;
-      flo = fm;
-    } else hi = mid;
-  }
-  return (lo + hi) / 2;
 }
 /** Split Q between two parallel branches with increasing Δp(q): returns [q1, q2, Δp]. */
 function split(Q: number, br1: (q: number) => number, br2: (q: number) => number): [number, number, number] {

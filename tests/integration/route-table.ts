@@ -482,7 +482,7 @@ export const rows: Row[] = [
     call: async (f, cookie) => callRoute((await threadsRoute()).GET as never, { path: `/api/v1/schematics/${f.teamSchematicId}/threads?revision=1`, cookie, params: { schematicId: f.teamSchematicId } }),
   },
   {
-    name: "GET /api/v1/schematics/[id]/threads practice variant", kind: "route", expect: allow(["owner", "trainee"]),
+    name: "GET /api/v1/schematics/[id]/threads practice variant", kind: "route", expect: practiceReaders(allow(["owner", "reviewer", "trainee"])),
     call: async (f, cookie) => callRoute((await threadsRoute()).GET as never, { path: `/api/v1/schematics/${f.practiceSchematicId}/threads`, cookie, params: { schematicId: f.practiceSchematicId } }),
   },
   {
@@ -498,7 +498,7 @@ export const rows: Row[] = [
       params: { schematicId: f.teamSchematicId }, body: { anchor: { kind: "schematic" }, body: "Matrix question from site" } }),
   },
   {
-    name: "POST /api/v1/schematics/[id]/threads practice variant", kind: "route", expect: allow(["owner", "trainee"], 201),
+    name: "POST /api/v1/schematics/[id]/threads practice variant", kind: "route", expect: practiceReaders(allow(["owner", "reviewer", "trainee"], 201)),
     call: async (f, cookie) => callRoute((await threadsRoute()).POST as never, { method: "POST", path: `/api/v1/schematics/${f.practiceSchematicId}/threads`, cookie,
       params: { schematicId: f.practiceSchematicId }, body: { anchor: { kind: "schematic" }, body: "Matrix practice note" } }),
   },
@@ -513,7 +513,7 @@ export const rows: Row[] = [
       params: { threadId: f.threadId }, body: { body: "Matrix reply from site" } }),
   },
   {
-    name: "POST /api/v1/threads/[id]/replies practice variant", kind: "route", expect: allow(["owner", "trainee"], 201),
+    name: "POST /api/v1/threads/[id]/replies practice variant", kind: "route", expect: practiceReaders(allow(["owner", "reviewer", "trainee"], 201)),
     call: async (f, cookie) => callRoute((await repliesRoute()).POST as never, { method: "POST", path: `/api/v1/threads/${f.practiceThreadId}/replies`, cookie,
       params: { threadId: f.practiceThreadId }, body: { body: "Matrix practice reply" } }),
   },
@@ -566,7 +566,7 @@ export const rows: Row[] = [
     call: async (f, cookie) => callRoute((await restoreRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/restore`, cookie, params: { revisionId: f.revisionId } }),
   },
   {
-    name: "POST /api/v1/revisions/[id]/restore practice variant", kind: "route", expect: allow(["trainee"]),
+    name: "POST /api/v1/revisions/[id]/restore practice variant", kind: "route", expect: practiceReaders(allow(["trainee"])),
     call: async (f, cookie) => callRoute((await restoreRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.practiceRevisionId}/restore`, cookie, params: { revisionId: f.practiceRevisionId } }),
   },
   {
@@ -574,7 +574,7 @@ export const rows: Row[] = [
     call: async (f, cookie) => openStream(f.teamSchematicId, cookie),
   },
   {
-    name: "GET /api/v1/schematics/[id]/events practice variant", kind: "route", expect: allow(["owner", "trainee"]),
+    name: "GET /api/v1/schematics/[id]/events practice variant", kind: "route", expect: practiceReaders(allow(["owner", "reviewer", "trainee"])),
     call: async (f, cookie) => openStream(f.practiceSchematicId, cookie),
   },
   {

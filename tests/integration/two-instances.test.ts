@@ -91,7 +91,7 @@ describe("live boards across two instances", () => {
       expect(seen.data.people.map((x: { name: string }) => x.name).sort()).toEqual(["Ivo Marsh", "Tamsin Reyes"]);
 
       const write = (i: 0 | 1, path: string, cookie: string, body: unknown) =>
-        fetch(url(i, path), { method: "POST", headers: { cookie, "content-type": "application/json" }, body: JSON.stringify(body) });
+        fetch(url(i, path), { method: "POST", headers: { cookie, origin: url(i, ""), "content-type": "application/json" }, body: JSON.stringify(body) });
       const latencies: Record<string, number[]> = { "A→B": [], "B→A": [] };
       const afterAnswer: number[] = [];
       for (let k = 0; k < 10; k++) {

@@ -21,7 +21,8 @@ const rank: Record<Severity, number> = { info: 0, warning: 1, error: 2 };
  * a new finding is tagged with that mode or scenario, so the board can show the drawing in
  * the state it belongs to. One finding per code and set of refs: a check that trips again for
  * the same parts — in another mode or scenario — adds its message to the first finding (and
- * raises its severity if higher) instead of repeating it, so a designer reads one fault once.
+ * raises its severity if higher) instead of repeating it, so a designer reads one fault once;
+ * found in more than one state, it loses its tag and shows in every view.
  */
 export class Findings {
   readonly list: Finding[] = [];
@@ -50,6 +51,11 @@ export class Findings {
       return;
     }
     const f = first.finding;
+    const { mode, scenario } = this.context;
+    if (f.mode !== mode || f.scenario !== scenario) {
+      delete f.mode;
+      delete f.scenario;
+    }
     if (!first.messages.has(message)) {
       first.messages.add(message);
       f.message = `${f.message}; ${message}`;
