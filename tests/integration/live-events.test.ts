@@ -83,7 +83,7 @@ describe("a board's live stream", () => {
     await s.next((e) => e.event === "hello");
     await liveListener().dropForTest();
     await expect.poll(() => s.closed, { timeout: 5000 }).toBe(true);
-    expect(await db()("board_presence").where({ schematic_id: p.schematicId })).toEqual([]); // gone from the presence list
+    await expect.poll(() => db()("board_presence").where({ schematic_id: p.schematicId }), { timeout: 5000 }).toEqual([]); // gone from the presence list
     const again = await open(p, p.people.owner.cookie);
     streams.push(again);
     await again.next((e) => e.event === "hello");

@@ -2,6 +2,7 @@ import { randomUUID } from "node:crypto";
 import { db } from "@/lib/db";
 import { loadDemoDocument } from "@/db/seeds/demo/projects";
 import { cookieForUser } from "./call";
+import { deleteForTests } from "./fixture";
 
 // A review project of its own: a new firm (so its review rule can be changed without
 // touching anyone else's), one new person per role with an address of their own (so the
@@ -44,6 +45,6 @@ export async function makeReviewProject(status: "draft" | "in-review" | "approve
 }
 
 export async function dropReviewProjects(): Promise<void> {
-  await db()("organisations").where("name", "like", `${REVIEW_TAG}%`).delete();
+  await deleteForTests((trx) => trx("organisations").where("name", "like", `${REVIEW_TAG}%`).delete()); // issued revisions too
   await db()("users").where("id", "like", `u_${REVIEW_TAG}_%`).delete();
 }
