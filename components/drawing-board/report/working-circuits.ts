@@ -4,7 +4,7 @@ import { HEAT_BALANCE_SOURCE } from "@/lib/hydraulics/flow";
 import { KV_SOURCE } from "@/lib/hydraulics/losses/kv";
 import type { Circuit, ModeResult, Part, Results, Schematic } from "@/lib/schematic";
 import { modeOf } from "../overlay/results-mode";
-import { assumedLines, f, type Working, type WorkingLine } from "./working";
+import { assumedLines, f, type Working, type WorkingLine } from "./working-base";
 
 const designDeltaT = (doc: Schematic) => doc.design.flowTemperatureC - doc.design.returnTemperatureC;
 

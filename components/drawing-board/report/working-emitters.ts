@@ -2,7 +2,7 @@
 import { EN1264_SOURCE, en1264HeatFluxWm2, EN442_NOMINAL_LMTD_K, EN442_SOURCE, lmtdK } from "@/lib/hydraulics/emitters";
 import { HEAT_BALANCE_SOURCE } from "@/lib/hydraulics/flow";
 import type { Part, Results, Schematic } from "@/lib/schematic";
-import { f, type Working } from "./working";
+import { f, type Working } from "./working-base";
 
 const returnOf = (doc: Schematic, own: number | null) => doc.design.flowTemperatureC - (own ?? doc.design.flowTemperatureC - doc.design.returnTemperatureC);
 

@@ -7,7 +7,7 @@ import { findPipeSize } from "@/lib/hydraulics/pipes/catalogue";
 import { DARCY_WEISBACH_SOURCE } from "@/lib/hydraulics/pipes/pressure-drop";
 import type { ModeResult, Pipe, Results, Schematic } from "@/lib/schematic";
 import { modeOf } from "../overlay/results-mode";
-import { f, type Working } from "./working";
+import { f, type Working } from "./working-base";
 
 function bore(pipe: Pipe): { dMm: number | null; epsMm: number | null } {
   const row = findPipeSize(pipe.material, pipe.size);

@@ -6,7 +6,7 @@ import { findPipeSize, pipeWaterVolumeLPerM } from "@/lib/hydraulics/pipes/catal
 import { BYPASS_MARGIN_FRACTION, BYPASS_MARGIN_MIN_KPA, BYPASS_RULE } from "@/lib/hydraulics/sizing/bypass-margin";
 import { EN12828_SOURCE, en12828FinalPressureBar, en12828Vessel } from "@/lib/hydraulics/vessels/en12828";
 import type { Results, Schematic } from "@/lib/schematic";
-import { assumedLines, f, type Working, type WorkingLine } from "./working";
+import { assumedLines, f, type Working, type WorkingLine } from "./working-base";
 
 export function bypassOpeningWorking(doc: Schematic, results: Results): Working | null {
   const b = results.bypass;

@@ -2,7 +2,7 @@
 import { AFFINITY_SOURCE, PUMP_OVERSIZE_MARGIN } from "@/lib/hydraulics/pumps/affinity";
 import { PUMP_CURVE_SOURCE, pumpHeadKpa, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 import type { ModeResult, PumpDuty, Results, Schematic } from "@/lib/schematic";
-import { assumedLines, f, type Working } from "./working";
+import { assumedLines, f, type Working } from "./working-base";
 
 export function curveOf(doc: Schematic, id: string): PumpCurve {
   const part = doc.parts.find((p) => p.id === id);

@@ -10,8 +10,9 @@
  * near 1 (better conditioned than m³/s and Pa). No module state.
  */
 import { factorInPlace, solveInPlace } from "./ldl";
-import { symbolicFactor, type Symbolic } from "./ordering";
+import { symbolicFactor } from "./ordering";
 import { cachedPrepare } from "./topology-cache";
+import type { Prepared, Topology } from "./topology";
 
 /** Writes h (loss from→to) into out[0] and g = dh/dq > 0 into out[1]. */
 export type Evaluate = (q: number, out: Float64Array) => void;
@@ -24,21 +25,7 @@ export interface LinkLaws {
 /** Adapter for tests and small cases: one function per link. */
 export const lawsOf = (fns: readonly Evaluate[]): LinkLaws => ({ evaluate: (k, q, out) => fns[k]!(q, out) });
 
-export interface Topology {
-  nodeCount: number;
-  from: Int32Array;
-  to: Int32Array;
-  /** nodes held at a fixed head (one per connected component at least) */
-  fixed: Uint8Array;
-}
-
-export interface Prepared {
-  topo: Topology;
-  unknownOf: Int32Array; // node → unknown index or −1
-  m: number;
-  sym: Symbolic;
-  linkSlot: Int32Array; // link → off-diagonal slot or −1
-}
+export type { Prepared, Topology } from "./topology";
 
 /** The symbolic phase for a topology, from the per-topology memo when the same network was prepared before. */
 export function prepare(topo: Topology): Prepared {

@@ -9,7 +9,7 @@
  * them; at most MAX_ENTRIES topologies or MAX_SLOTS stored entries, least
  * recently used dropped first.
  */
-import type { Prepared, Topology } from "./gga";
+import type { Prepared, Topology } from "./topology";
 
 const MAX_ENTRIES = 16;
 const MAX_SLOTS = 20_000_000;
