@@ -131,6 +131,15 @@ test("designer submits, reviewer threads and sends back, designer answers live, 
     await expect(designer.getByTestId("thread-view")).toContainText("sent back");
     await designer.setViewportSize({ width: 1366, height: 768 });
     await designer.screenshot({ path: `${shots}/review-designer-thread.png` });
+    // on a phone the threads are a sheet from the bottom, opened from the canvas
+    await designer.setViewportSize({ width: 390, height: 844 });
+    const sheet = designer.getByTestId("review-sheet");
+    await expect(designer.getByTestId("phone-threads").or(sheet)).toBeVisible();
+    if (!(await sheet.isVisible())) await designer.getByTestId("phone-threads").click();
+    await expect(sheet).toContainText("Bypass setting and zone 1 velocity");
+    await designer.screenshot({ path: `${shots}/review-designer-phone.png` });
+    await designer.getByTestId("close-sheet").click();
+    await designer.setViewportSize({ width: 1366, height: 768 });
 
     // 5. Rev 2 saved and submitted; the reviewer sees it live and approves; the designer issues
     await designer.getByRole("button", { name: "Save revision" }).click();
