@@ -1,5 +1,7 @@
+import fs from "node:fs";
 import path from "node:path";
 import type PDFDocument from "pdfkit";
+import { woffToSfnt } from "./woff-to-sfnt";
 
 // Shared pieces of the handover PDF: page geometry, colours, and the embedded IBM Plex fonts
 // (IBM's complete WOFF files, which hold the arrows and Greek letters the report writes;
@@ -23,10 +25,20 @@ export const FONTS = {
   mono: () => path.join(fontDir(), "plex-mono/fonts/complete/woff/IBMPlexMono-Regular.woff"),
 };
 
+const g = globalThis as unknown as { __loopwrightPdfFonts?: Record<keyof typeof FONTS, Buffer> };
+/** The three faces as sfnt bytes, unpacked once per process (woff-to-sfnt.ts). */
+function fontBytes(): Record<keyof typeof FONTS, Buffer> {
+  g.__loopwrightPdfFonts ??= {
+    regular: woffToSfnt(fs.readFileSync(FONTS.regular())), bold: woffToSfnt(fs.readFileSync(FONTS.bold())), mono: woffToSfnt(fs.readFileSync(FONTS.mono())),
+  };
+  return g.__loopwrightPdfFonts;
+}
+
 export function registerFonts(doc: Doc): void {
-  doc.registerFont("Plex", FONTS.regular());
-  doc.registerFont("Plex-Bold", FONTS.bold());
-  doc.registerFont("Plex-Mono", FONTS.mono());
+  const f = fontBytes();
+  doc.registerFont("Plex", f.regular);
+  doc.registerFont("Plex-Bold", f.bold);
+  doc.registerFont("Plex-Mono", f.mono);
   doc.font("Plex");
 }
 
