@@ -53,7 +53,7 @@ export function ProjectForm({ initial, submitLabel, onSubmit, onCancel }: {
         {text("name", "Project name")}
         {text("site", "Site", "(address or description)")}
         {text("client", "Client")}
-        {text("clientEmail", "Client e-mail", "(the handover report is sent here)")}
+        {text("clientEmail", "Handover e-mail", "(the report is sent to this address)")}
       </div>
       <fieldset>
         <legend className="text-sm font-semibold">Design defaults <span className="text-xs font-normal text-ink-faint">— new schematics start from these</span></legend>

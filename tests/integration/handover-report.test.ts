@@ -1,3 +1,4 @@
+import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db";
 import { revisionWithResults } from "@/lib/revisions/with-results";
@@ -99,6 +100,22 @@ describe("a draft's report", () => {
     expect(draftPages.length).toBeGreaterThan(3);
     for (const p of draftPages) expect(p).toContain("DRAFT");
     expect((await pdfOf(f.revisionId, owner)).res.headers.get("x-report-cache")).toBe("miss");
+  }, 30_000);
+});
+
+describe("site records in the report", () => {
+  it("lists a pressure test made against the revision with its verdict, witness and author", async () => {
+    const f = await makeFixture({ revisionStatus: "issued" });
+    await db()("site_events").insert({ id: randomUUID(), project_id: f.projectId, schematic_id: f.teamSchematicId, revision_id: f.revisionId, kind: "pressure-test",
+      data: JSON.stringify({ medium: "water", testPressureBar: 4.5, startPressureBar: 4.5, endPressureBar: 4.45, startedAt: "2026-12-03T09:00:00Z",
+        endedAt: "2026-12-03T10:00:00Z", ambientStartC: 12, ambientEndC: 13, witness: "Rowan Witness (invented)" }),
+      context: "{}", made_at: "2026-12-03T10:05:00Z", author_id: "demo-installer" });
+    const text = squeeze((await pdfPages((await pdfOf(f.revisionId, owner)).bytes)).join("\n"));
+    const tests = text.split(squeeze("Pressure tests")).slice(-1)[0]!;
+    expect(tests).toContain(squeeze("Rowan Witness (invented)"));
+    // 0.05 bar over 60 min is within the default rule (at most 0.2 bar over 60 min — lib/site/pressure-test.ts, common practice)
+    expect(tests).toContain("PASS");
+    expect(tests).toContain("0.05");
   }, 30_000);
 });
 
