@@ -17,7 +17,8 @@
  * Then (scripts/bench/): one scenario solve beside EPANET 2.2 open + solve on the same
  * buildings and looped grids of 1,000 and 10,000 pipes (≤ 0.5 ×), with fill and work of the
  * solver's order against nested dissection; calculate() of 2,000 pipes against JSON.parse +
- * JSON.stringify (< 3 ×); optimising the demo hall (< 1 s).
+ * JSON.stringify (< 3 ×); optimising the demo hall (< 1 s); the demo hall's handover report
+ * as PDF and HTML (< 2 s, scripts/bench/handover-report.ts).
  * Env: BENCH_URL (default http://localhost:3000), BENCH_COOKIE (sent as Cookie),
  * BENCH_SIZES (e.g. "500,2000"), BENCH_SECONDS (API duration, default 10),
  * BENCH_GC_EACH=1 (force a full gc() before every timed run, the old timing),
@@ -35,6 +36,7 @@ import { benchBoard } from "./bench-board";
 import { benchDraft } from "./bench-draft";
 import { benchCalcVsJson, benchOptimiseHall } from "./bench/calc-vs-json";
 import { benchSolverVsEpanet } from "./bench/solver-vs-epanet";
+import { benchHandoverReport } from "./bench/handover-report";
 
 // A real gc() makes the heap figures comparable between sizes (no --expose-gc flag needed).
 setFlagsFromString("--expose-gc");
@@ -216,9 +218,10 @@ async function main() {
   const solverOk = await benchSolverVsEpanet(epanetSizes);
   const jsonOk = benchCalcVsJson(2000);
   const optimiseOk = benchOptimiseHall();
+  const reportOk = await benchHandoverReport();
   const api = await benchApi();
   await benchBoard((process.env.BENCH_URL ?? "http://localhost:3000").replace(/\/$/, ""));
-  const ok = engineOk && draftOk && solverOk && jsonOk && optimiseOk && api !== "fail";
+  const ok = engineOk && draftOk && solverOk && jsonOk && optimiseOk && reportOk && api !== "fail";
   console.log(`\n${ok ? "All measured targets met" : "Some targets missed (see FAIL above)"}${api === "skipped" ? " (API not measured)." : "."}`);
 }
 

@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { readDesignDefaults } from "@/lib/projects/design-defaults";
 import { ProjectForm } from "./project-form";
 
-const blank = { name: "", client: "", site: "", design: readDesignDefaults({}) };
+const blank = { name: "", client: "", clientEmail: "", site: "", design: readDesignDefaults({}) };
 
 /** "New project": opens the project form; a created project opens at once. */
 export function NewProject({ startOpen = false }: { startOpen?: boolean }) {

@@ -5,12 +5,12 @@ import { Button } from "@/components/ui/button";
 import type { Issue } from "@/lib/schematic";
 import type { DesignDefaults } from "@/lib/projects/design-defaults";
 
-export interface ProjectFields { name: string; client: string; site: string; design: DesignDefaults }
+export interface ProjectFields { name: string; client: string; clientEmail: string; site: string; design: DesignDefaults }
 type Result = { ok: true } | { ok: false; error: string; issues?: Issue[] };
 
 const input = "w-full rounded-md border border-ink/15 bg-white px-2.5 py-1.5 text-sm focus:outline-2 focus:outline-copper-500 aria-[invalid=true]:border-fault";
 
-/** Name, client, site and the design defaults every new schematic of the project starts from; new and edit share it. */
+/** Name, client and their e-mail, site and the design defaults every new schematic of the project starts from; new and edit share it. */
 export function ProjectForm({ initial, submitLabel, onSubmit, onCancel }: {
   initial: ProjectFields; submitLabel: string; onSubmit: (v: ProjectFields) => Promise<Result>; onCancel?: () => void;
 }) {
@@ -27,11 +27,12 @@ export function ProjectForm({ initial, submitLabel, onSubmit, onCancel }: {
     setBusy(false);
     setState(r.ok ? null : { error: r.error, issues: r.issues ?? [] });
   };
-  const text = (key: "name" | "client" | "site", label: string, hint?: string) => (
+  const text = (key: "name" | "client" | "clientEmail" | "site", label: string, hint?: string) => (
     <label className="block text-sm">
       <span className="font-medium">{label}</span>{hint && <span className="ml-1 text-xs text-ink-faint">{hint}</span>}
       <input className={`${input} mt-1`} value={v[key]} onChange={(e) => setV({ ...v, [key]: e.target.value })} aria-invalid={issue(key) ? true : undefined}
-        maxLength={key === "site" ? 240 : 160} required={key === "name"} />
+        maxLength={key === "site" ? 240 : key === "clientEmail" ? 254 : 160} required={key === "name"} type={key === "clientEmail" ? "email" : "text"}
+        data-testid={`project-${key}`} />
       {issue(key) && <span className="text-xs text-fault">{issue(key)}</span>}
     </label>
   );
@@ -48,10 +49,11 @@ export function ProjectForm({ initial, submitLabel, onSubmit, onCancel }: {
   );
   return (
     <form onSubmit={submit} className="space-y-3 rounded-lg border border-ink/10 bg-white p-4 shadow-sm" aria-label={submitLabel} data-testid="project-form">
-      <div className="grid gap-3 sm:grid-cols-3">
+      <div className="grid gap-3 sm:grid-cols-2">
         {text("name", "Project name")}
-        {text("client", "Client")}
         {text("site", "Site", "(address or description)")}
+        {text("client", "Client")}
+        {text("clientEmail", "Handover e-mail", "(the report is sent to this address)")}
       </div>
       <fieldset>
         <legend className="text-sm font-semibold">Design defaults <span className="text-xs font-normal text-ink-faint">— new schematics start from these</span></legend>

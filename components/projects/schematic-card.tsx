@@ -38,6 +38,9 @@ export function SchematicCard({ projectId, s, compact = false, canVariant = fals
         {s.revisions.some((r) => r.status === "issued") && (
           <Link href={`${href}/site`} className="rounded-md border border-copper-500 px-3 py-1.5 text-sm font-medium text-copper-700 hover:bg-copper-50" data-testid="site-sheet-link">Site sheet</Link>
         )}
+        {s.revisions.some((r) => r.status === "issued") && (
+          <Link href={`${href}/handover`} className="rounded-md border border-copper-500 px-3 py-1.5 text-sm font-medium text-copper-700 hover:bg-copper-50" data-testid="handover-link">Handover pack</Link>
+        )}
         {canVariant && <NewVariantButton schematicId={s.id} label={variantLabel} />}
         {canCompare && <Link href={compareHref(projectId, `schematic:${s.id}`)} className="text-sm text-copper-700 underline hover:text-copper-600">Compare with…</Link>}
       </div>

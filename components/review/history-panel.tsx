@@ -82,7 +82,8 @@ function Entry({ h }: { h: HistoryEntry }) {
 }
 
 function EventLine({ e }: { e: RevisionEvent }) {
-  const what = e.kind === "restored" ? "restored as the draft" : verbs[e.to ?? ""] ?? `moved to ${e.to}`;
+  const what = e.kind === "restored" ? "restored as the draft" : e.kind === "handover" ? `handover report sent to ${e.detail?.to ?? "the client"}`
+    : verbs[e.to ?? ""] ?? `moved to ${e.to}`;
   return (
     <li className="text-[11px] text-ink-soft">
       {what} by {e.actorName ?? "someone"}, {stamp(e.at)}{e.reason ? <>: <span className="text-ink">“{e.reason.length > 120 ? `${e.reason.slice(0, 120)}…` : e.reason}”</span></> : null}

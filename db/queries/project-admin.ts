@@ -3,13 +3,15 @@ import { db } from "@/lib/db";
 
 // Creating, changing and deleting projects (the list is in ./projects.ts).
 
-export type NewProject = { name: string; client: string; site: string; design: Record<string, unknown> };
-export type ProjectChange = { name?: string; client?: string; site?: string; design?: Record<string, unknown>; archived?: boolean };
+export type NewProject = { name: string; client: string; clientEmail?: string; site: string; design: Record<string, unknown> };
+export type ProjectChange = { name?: string; client?: string; clientEmail?: string; site?: string; design?: Record<string, unknown>; archived?: boolean };
 
 export interface ProjectHead {
   id: string;
   name: string;
   client: string;
+  /** Where the handover report is sent ("" when not given). */
+  clientEmail: string;
   site: string;
   firm: string;
   organisationId: string;
@@ -45,7 +47,7 @@ export async function insertProject(organisationId: string, userId: string, p: N
   Promise<{ id: string; name: string } | null> {
   try {
     return await db().transaction(async (trx) => {
-      const [row] = await trx("projects").insert({ organisation_id: organisationId, name: p.name, client: p.client, site: p.site,
+      const [row] = await trx("projects").insert({ organisation_id: organisationId, name: p.name, client: p.client, client_email: p.clientEmail ?? "", site: p.site,
         design_conditions: JSON.stringify(p.design), created_by: userId }).returning(["id", "name"]);
       await trx("project_members").insert({ project_id: row.id, user_id: userId, role: "owner" });
       for (const s of schematics) {
@@ -64,6 +66,7 @@ export async function updateProjectRow(projectId: string, c: ProjectChange): Pro
   const row: Record<string, unknown> = { updated_at: db().fn.now() };
   if (c.name !== undefined) row.name = c.name;
   if (c.client !== undefined) row.client = c.client;
+  if (c.clientEmail !== undefined) row.client_email = c.clientEmail;
   if (c.site !== undefined) row.site = c.site;
   if (c.design !== undefined) row.design_conditions = JSON.stringify(c.design);
   if (c.archived !== undefined) row.archived_at = c.archived ? db().fn.now() : null;
@@ -83,8 +86,8 @@ export async function archiveProjectRow(projectId: string): Promise<void> {
 
 export async function getProjectHead(projectId: string): Promise<ProjectHead | null> {
   const row = await db()("projects as p").join("organisations as o", "o.id", "p.organisation_id")
-    .where("p.id", projectId).first("p.id", "p.name", "p.client", "p.site", "o.name as firm", "p.organisation_id", "p.design_conditions", "p.archived_at");
-  return row ? { id: row.id, name: row.name, client: row.client, site: row.site, firm: row.firm, organisationId: row.organisation_id,
+    .where("p.id", projectId).first("p.id", "p.name", "p.client", "p.client_email", "p.site", "o.name as firm", "p.organisation_id", "p.design_conditions", "p.archived_at");
+  return row ? { id: row.id, name: row.name, client: row.client, clientEmail: row.client_email, site: row.site, firm: row.firm, organisationId: row.organisation_id,
     design: row.design_conditions, archivedAt: row.archived_at ? new Date(row.archived_at).toISOString() : null } : null;
 }
 

@@ -19,6 +19,8 @@ export async function seed(knex: Knex): Promise<void> {
   for (const p of demoProjects) {
     await knex("projects").insert({ id: p.id, organisation_id: demoFirm.id, name: p.name, client: p.client, site: p.site,
       design_conditions: p.design, created_by: "demo-owner" }).onConflict("id").ignore();
+    // the client's address came later (handover): given to a demo project that has none yet
+    await knex("projects").where({ id: p.id, client_email: "" }).update({ client_email: p.clientEmail });
     for (const u of demoUsers) {
       await knex("project_members").insert({ project_id: p.id, user_id: u.id, role: u.role }).onConflict(["project_id", "user_id"]).ignore();
     }

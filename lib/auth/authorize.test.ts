@@ -26,6 +26,7 @@ const expected: Record<Action, Record<ProjectRole, boolean>> = {
   "site.record":       { owner: Y, designer: n, reviewer: n, installer: Y, trainee: n },
   "rooms.edit":        { owner: Y, designer: Y, reviewer: n, installer: n, trainee: n },
   "site.rules":        { owner: Y, designer: n, reviewer: n, installer: n, trainee: n },
+  "handover.send":     { owner: Y, designer: Y, reviewer: n, installer: n, trainee: n },
 };
 
 describe("can(role, action)", () => {

@@ -9,7 +9,7 @@ export const actions = [
   "project.read", "project.update", "project.delete", "members.manage",
   "schematic.read", "schematic.edit", "schematic.size", "variant.practice", "variant.read-practice", "variant.compare",
   "revision.save", "revision.submit", "revision.review", "revision.issue",
-  "comment.write", "site.read", "site.record", "rooms.edit", "site.rules",
+  "comment.write", "site.read", "site.record", "rooms.edit", "site.rules", "handover.send",
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -25,7 +25,7 @@ const table: Record<ProjectRole, Partial<Record<Action, true>>> = {
   designer: {
     "project.read": R, "project.update": R, "schematic.read": R, "schematic.edit": R, "schematic.size": R,
     "variant.practice": R, "variant.compare": R, "revision.save": R, "revision.submit": R, "revision.issue": R,
-    "comment.write": R, "site.read": R, "rooms.edit": R,
+    "comment.write": R, "site.read": R, "rooms.edit": R, "handover.send": R,
   },
   reviewer: {
     "project.read": R, "schematic.read": R, "variant.read-practice": R, "variant.compare": R, "revision.review": R, "comment.write": R, "site.read": R,
@@ -51,6 +51,7 @@ export const actionWords: Record<Action, string> = {
   "revision.issue": "issue an approved revision", "comment.write": "write comments", "site.read": "read the site sheet",
   "site.record": "record site work", "rooms.edit": "change the rooms or the firm's emitter list",
   "site.rules": "set the firm's site rules (pressure-test drop and hold time)",
+  "handover.send": "send the handover report to the client",
 };
 
 /** Roles that may do an action, for "needs owner or designer" messages. */

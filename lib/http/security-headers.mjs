@@ -14,6 +14,12 @@ export const commonSecurityHeaders = [
 export const apiContentSecurityPolicy = "default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
 
 /**
+ * The handover report's HTML print view (a route handler's answer, not a page): its own inline
+ * stylesheet and inline SVG drawings, nothing else — no scripts, no other origin.
+ */
+export const reportContentSecurityPolicy = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
+
+/**
  * A page's policy (Next.js 16 guide "Content Security Policy", nonce set by proxy.ts):
  * scripts only with this response's nonce ('strict-dynamic' lets them load Next's chunks);
  * <style> elements with the nonce too, but style="" attributes allowed (style-src-attr),

@@ -24,3 +24,4 @@ export async function sendMail(m: Message): Promise<void> {
 
 export * from "./templates";
 export * from "./review-templates";
+export * from "./handover-template";

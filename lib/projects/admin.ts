@@ -15,11 +15,13 @@ import { designDefaultsSchema, withDesignDefaults } from "./design-defaults";
 
 const nameField = z.string({ error: "Project name is required." }).trim().min(1, "Project name is required.").max(160, "Project name must be at most 160 characters.");
 const clientField = z.string().trim().max(160, "Client must be at most 160 characters.");
+const clientEmailField = z.union([z.literal(""), z.email("Client e-mail must be an e-mail address, like name@example.com.").max(254, "Client e-mail must be at most 254 characters.")]);
 const siteField = z.string().trim().max(240, "Site must be at most 240 characters.");
 
 export const newProjectInput = z.object({
   name: nameField,
   client: clientField.default(""),
+  clientEmail: z.string().trim().pipe(clientEmailField).default(""),
   site: siteField.default(""),
   design: designDefaultsSchema.prefault({}),
 });
@@ -28,10 +30,11 @@ export const newProjectInput = z.object({
 export const projectChangeInput = z.object({
   name: nameField.optional(),
   client: clientField.optional(),
+  clientEmail: z.string().trim().pipe(clientEmailField).optional(),
   site: siteField.optional(),
   design: designDefaultsSchema.optional(),
   archived: z.boolean({ error: "archived must be true or false." }).optional(),
-}).refine((c) => Object.values(c).some((v) => v !== undefined), { message: "Say what to change: name, client, site, design or archived." });
+}).refine((c) => Object.values(c).some((v) => v !== undefined), { message: "Say what to change: name, client, clientEmail, site, design or archived." });
 
 const nameTaken = (name: string) => new UserError(409, `Your firm already has a project called "${name}" (names are compared ignoring case). Choose another name.`);
 
@@ -91,7 +94,7 @@ export async function copyDemoProject(): Promise<{ id: string; name: string }> {
   const demo = demoProjects.find((p) => p.name === "Orchard End")!;
   let name = `${demo.name} (demo copy)`;
   for (let n = 2; await projectNameTaken(firm, name); n++) name = `${demo.name} (demo copy ${n})`;
-  const project = await insertProject(firm, user.id, { name, client: demo.client, site: demo.site, design: demo.design },
+  const project = await insertProject(firm, user.id, { name, client: demo.client, clientEmail: demo.clientEmail, site: demo.site, design: demo.design },
     demo.schematics.map((s) => ({ name: s.name, doc: demoDocument(s.file, `${demo.name} — ${s.name}`) })));
   if (!project) throw nameTaken(name);
   await audit({ actorId: user.id, action: "project.created", projectId: project.id, target: project.name, detail: { copyOf: "demo" }, ip: await requestIp() });

@@ -43,11 +43,11 @@ async function eventsOf(schematicId: string): Promise<Map<string, RevisionEvent[
     and m.created_at = (select min(created_at) from thread_messages where thread_id = e.thread_id)) as reason`);
   const rows = await db()("revision_events as e").leftJoin("users as u", "u.id", "e.actor_id")
     .where("e.schematic_id", schematicId).orderBy("e.at", "asc")
-    .select("e.revision_id", "e.kind", "e.from_status", "e.to_status", "e.actor_id", "u.name as actor_name", "e.at", "e.thread_id", reason);
+    .select("e.revision_id", "e.kind", "e.from_status", "e.to_status", "e.actor_id", "u.name as actor_name", "e.at", "e.thread_id", "e.detail", reason);
   const out = new Map<string, RevisionEvent[]>();
   for (const r of rows) {
     const e: RevisionEvent = { kind: r.kind, from: r.from_status as RevisionStatus | null, to: r.to_status as RevisionStatus | null, actorId: r.actor_id,
-      actorName: r.actor_name, at: new Date(r.at).toISOString(), threadId: r.thread_id, reason: r.reason ?? null };
+      actorName: r.actor_name, at: new Date(r.at).toISOString(), threadId: r.thread_id, reason: r.reason ?? null, detail: r.detail ?? null };
     out.set(r.revision_id, [...(out.get(r.revision_id) ?? []), e]);
   }
   return out;

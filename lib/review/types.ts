@@ -41,7 +41,7 @@ export interface Thread {
 export interface Person { id: string; name: string }
 
 export interface RevisionEvent {
-  kind: "status" | "restored";
+  kind: "status" | "restored" | "handover";
   from: RevisionStatus | null;
   to: RevisionStatus | null;
   actorId: string | null;
@@ -50,6 +50,8 @@ export interface RevisionEvent {
   /** The thread holding a send-back's reason. */
   threadId: string | null;
   reason: string | null;
+  /** A handover: to whom the report went, and the file. */
+  detail?: { to?: string; file?: string } | null;
 }
 
 export interface HistoryEntry {

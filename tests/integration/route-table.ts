@@ -56,6 +56,12 @@ const emitterListRoute = () => import("@/app/api/v1/projects/[projectId]/emitter
 const demoFile = (f: string) => readFileSync(path.join(process.cwd(), "db/seeds/data", f), "utf8");
 const oneRoom = { name: "Matrix room", roomTemperatureC: 20, heatLossW: 800, emitter: { kind: "radiator", outputAtDt50W: 2400, exponentN: 1.3 } };
 const optimiseRoute = () => import("@/app/api/v1/optimise/route");
+const reportPdfRoute = () => import("@/app/api/v1/revisions/[revisionId]/report.pdf/route");
+const reportHtmlRoute = () => import("@/app/api/v1/revisions/[revisionId]/report/route");
+const materialsJsonRoute = () => import("@/app/api/v1/revisions/[revisionId]/materials.json/route");
+const materialsCsvRoute = () => import("@/app/api/v1/revisions/[revisionId]/materials.csv/route");
+const priceListRoute = () => import("@/app/api/v1/projects/[projectId]/price-list/route");
+const handoverRoute = () => import("@/app/api/v1/revisions/[revisionId]/handover/route");
 const teamActions = () => import("@/components/team/actions");
 const authActions = () => import("@/components/auth/actions");
 const projectActions = () => import("@/components/projects/actions");
@@ -581,6 +587,39 @@ export const rows: Row[] = [
     // the demo owner owns the fixture's firm; setting the rule to what it is changes nothing for other tests
     name: "action setFirmReviewRuleAction", kind: "action", expect: allow(["owner"]),
     call: async (f, cookie) => callAction(async () => (await reviewActions()).setFirmReviewRuleAction({ projectId: f.projectId, noSelfApproval: true }), cookie),
+  },
+
+  // ——— handover pack (issue 12): report, materials, price list, send ———
+  {
+    // a draft's report (marked DRAFT): the schematic's readers; installers see issued revisions only
+    name: "GET /api/v1/revisions/[id]/report.pdf draft", kind: "route", expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => callRoute((await reportPdfRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}/report.pdf`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "GET /api/v1/revisions/[id]/report.pdf issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await reportPdfRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}/report.pdf`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "GET /api/v1/revisions/[id]/report (HTML) issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await reportHtmlRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}/report`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "GET /api/v1/revisions/[id]/materials.json draft", kind: "route", expect: { ...allow(members), installer: 403 },
+    call: async (f, cookie) => callRoute((await materialsJsonRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}/materials.json`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "GET /api/v1/revisions/[id]/materials.csv issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(members),
+    call: async (f, cookie) => callRoute((await materialsCsvRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}/materials.csv?allowance=5`, cookie, params: { revisionId: f.revisionId } }),
+  },
+  {
+    name: "POST /api/v1/projects/[projectId]/price-list", kind: "route", expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await priceListRoute()).POST as never, { method: "POST", path: `/api/v1/projects/${f.projectId}/price-list`, cookie, params: { projectId: f.projectId },
+      rawBody: "code,description,unit,price\nCU22,Copper tube 22 mm,m,4.10\n", contentType: "text/csv" }),
+  },
+  {
+    name: "POST /api/v1/revisions/[id]/handover issued", kind: "route", fixture: { revisionStatus: "issued" }, expect: allow(["owner", "designer"]),
+    call: async (f, cookie) => callRoute((await handoverRoute()).POST as never, { method: "POST", path: `/api/v1/revisions/${f.revisionId}/handover`, cookie,
+      params: { revisionId: f.revisionId }, body: { to: `matrix-client-${f.projectId.slice(0, 8)}@example.test` } }),
   },
 
   // ——— TODO: board routes not written yet; replace each with a real row ———

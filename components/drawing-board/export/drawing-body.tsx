@@ -5,14 +5,14 @@
  * printed sheet (drawing-sheet.tsx) frames it with a title block; side by side draws two
  * of them with the differences marked (`marks`) and, on request, only those (`only`).
  */
-import { getSmoothStepPath } from "@xyflow/react";
+import { getSmoothStepPath } from "@xyflow/system";
 import { splitPortRef, type Part, type Schematic } from "@/lib/schematic";
 import { layoutOf, symbols } from "../parts";
 import { autoOrient, explicitOrientation, IDENTITY, orientedLayout, svgTransform, type Orientation } from "../parts/orientation";
 import { portPoint } from "../parts/port-point";
 import { partTag } from "../parts/tag";
 import { pipeSides } from "../pipes/flow-side";
-import { PIPE_STEP, pipeCaption, sideColour } from "../pipes/pipe-edge";
+import { PIPE_STEP, pipeCaption, sideColour } from "../pipes/pipe-style";
 
 export const SHEET_FONT = "'IBM Plex Sans', Arial, sans-serif";
 const INK = "#1f1d1a";

@@ -3,7 +3,7 @@
  * layout and orientation (as its handles are placed on the canvas). Shared by
  * the far-out overview canvas and the drawing export. Pure.
  */
-import { Position } from "@xyflow/react";
+import { Position } from "@xyflow/system";
 import type { Part } from "@/lib/schematic";
 import { layoutOf } from "./layout";
 import { orientedLayout, type Orientation } from "./orientation";

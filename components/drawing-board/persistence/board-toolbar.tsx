@@ -2,6 +2,7 @@
 
 import { UnitsPicker } from "@/components/units/units-picker";
 import { CompareWithLink } from "@/components/compare/compare-with-link";
+import { HandoverLink } from "@/components/handover/handover-link";
 import { SizeItButton } from "../overlay/size-it-button";
 import { ExportMenu } from "./export-menu";
 import { SizeProposalButton } from "../proposal/size-proposal-button";
@@ -15,6 +16,7 @@ export function BoardToolbar() {
       <UnitsPicker />
       <ExportMenu />
       <CompareWithLink />
+      <HandoverLink />
       <SizeItButton />
       <SizeProposalButton />
     </>

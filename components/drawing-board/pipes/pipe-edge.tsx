@@ -10,16 +10,12 @@ import { BaseEdge, getSmoothStepPath, type Edge, type EdgeProps } from "@xyflow/
 import type { Pipe } from "@/lib/schematic";
 import type { PipeLabel } from "../overlay/pipe-labels";
 import type { PipeSide } from "./flow-side";
+import { PIPE_STEP, pipeCaption, sideColour } from "./pipe-style";
 
 export type PipeEdgeData = { pipe: Pipe; side: PipeSide; overlay: PipeLabel | null };
 export type PipeEdge = Edge<PipeEdgeData, "pipe">;
 
-export const sideColour: Record<PipeSide, string> = { flow: "#c8322b", return: "#2b5fc8", none: "#8a8378" };
-
-const metres = (m: number) => `${Number.isInteger(m) ? m : Number(m.toFixed(2))} m`;
-export const pipeCaption = (pipe: Pipe) => `${pipe.size} · ${metres(pipe.lengthM)}`;
-/** How a run turns between its ports (getSmoothStepPath), shared with the overview canvas. */
-export const PIPE_STEP = { borderRadius: 6, offset: 16 } as const;
+export { PIPE_STEP, pipeCaption, sideColour };
 /** Its colour: the velocity band after Size it, else flow or return side. */
 export const pipeColour = (d: PipeEdgeData) => (d.overlay ? d.overlay.color : sideColour[d.side]);
 

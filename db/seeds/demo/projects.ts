@@ -5,11 +5,12 @@ import path from "node:path";
 // a placeholder stands in while a file is missing so the seed never fails.
 type DemoSchematic = { name: string; file: string; kind?: "team" | "practice"; status: "draft" | "in-review" | "approved" | "issued" };
 
-export const demoProjects: { id: string; name: string; client: string; site: string; design: Record<string, unknown>; schematics: DemoSchematic[] }[] = [
+export const demoProjects: { id: string; name: string; client: string; clientEmail: string; site: string; design: Record<string, unknown>; schematics: DemoSchematic[] }[] = [
   {
     id: "6a0f3c1e-0000-4000-8000-000000000101",
     name: "Millbrook Community Hall",
     client: "Millbrook Hall Trust",
+    clientEmail: "trustees@millbrook-hall.example",
     site: "Hall and annexe, 3 Weir Lane, Millbrook (invented)",
     // the project's design conditions: what its new schematics start with (lib/schematic/project-defaults.ts)
     design: { fluid: { kind: "water" }, design: { flowTemperatureC: 45, returnTemperatureC: 40, minOutdoorTemperatureC: -3, hotWaterFlowTemperatureC: 55 } },
@@ -19,6 +20,7 @@ export const demoProjects: { id: string; name: string; client: string; site: str
     id: "6a0f3c1e-0000-4000-8000-000000000102",
     name: "Orchard End",
     client: "The Orchard End household",
+    clientEmail: "household@orchard-end.example",
     site: "Detached house, Orchard End, Lower Alder (invented)",
     design: { fluid: { kind: "water" }, design: { flowTemperatureC: 45, returnTemperatureC: 40, minOutdoorTemperatureC: -2, hotWaterFlowTemperatureC: 55 } },
     schematics: [

@@ -72,6 +72,7 @@ export async function snapshot(f: Fixture): Promise<string> {
     k("projects").where("name", "like", `${FIXTURE_PREFIX} new %`).count("* as n"),
     k("project_rooms").where({ project_id: f.projectId }).select("*"),
     k("firm_emitters").where({ organisation_id: demoFirm.id }).select("*"),
+    k("project_price_lists").where({ project_id: f.projectId }).select("*"),
   ]);
   return JSON.stringify(parts);
 }

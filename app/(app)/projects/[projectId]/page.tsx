@@ -69,7 +69,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         </span>
         {can(role, "project.update") && (
           <ProjectSettings projectId={projectId} archived={project.archivedAt !== null}
-            initial={{ name: project.name, client: project.client, site: project.site, design }} />
+            initial={{ name: project.name, client: project.client, clientEmail: project.clientEmail, site: project.site, design }} />
         )}
       </div>
       {project.archivedAt && (
