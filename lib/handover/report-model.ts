@@ -9,15 +9,10 @@ import type { Results, Schematic } from "@/lib/schematic";
 import type { SiteRecords } from "@/lib/site/records";
 import { HANDOVER_CAUTIONS } from "./cautions";
 import { recordSections, settingsSection } from "./report-site";
+import type { Block, Section } from "./report-blocks";
 import { sizingSections } from "./report-sizing";
 
-export type Block =
-  | { kind: "para"; text: string; tone?: "warn" | "muted" }
-  | { kind: "table"; columns: string[]; rows: string[][]; numeric?: boolean[] }
-  | { kind: "drawing" }
-  | { kind: "pump-curve"; id: string; label: string; mode: string; curve: [number, number][]; duty: { flowM3h: number; headKpa: number } | null };
-
-export interface Section { id: string; title: string; blocks: Block[] }
+export type { Block, Section } from "./report-blocks";
 
 export interface ReportInput {
   project: { name: string; client: string; site: string; firm: string };

@@ -11,7 +11,7 @@ import { partName } from "@/lib/site/names";
 import type { ReadingCheck } from "@/lib/site/commissioning";
 import type { SiteRecords } from "@/lib/site/records";
 import { partSettings } from "@/lib/site/settings";
-import type { Block, Section } from "./report-model";
+import type { Block, Section } from "./report-blocks";
 
 const when = (iso: string) => iso.replace("T", " ").slice(0, 16);
 const by = (r: { author: { name: string | null }; madeAt: string; correctedBy: string | null }) =>

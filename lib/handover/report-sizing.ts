@@ -5,7 +5,7 @@
  */
 import { splitPortRef, type Results, type Schematic } from "@/lib/schematic";
 import { partName } from "@/lib/site/names";
-import type { Block, Section } from "./report-model";
+import type { Block, Section } from "./report-blocks";
 
 /** Fixed decimals; "—" for no number; never "-0.00". */
 const f = (n: number | null | undefined, d: number) => (n === null || n === undefined || !Number.isFinite(n) ? "—" : (Math.abs(n) < 0.5 * 10 ** -d ? 0 : n).toFixed(d));
