@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { expansionFraction } from "../fluids";
-import { en12828FinalPressureBar, en12828MinimumFillPressureBar, en12828Vessel } from "./en12828";
+import { EN12828_SOURCE, en12828FinalPressureBar, en12828MinimumFillPressureBar, en12828Vessel } from "./en12828";
 
 // references.md §8.1: the Annex D layout is from memory (the standard's text is not public); what a
 // published source does confirm is checked beside it: p_e = p_SV − 0.5 bar (the hot system stays 0.5 bar
@@ -140,5 +140,13 @@ describe("EN 12828 inputs: each limit on both sides, the message naming the fiel
     expect(en12828MinimumFillPressureBar(12, 0.7, 3)).toBeCloseTo(1.7 * 12 / 9 - 1, 12);
     expect(() => en12828MinimumFillPressureBar(0, 0.7, 0)).toThrow(/^volumeL must be > 0, got 0$/);
     expect(() => en12828MinimumFillPressureBar(12, 0.7, -1)).toThrow(/^waterReserveL must be ≥ 0, got -1$/);
+  });
+});
+
+describe("the citation shown with the vessel's working", () => {
+  it("names the standard and annex, says the layout is from memory, and names the published check", () => {
+    expect(EN12828_SOURCE).toMatch(/^EN 12828:2012\+A1:2014, Annex D/);
+    expect(EN12828_SOURCE).toContain("from memory");
+    expect(EN12828_SOURCE).toContain("ASHRAE Handbook");
   });
 });

@@ -117,4 +117,4 @@ export function en12828Vessel(input: En12828Input): En12828Result {
 
 /** The citation shown with this formula's working. */
 export const EN12828_SOURCE =
-  "EN 12828:2012+A1:2014, Annex D (diaphragm expansion vessels) — formula layout from memory, corroborated by public implementations; not checked against the standard's text";
+  "EN 12828:2012+A1:2014, Annex D (diaphragm expansion vessels) — formula layout from memory, not checked against the standard's text; its acceptance factor is the diaphragm-tank form of the ASHRAE Handbook—HVAC Systems and Equipment";
