@@ -46,6 +46,8 @@ export const pipeResultSchema = z.object({
   pressureDropKpa: nnum,
   gradientPaPerM: nnum,
   suggestedSize: z.string().nullable(),
+  /** assumed values its flow rests on: where loops split the flow by resistance (else none: design flows follow the loads) */
+  restsOn,
 });
 
 export const partResultSchema = z.object({ id: z.string(), flowM3h: nnum, pressureDropKpa: nnum, restsOn });

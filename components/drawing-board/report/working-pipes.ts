@@ -7,7 +7,7 @@ import { findPipeSize } from "@/lib/hydraulics/pipes/catalogue";
 import { DARCY_WEISBACH_SOURCE } from "@/lib/hydraulics/pipes/pressure-drop";
 import type { ModeResult, Pipe, Results, Schematic } from "@/lib/schematic";
 import { modeOf } from "../overlay/results-mode";
-import { f, type Working } from "./working-base";
+import { assumedLines, f, type Working } from "./working-base";
 
 function bore(pipe: Pipe): { dMm: number | null; epsMm: number | null } {
   const row = findPipeSize(pipe.material, pipe.size);
@@ -41,6 +41,7 @@ export function pipeFlowWorking(doc: Schematic, results: Results, pipeId: string
     result: `${f(x.r.flowM3h, 4)} m³/h`,
     value: x.r.flowM3h,
     source: "Continuity (conservation of mass) at every junction; loads at q = P/(ρ·cp·ΔT)",
+    assumed: assumedLines(results, x.r.restsOn),
     figures: { sumM3h: sum, flowM3h: q },
   };
 }
@@ -80,6 +81,7 @@ export function velocityWorking(doc: Schematic, results: Results, pipeId: string
     result: `${f(Math.abs(x.r.velocityMps ?? 0), 2)} m/s (Re ${x.r.reynolds === null ? "—" : x.r.reynolds.toFixed(0)}, f ${f(x.r.frictionFactor, 4)})`,
     value: x.r.velocityMps === null ? null : Math.abs(x.r.velocityMps),
     source: `${REYNOLDS_SOURCE}; friction factor: ${COLEBROOK_SOURCE}`,
+    assumed: assumedLines(results, x.r.restsOn),
     figures: { flowM3h: q, innerDiameterMm: x.dMm, roughnessMm: x.epsMm, kinematicViscosityM2s: nu ?? NaN, velocityMps: v, reynolds: re ?? NaN, frictionFactor: fr ?? NaN },
   };
 }
@@ -117,6 +119,7 @@ export function pipeDpWorking(doc: Schematic, results: Results, pipeId: string, 
     result: `${f(r.pressureDropKpa, 3)} kPa (${f(r.gradientPaPerM, 0)} Pa/m)`,
     value: r.pressureDropKpa,
     source: `${DARCY_WEISBACH_SOURCE}; friction factor: ${COLEBROOK_SOURCE}; fitting K: ${CRANE_SOURCE}`,
+    assumed: assumedLines(results, x.r.restsOn),
     figures: { frictionFactor: r.frictionFactor ?? NaN, lengthM: pipe.lengthM, innerDiameterMm: dMm ?? NaN, sumK: sumK ?? NaN, densityKgM3: rho ?? NaN, velocityMps: v },
   };
 }

@@ -46,6 +46,21 @@ function pumpsOnLoops(ctx: EngineContext, state: NetworkState): number[] {
   });
 }
 
+/**
+ * Whether the links open in this state (loads cut) close a loop: the cyclomatic number
+ * links − nodes + components of the graph they span (Harary, Graph Theory, 1969, Thm 4.5).
+ * Without one the design flows follow the loads by continuity alone; with one the split
+ * follows the resistances, so every flow rests on the resistances assumed.
+ */
+export function designHasLoops(ctx: EngineContext, state: NetworkState): boolean {
+  const open = ctx.model.links.filter((l) => !isCut(ctx, l, state));
+  const comp = components(ctx.model.nodeCount, open);
+  const nodes = new Set<number>();
+  for (const l of open) nodes.add(l.from).add(l.to);
+  const pieces = new Set([...nodes].map((n) => comp[n]));
+  return open.length - nodes.size + pieces.size > 0;
+}
+
 export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): DesignSolution {
   const { model } = ctx;
   const state = baseState(ctx, "design", mode);

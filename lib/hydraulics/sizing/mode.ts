@@ -7,7 +7,7 @@ import { circulatingAdjacency } from "@/lib/hydraulics/network/circulating";
 import type { Circuit, ModeResult } from "@/lib/schematic/results";
 import { traceCircuits, type CircuitAnalysis } from "./circuits";
 import type { EngineContext } from "./context";
-import { solveDesign, type DesignSolution } from "./design";
+import { designHasLoops, solveDesign, type DesignSolution } from "./design";
 import type { NetworkState } from "./laws";
 import { partResults } from "./part-results";
 import { pipeResults } from "./pipe-results";
@@ -74,6 +74,8 @@ export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun
   // A circuit's drop rests on the assumed Kv of every part on its path (and of the pump's heat source).
   const restsOn = ca.circuits.map((c) => resistanceRefs(ctx.inputs, c.pump ? [...c.path, c.pump] : c.path));
   const pumps = pumpDuties(ctx, sol, ca, restsOn);
+  // where loops split the design flows, every flow rests on every resistance assumed
+  const loopRefs = designHasLoops(ctx, sol.state) ? resistanceRefs(ctx.inputs) : [];
   let sourceFlow: number | null = null;
   ctx.model.links.forEach((l, k) => {
     if (l.role === "heat-source") sourceFlow = (sourceFlow ?? 0) + Math.abs(sol.q[k]!);
@@ -96,8 +98,8 @@ export function runMode(ctx: EngineContext, mode: NetworkState["mode"]): ModeRun
   const result: ModeResult = {
     mode,
     heatSourceFlowM3h: sourceFlow !== null && Number.isFinite(sourceFlow) ? sourceFlow : null,
-    pipes: pipeResults(ctx, sol.q, mode, noFlow),
-    parts: partResults(ctx, sol.state, sol.laws, sol.q, sol.head),
+    pipes: pipeResults(ctx, sol.q, mode, noFlow, loopRefs),
+    parts: partResults(ctx, sol.state, sol.laws, sol.q, sol.head, loopRefs),
     circuits,
     pump,
     pumps,

@@ -34,6 +34,8 @@ export function partResults(
   laws: LinkTable,
   q: Float64Array,
   head: Float64Array,
+  /** assumed values every flow rests on (design.ts: where loops split it) */
+  shared: readonly string[] = [],
 ): PartResult[] {
   const out: PartResult[] = [];
   const tmp = new Float64Array(2);
@@ -63,7 +65,7 @@ export function partResults(
       dp = tmp[0]!;
     }
     const ref = ctx.inputs.kvRefOfPart.get(part.id);
-    const restsOn = ref ? [ref] : [];
+    const restsOn = [...new Set([...(ref ? [ref] : []), ...shared])];
     out.push({ id: part.id, flowM3h: fin(flow), pressureDropKpa: dp === null ? null : fin(dp), restsOn });
   }
   return out;

@@ -118,8 +118,11 @@ export function noFlowFinding(ctx: EngineContext, ids: readonly string[]): void 
   );
 }
 
-/** `noFlow`: where to gather the ids of pipes without flow; without it the finding is raised here. */
-export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, noFlowSink?: string[]): PipeResult[] {
+/**
+ * `noFlow`: where to gather the ids of pipes without flow; without it the finding is raised here.
+ * `restsOn`: the assumed values every pipe's flow rests on (design.ts: where loops split it).
+ */
+export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, noFlowSink?: string[], restsOn: readonly string[] = []): PipeResult[] {
   const fluid = ctx.fluid!;
   const { design } = ctx.doc;
   const noFlow: string[] = [];
@@ -132,10 +135,10 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, n
     if (flowM3h === 0) {
       noFlow.push(pipe.id);
       const zero = geom ? 0 : null;
-      return { id: pipe.id, flowM3h: 0, velocityMps: zero, reynolds: null, frictionFactor: null, pressureDropKpa: zero, gradientPaPerM: zero, suggestedSize: null };
+      return { id: pipe.id, flowM3h: 0, velocityMps: zero, reynolds: null, frictionFactor: null, pressureDropKpa: zero, gradientPaPerM: zero, suggestedSize: null, restsOn: [] };
     }
     if (!geom) {
-      return { id: pipe.id, flowM3h: flow, velocityMps: null, reynolds: null, frictionFactor: null, pressureDropKpa: null, gradientPaPerM: null, suggestedSize: flow === null ? null : suggestSize(ctx, i, flowM3h) };
+      return { id: pipe.id, flowM3h: flow, velocityMps: null, reynolds: null, frictionFactor: null, pressureDropKpa: null, gradientPaPerM: null, suggestedSize: flow === null ? null : suggestSize(ctx, i, flowM3h), restsOn: [...restsOn] };
     }
     const r = pipeDrop(geom, flowM3h / 3600, fluid.densityKgM3, fluid.kinematicViscosityM2s);
     const suggested = suggestSize(ctx, i, flowM3h);
@@ -172,6 +175,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, n
       pressureDropKpa: fin(r.dpPa / 1000),
       gradientPaPerM: fin(r.gradientPaPerM),
       suggestedSize: suggested,
+      restsOn: [...restsOn],
     };
   });
   if (noFlowSink) noFlowSink.push(...noFlow);
