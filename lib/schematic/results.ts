@@ -75,6 +75,8 @@ export const pumpDutySchema = z.object({
   speedFraction: nnum.default(null),
   /** head to set in a constant-pressure mode: the head required, kPa */
   constantPressureHeadKpa: nnum.default(null),
+  /** the pumps (and heat sources with a pump) driving this side, in series; the speed is for all of them together */
+  pumpIds: z.array(z.string()).default([]),
   restsOn,
 });
 

@@ -55,11 +55,15 @@ export function designFlowWorking(doc: Schematic, results: Results, partId: stri
 export function pathDrops(mode: ModeResult, c: Circuit): { id: string; dpKpa: number }[] {
   const pipes = new Map(mode.pipes.map((p) => [p.id, p]));
   const parts = new Map(mode.parts.map((p) => [p.id, p]));
-  return c.path.map((id) => {
+  // A pump in series on the path (its result is its head: a negative drop) is not a loss here:
+  // its head counts in the side's available head (lib/hydraulics/sizing/pumps.ts), as the engine
+  // reckons it. A heat source with a pump loses through its own resistance like any part.
+  const pumps = new Set(mode.pumps.flatMap((p) => p.pumpIds));
+  const isPumpHead = (id: string) => pumps.has(id) && (parts.get(id)?.pressureDropKpa ?? 0) < 0;
+  return c.path.filter((id) => !isPumpHead(id)).map((id) => {
     const pipe = pipes.get(id);
     if (pipe) return { id, dpKpa: Math.abs(pipe.pressureDropKpa ?? 0) };
     const dp = parts.get(id)?.pressureDropKpa ?? 0;
-    // a pump in series on the path adds its head (a negative drop); any other part loses in the flow's direction
     return { id, dpKpa: dp < 0 ? dp : Math.abs(dp) };
   });
 }

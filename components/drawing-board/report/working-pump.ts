@@ -1,6 +1,6 @@
 /** Workings of a pump duty: head needed, head available off the curve, and the setting that meets the duty. */
 import { AFFINITY_SOURCE, PUMP_OVERSIZE_MARGIN } from "@/lib/hydraulics/pumps/affinity";
-import { PUMP_CURVE_SOURCE, pumpHeadKpa, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
+import { PUMP_CURVE_SOURCE, pumpHeadKpa, SERIES_SOURCE, seriesCurve, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 import type { ModeResult, PumpDuty, Results, Schematic } from "@/lib/schematic";
 import { assumedLines, f, type Working } from "./working-base";
 
@@ -67,8 +67,13 @@ export function pumpSettingWorking(doc: Schematic, results: Results, mode: ModeR
   if (d.requiredHeadKpa === null || d.designFlowM3h === null || d.availableHeadKpa === null) return null;
   const n = d.speedFraction;
   const q = d.designFlowM3h;
+  // pumps in series on the side: their summed curve, all at the one speed
+  const series = d.pumpIds.length > 1;
   let atSpeed: number | null = null;
-  try { atSpeed = n ? pumpHeadKpa(curveOf(doc, d.id), q / n) : null; } catch { atSpeed = null; }
+  try {
+    const curve = series ? seriesCurve(d.pumpIds.map((id) => curveOf(doc, id))) : curveOf(doc, d.id);
+    atSpeed = n ? pumpHeadKpa(curve, q / n) : null;
+  } catch { atSpeed = null; }
   const surplus = d.surplusKpa ?? d.availableHeadKpa - d.requiredHeadKpa;
   return {
     title: `Setting for ${d.id} (${mode.mode})`,
@@ -81,13 +86,14 @@ export function pumpSettingWorking(doc: Schematic, results: Results, mode: ModeR
     steps: [
       { label: "surplus", value: `${f(surplus, 2)} kPa (${d.requiredHeadKpa > 0 ? f((surplus / d.requiredHeadKpa) * 100, 0) : "—"} %; oversized beyond ${PUMP_OVERSIZE_MARGIN * 100} %)` },
       { label: "q/n", value: n ? `${f(q / n, 4)} m³/h` : "—" },
-      { label: "H(q/n) on the curve drawn", value: `${f(atSpeed, 3)} kPa` },
+      ...(series ? [{ label: "pumps in series", value: `${d.pumpIds.join(" + ")}: heads added at one flow` }] : []),
+      { label: series ? "H(q/n) on their summed curve" : "H(q/n) on the curve drawn", value: `${f(atSpeed, 3)} kPa` },
       { label: "n²·H(q/n)", value: `${f(n && atSpeed !== null ? n * n * atSpeed : null, 3)} kPa` },
       { label: "constant-pressure head to set", value: `${f(d.constantPressureHeadKpa, 2)} kPa` },
     ],
     result: n ? `${f(n * 100, 1)} % speed, or ${f(d.constantPressureHeadKpa, 1)} kPa constant pressure` : "no slower setting found on the curve drawn",
     value: n,
-    source: `${AFFINITY_SOURCE}; the ${PUMP_OVERSIZE_MARGIN * 100} % margin is common practice`,
+    source: `${AFFINITY_SOURCE}${series ? `; ${SERIES_SOURCE}` : ""}; the ${PUMP_OVERSIZE_MARGIN * 100} % margin is common practice`,
     assumed: assumedLines(results, d.restsOn),
     figures: { flowM3h: q, requiredKpa: d.requiredHeadKpa, speedFraction: n ?? NaN, headAtQOverN: atSpeed ?? NaN },
   };

@@ -13,6 +13,7 @@ import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import type { Results, Schematic } from "@/lib/schematic";
 import { parseSchematic } from "@/lib/schematic";
+import { withPumpInSeries } from "@/lib/hydraulics/testing/small-system";
 import * as W from "./working";
 
 const load = (file: string): Schematic => {
@@ -20,6 +21,11 @@ const load = (file: string): Schematic => {
   if (!p.ok) throw new Error(file);
   return p.doc;
 };
+function parsed(doc: unknown): Schematic {
+  const p = parseSchematic(doc);
+  if (!p.ok) throw new Error("test document does not parse");
+  return p.doc;
+}
 /** Orchard End with the heat pump's Kv, the strainer's Kv and the radiators' water contents left empty. */
 function withEmpties(): Schematic {
   const d = load("orchard-end-bypass-only.json");
@@ -35,6 +41,7 @@ const docs: [string, Schematic][] = [
   ["Orchard End, 40 L buffer", load("orchard-end-buffer-40l.json")],
   ["Millbrook hall", load("millbrook-hall.json")],
   ["Orchard End with empty Kvs and volumes", withEmpties()],
+  ["small system, two pumps in series", parsed(withPumpInSeries())],
 ];
 
 const near = (a: number, b: number | null, rel = 1e-6, abs = 1e-9) => {

@@ -60,6 +60,23 @@ export function pumpHeadKpaUnchecked(curve: PumpCurve, flowM3h: number): number 
   return null;
 }
 
+/**
+ * Pumps in series carry one flow and their heads add: H(Q) = Σ Hᵢ(Q) (Karassik et al.,
+ * Pump Handbook, 4th ed., McGraw-Hill 2008, series operation). The combined curve has a
+ * point at every flow where any of them has one, up to the smallest last flow (beyond it
+ * one pump's head is unknown). Pumps of 2, 3 … at the same speed scale as one curve.
+ */
+export function seriesCurve(curves: readonly PumpCurve[]): PumpCurve {
+  if (curves.length === 0) throw new RangeError("curves: needs at least one pump curve");
+  curves.forEach(assertUsable);
+  const end = Math.min(...curves.map((c) => c[c.length - 1]![0]));
+  const flows = [...new Set(curves.flatMap((c) => c.map(([q]) => q)))].filter((q) => q <= end).sort((a, b) => a - b);
+  return flows.map((q) => [q, curves.reduce((sum, c) => sum + pumpHeadKpaUnchecked(c, q)!, 0)]);
+}
+
+/** The citation shown where a working adds pumps in series. */
+export const SERIES_SOURCE = "pumps in series: one flow, heads added (Karassik et al., Pump Handbook, 4th ed., 2008, series operation)";
+
 /** Largest flow on the curve (m³/h): the last point's flow. */
 export function maxFlowM3h(curve: PumpCurve): number {
   assertUsable(curve);

@@ -6,7 +6,8 @@
  *
  * Pump setting, when the available head exceeds the required: the surplus,
  * the speed as a fraction of the curve drawn at which the pump meets the duty
- * (affinity laws, pumps/affinity.ts; one pump on the side only), and for a
+ * (affinity laws, pumps/affinity.ts; pumps in series on a side on their summed
+ * curve, pumps/curve.ts seriesCurve, all at that one speed), and for a
  * constant-pressure mode the head to set (the head required). More than
  * PUMP_OVERSIZE_MARGIN above the head required is a `pump.oversized` finding:
  * the surplus is burnt in valves (noise, TRVs that cannot close, a bypass that
@@ -18,6 +19,7 @@ import { requiredHeads, type CircuitAnalysis } from "./circuits";
 import type { DesignSolution } from "./design-solution";
 import { pumpHeadAt } from "./part-results";
 import { affinitySpeedFraction, PUMP_OVERSIZE_MARGIN } from "@/lib/hydraulics/pumps/affinity";
+import { seriesCurve, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 import { usableCurve } from "./laws";
 
 const fin = (x: number | null): number | null => (x !== null && Number.isFinite(x) ? x : null);
@@ -65,7 +67,9 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
     const designFlow = Math.abs(sol.q[root]!);
     const pumps = ca.pumpsOfSide.get(side) ?? [];
     const surplus = available !== null && ok ? available - required : null;
-    const curve = pumps.length === 1 ? usableCurve(curveOf(ctx, pumps[0]!)) : null;
+    // several pumps on a side run in series (their heads were added above): one combined curve, one speed for all
+    const curves = pumps.map((k) => usableCurve(curveOf(ctx, k)));
+    const curve = curves.length > 0 && curves.every((c) => c !== null) ? seriesCurve(curves as PumpCurve[]) : null;
     const speed = surplus !== null && surplus > 0 && curve ? affinitySpeedFraction(curve, designFlow, required) : null;
     if (surplus !== null && required > 0 && surplus > PUMP_OVERSIZE_MARGIN * required) {
       const setting = [
@@ -91,6 +95,7 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
       surplusKpa: fin(surplus),
       speedFraction: fin(speed),
       constantPressureHeadKpa: fin(required),
+      pumpIds: pumps.map((k) => ctx.model.links[k]!.id),
       restsOn: [...refs],
     });
   }

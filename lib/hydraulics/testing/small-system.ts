@@ -32,7 +32,7 @@ export function smallSystem() {
     },
     parts: [
       { id: "hp", type: "heat-pump", props: { ratedOutputKw: 3, minFlowM3h: 0.1, kv: 4, waterVolumeL: 2 } },
-      { id: "pump", type: "pump", props: { curve: [[0, 40], [0.5, 35], [1, 25], [1.5, 10]] } },
+      { id: "pump", type: "pump", props: { curve: SERIES_PUMP_CURVE.map(([q, h]) => [q, h]) } },
       { id: "tf", type: "tee" },
       { id: "tr", type: "tee" },
       { id: "te", type: "tee" },
@@ -60,3 +60,16 @@ export function smallSystem() {
 }
 
 export type SmallSystem = ReturnType<typeof smallSystem>;
+
+/** The small system's pump curve, which a second pump in series repeats. */
+export const SERIES_PUMP_CURVE: [number, number][] = [[0, 40], [0.5, 35], [1, 25], [1.5, 10]];
+
+/** The small system with a second, identical pump in series after the first (p7 split around it). */
+export function withPumpInSeries(): SmallSystem {
+  const d = smallSystem();
+  d.parts.push({ id: "pump2", type: "pump", props: { curve: SERIES_PUMP_CURVE.map(([q, h]) => [q, h]) } });
+  d.pipes = d.pipes.filter((p) => p.id !== "p7");
+  d.pipes.push({ id: "p7", from: "pump.out", to: "pump2.in", material: "copper", size: "22", lengthM: 2.5 },
+    { id: "p8", from: "pump2.out", to: "hp.return", material: "copper", size: "22", lengthM: 2.5 });
+  return d;
+}
