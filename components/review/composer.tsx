@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useRef, useState, type KeyboardEvent } from "react";
+import { useId, useLayoutEffect, useRef, useState, type KeyboardEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { MESSAGE_MAX } from "@/lib/review/inputs";
 import { mentionQuery } from "@/lib/review/mentions";
@@ -19,6 +19,7 @@ export function Composer(props: { people: Person[]; label: string; submitLabel: 
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const box = useRef<HTMLTextAreaElement>(null);
+  const placeCaret = useRef<number | null>(null);
   const id = useId();
   const q = mentionQuery(text, caret);
   const matches = q ? props.people.filter((p) => p.name.toLowerCase().includes(q.query.toLowerCase())).slice(0, 6) : [];
@@ -29,8 +30,17 @@ export function Composer(props: { people: Person[]; label: string; submitLabel: 
     const at = q.start + p.name.length + 2;
     setText(next);
     setCaret(at);
-    requestAnimationFrame(() => { box.current?.focus(); box.current?.setSelectionRange(at, at); });
+    placeCaret.current = at;
   };
+  // after the picked name is written, before the next key is read: the caret goes after it
+  // (set later, a fast typist's next letters would land before it)
+  useLayoutEffect(() => {
+    const at = placeCaret.current;
+    if (at === null) return;
+    placeCaret.current = null;
+    box.current?.focus();
+    box.current?.setSelectionRange(at, at);
+  });
   const send = async () => {
     if (!text.trim()) return setError("Write something first: the message is empty.");
     setBusy(true);
