@@ -50,7 +50,7 @@
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
 import { repeatedFindings } from "@/lib/hydraulics/testing/repeated-findings";
-import { bisect } from "@/lib/hydraulics/testing/hand-calc";
+import { bisect, colebrook, flowM3h, kvDpKpa, kvForDp, litresPerM } from "@/lib/hydraulics/testing/hand-calc";
 
 /* ------------------------------------------------------------------ *
  * Independent hand-calculation helpers                                *
@@ -68,18 +68,6 @@ const PG30_40: Fl = { rho: 1018.4, cp: 3900, nu: 1.62e-3 / 1018.4 };
 const CU: Record<string, number> = { "15": 13.6, "22": 20.2, "28": 26.2 };
 const CU_EPS = 0.0015;
 
-/** Colebrook–White (1939) by fixed-point iteration; laminar 64/Re below 2300. */
-function colebrook(re: number, rr: number): number {
-  if (re < 2300) return 64 / re;
-  let f = 0.02;
-  for (let i = 0; i < 300; i++) {
-    const x = -2 * Math.log10(rr / 3.7 + 2.51 / (re * Math.sqrt(f)));
-    const nf = 1 / (x * x);
-    if (Math.abs(nf - f) < 1e-15) return nf;
-    f = nf;
-  }
-  return f;
-}
 /** Straight copper pipe Δp, kPa (Darcy–Weisbach). All hand cases keep Re ≥ 4000 or < 2300. */
 function cuDp(q: number, size: string, lengthM: number, w: Fl): number {
   if (q <= 0) return 0;
@@ -93,10 +81,8 @@ function cuRe(q: number, size: string, w: Fl): number {
   const d = CU[size]! / 1000;
   return ((q / 3600 / ((Math.PI * d * d) / 4)) * d) / w.nu;
 }
-const kvDp = (q: number, kv: number, w: Fl) => 100 * (q / kv) ** 2 * (w.rho / 1000);
-const kvFor = (q: number, dpKpa: number, w: Fl) => q / Math.sqrt((dpKpa / 100) * (1000 / w.rho));
-const flowOf = (powerW: number, dT: number, w: Fl) => (powerW / (w.rho * w.cp * dT)) * 3600;
-const litresPerM = (dMm: number) => ((Math.PI * (dMm / 1000) ** 2) / 4) * 1000;
+const kvDp = (q: number, kv: number, w: Fl) => kvDpKpa(q, kv, w.rho);
+const kvFor = (q: number, dpKpa: number, w: Fl) => kvForDp(q, dpKpa, w.rho);
 function curveAt(c: [number, number][], q: number): number {
   for (let i = 1; i < c.length; i++) {
     const [q0, h0] = c[i - 1]!;
@@ -254,8 +240,8 @@ function caseA(ratedKw: number, scenarios?: unknown[]): Json {
 //  q_fc = 3000/(ρ·cp·10) = 0.26043 m³/h; q_hl = 2000/(ρ·cp·5) = 0.34724 m³/h (own ΔT 5 K)
 //  secondary Q_s = 0.60767; primary (heat source at rated output, contract "heat source" + existing reading) Q_p = 8000/(ρcp·10) = 0.69448
 //  header (decoupler) flow = Q_p − Q_s = 0.08681 m³/h, from p1/p2 side straight back to the heat source
-const qFc = flowOf(3000, 10, W40);
-const qHl = flowOf(2000, 5, W40);
+const qFc = flowM3h(3000, 10, W40);
+const qHl = flowM3h(2000, 5, W40);
 const qSec = qFc + qHl;
 const secMains = (Q: number) => cuDp(Q, "28", 12, W40);
 const brFc = (q: number) => cuDp(q, "22", 6, W40) + kvDp(q, 2, W40);
@@ -264,7 +250,7 @@ const priLoop = (Q: number) => cuDp(Q, "28", 4, W40) + kvDp(Q, 3, W40);
 
 describe("A — low-loss header: primary (heat pump's own pump) and secondary (pump 'ps') with a fan coil and a heat load", () => {
   const r = run(caseA(8));
-  const qPri = flowOf(8000, 10, W40);
+  const qPri = flowM3h(8000, 10, W40);
 
   it("hand numbers are in the turbulent range (Colebrook valid): Re > 4000 in every pipe", () => {
     for (const [q, s] of [[qSec, "28"], [qFc, "22"], [qHl, "22"], [qPri, "28"]] as const) expect(cuRe(q, s, W40)).toBeGreaterThan(4000);
@@ -363,7 +349,7 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
   // The secondary mixes down to 43.6 °C: a warning (header.primary-low) names the header and the heat source.
   it("primary flow BELOW secondary flow (rated 6 kW: 0.52086 < 0.60767 m³/h) → a warning naming the header or heat source (common practice, no single source: secondary flow mixes down to (0.52086·45+0.08681·35)/0.60767 = 43.6 °C)", () => {
     const r3 = run(caseA(6));
-    const qp = flowOf(6000, 10, W40);
+    const qp = flowM3h(6000, 10, W40);
     expect(qp).toBeLessThan(qSec);
     near(mode(r3).heatSourceFlowM3h, qp, FLOW, "primary");
     near(pipeR(r3, "s2").flowM3h, qSec, FLOW, "secondary unchanged by the primary");
@@ -433,7 +419,7 @@ const priHw = (Q: number, w: Fl) => kvDp(Q, 3, w) + kvDp(Q, 5, w) + kvDp(Q, 2.5,
 
 describe("B — buffer vessel as header; diverter to the buffer (heating) or the cylinder (hot water); propylene glycol 30 % vol", () => {
   const r = run(caseB());
-  const qRated = flowOf(6000, 10, PG); // 6000/(1018.4·3900·10)·3600 = 0.54383 m³/h
+  const qRated = flowM3h(6000, 10, PG); // 6000/(1018.4·3900·10)·3600 = 0.54383 m³/h
 
   it("fluid properties at the mean 40 °C are the glycol's (ASHRAE PG 30 % vol, refs §2.2): ρ 1018.4 ±0.1 %, cp 3900 ±0.3 % (table rounding)", () => {
     expect(r.fluid.temperatureC).toBeCloseTo(40, 9);
@@ -450,9 +436,9 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
   });
 
   it("heating mode: secondary zones at design with glycol: r1 1500/(ρcp·10), r2 1000/(ρcp·10); secondary pump 'ps'", () => {
-    near(pipeR(r, "z1b").flowM3h, flowOf(1500, 10, PG), GLYCOL, "r1");
-    near(pipeR(r, "z2b").flowM3h, flowOf(1000, 10, PG), GLYCOL, "r2");
-    near(pipeR(r, "s2").flowM3h, flowOf(2500, 10, PG), GLYCOL, "secondary main");
+    near(pipeR(r, "z1b").flowM3h, flowM3h(1500, 10, PG), GLYCOL, "r1");
+    near(pipeR(r, "z2b").flowM3h, flowM3h(1000, 10, PG), GLYCOL, "r2");
+    near(pipeR(r, "s2").flowM3h, flowM3h(2500, 10, PG), GLYCOL, "secondary main");
     expect(circ(r, "r1").pump).toBe("ps");
   });
 
@@ -677,8 +663,8 @@ describe("D — UFH loops on a manifold: flows and the EN 1264-2 surface-tempera
   });
 
   it("loop flows q = P/(ρcp·5 K) at the 37.5 °C mean (refs §10), commons carry the sum", () => {
-    for (const [id, w] of [["l1", 1200], ["l2", 600], ["l3", 360], ["l4", 360], ["l5", 500]] as const) near(partR(r, id).flowM3h, flowOf(w, 5, W375), FLOW, id);
-    near(pipeR(r, "fm").flowM3h, flowOf(3020, 5, W375), FLOW, "fm");
+    for (const [id, w] of [["l1", 1200], ["l2", 600], ["l3", 360], ["l4", 360], ["l5", 500]] as const) near(partR(r, id).flowM3h, flowM3h(w, 5, W375), FLOW, id);
+    near(pipeR(r, "fm").flowM3h, flowM3h(3020, 5, W375), FLOW, "fm");
   });
 
   it("l1 needs 30.6 °C at the floor > 29 °C: ok false and a finding naming l1", () => {
@@ -743,8 +729,8 @@ describe("E1 — check valve across the radiator", () => {
   // treated pumps as loss-free here shared the return flow backwards through the valve: 0.0565 m³/h.)
   it("DESIGN mode, drawn AGAINST the pressure (b on the supply tee): it passes nothing; heat source carries the radiator's design flow", () => {
     const r = run(caseE(false));
-    near(pipeR(r, "p2").flowM3h, flowOf(2000, 10, W40), FLOW, "design radiator");
-    near(mode(r).heatSourceFlowM3h, flowOf(2000, 10, W40), FLOW, "design heat source");
+    near(pipeR(r, "p2").flowM3h, flowM3h(2000, 10, W40), FLOW, "design radiator");
+    near(mode(r).heatSourceFlowM3h, flowM3h(2000, 10, W40), FLOW, "design heat source");
     dry(pipeR(r, "x1").flowM3h, "design x1");
   });
   it("SIMULATED, drawn AGAINST the pressure: it passes nothing; the pump meets the radiator loop alone", () => {
@@ -800,8 +786,8 @@ describe("E2 — isolation valve drawn shut on one of two branches", () => {
   });
   it("branch B gets no design flow; branch A and the heat source carry rA's design flow only (the valve is a closed link, contract table)", () => {
     for (const id of ["b1", "b2", "b3"]) dry(pipeR(r, id).flowM3h, id, true);
-    near(pipeR(r, "a2").flowM3h, flowOf(1500, 10, W40), FLOW, "branch A");
-    near(mode(r).heatSourceFlowM3h, flowOf(1500, 10, W40), FLOW, "heat source");
+    near(pipeR(r, "a2").flowM3h, flowM3h(1500, 10, W40), FLOW, "branch A");
+    near(mode(r).heatSourceFlowM3h, flowM3h(1500, 10, W40), FLOW, "heat source");
   });
   it("the unserved radiator rB is named by a warning/error (its heat load cannot be met)", () => {
     expect(naming(r, "rB").length + naming(r, "ivB").length).toBeGreaterThan(0);
@@ -848,9 +834,9 @@ const bypassZ = (q: number) => 8 + kvDp(q, 20, W40) + cuDp(q, "15", 1, W40);
 describe("E3 — zone valves + differential bypass set at 8 kPa: 'only zv1 open' makes the bypass open", () => {
   const r = run(caseZ());
   it("design: zone Δp 2.3 kPa < 8 kPa → bypass shut at design, zones at design flow", () => {
-    expect(zoneZ(flowOf(1500, 10, W40))).toBeLessThan(8);
+    expect(zoneZ(flowM3h(1500, 10, W40))).toBeLessThan(8);
     dry(pipeR(r, "y1").flowM3h, "bypass at design");
-    near(pipeR(r, "a1").flowM3h, flowOf(1500, 10, W40), FLOW, "zone 1");
+    near(pipeR(r, "a1").flowM3h, flowM3h(1500, 10, W40), FLOW, "zone 1");
   });
   it("the default scenario list names 'only zv1 open' and 'only zv2 open'", () => {
     const names = r.scenarios.map((s: AnyR) => s.name);
@@ -911,7 +897,7 @@ describe("F — ethylene glycol 20 % by volume (≈ 21.8 % by mass: 20·1.113/(2
     near(r.fluid.kinematicViscosityM2s, 1.06e-3 / 1018.6, 2e-2, "ν");
   });
   it("design flow with the mixture's ρ·cp: 4000/(1018.6·3905·10) = 0.3620 m³/h", () => {
-    near(pipeR(r, "f").flowM3h, flowOf(4000, 10, { rho: 1018.6, cp: 3905, nu: 0 }), 1.5e-2, "flow");
+    near(pipeR(r, "f").flowM3h, flowM3h(4000, 10, { rho: 1018.6, cp: 3905 }), 1.5e-2, "flow");
   });
   it("freezing ≈ −9 °C (AEG 20 % vol −8.98 °C; ASHRAE mass table interpolated −9.0 °C, refs §2.1): site −3 °C → no frost warning", () => {
     expect(serious(r).filter((f: AnyR) => /frost|glycol/.test(f.code))).toEqual([]);
@@ -973,7 +959,7 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     expect(findingsAbout(r, "input.pipe-length")).toEqual([["warning", ["p2"]]]);
     const p = pipeR(r, "p2");
     expect(p.pressureDropKpa).toBe(0);
-    near(p.flowM3h, flowOf(2000, 10, W40), FLOW, "p2 flow");
+    near(p.flowM3h, flowM3h(2000, 10, W40), FLOW, "p2 flow");
   });
 
   it("a load's own deltaTK 0 → issue at parts[1].props.deltaTK (schema: ≥ 0.5 K), never an infinite flow", () => {
@@ -1021,7 +1007,7 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     expect(r.emitters.find((e: AnyR) => e.id === "hl2").ok === true).toBe(false);
   });
   it("the main circuit is sized as before when a disconnected island exists", () => {
-    near(mode(island()).heatSourceFlowM3h, flowOf(3000, 10, W40), FLOW, "main circuit");
+    near(mode(island()).heatSourceFlowM3h, flowM3h(3000, 10, W40), FLOW, "main circuit");
   });
 
   it("a port with two pipes on a load's return → port.two-pipes naming the part and both pipes", () => {
@@ -1077,7 +1063,7 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     const r = run(d);
     const q = partR(r, "hl").flowM3h;
     expect(q === null || Math.abs(q) <= 1e-9).toBe(true);
-    near(partR(r, "rad").flowM3h, flowOf(1000, 10, W40), FLOW, "rad");
+    near(partR(r, "rad").flowM3h, flowM3h(1000, 10, W40), FLOW, "rad");
   });
 
   it("design ΔT 0 with a cylinder and glycol (both modes) → an input.delta-t error for the document, no mode sized, no scenario run", () => {

@@ -78,6 +78,7 @@ export function darcyFriction(re: number, relRough: number): number {
 export function pipeFlow(qM3h: number, dMm: number, epsMm: number, lengthM: number, w: Water) {
   const d = dMm / 1000;
   const v = qM3h / 3600 / ((Math.PI * d * d) / 4);
+  if (v === 0) return { v: 0, re: 0, f: 0, gradientPaPerM: 0, dpKpa: 0 };
   const re = (v * d) / w.nu;
   const f = darcyFriction(re, epsMm / dMm);
   const gradientPaPerM = ((f / d) * w.rho * v * v) / 2;
