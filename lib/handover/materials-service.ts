@@ -5,13 +5,15 @@ import { requireProjectRole } from "@/lib/auth/authorize";
 import { UserError } from "@/lib/auth/errors";
 import { requestIp } from "@/lib/auth/request-context";
 import { requireRevisionAccess } from "@/lib/auth/revision-access";
-import { getPriceList, putPriceList } from "@/db/queries/price-lists";
+import { getPriceList, putPriceList, type StoredPriceList } from "@/db/queries/price-lists";
 import { getRevision } from "@/db/queries/schematics";
 import { parseSchematic } from "@/lib/schematic";
 import { readCsvBody } from "@/lib/rooms/service";
 import { writeCsv } from "@/lib/rooms/csv-table";
 import { DEFAULT_ALLOWANCE_PCT, materialLines, type MaterialLine } from "./materials";
 import { applyPrices, readPriceList } from "./price-list";
+import { pipePricesFromList } from "./pipe-prices";
+import type { Prices } from "@/lib/hydraulics/optimise/prices";
 
 // The materials list of a revision (with the project's price list applied, when it has one)
 // and the upload of that price list. Every member who may read the revision reads its list;
@@ -27,6 +29,9 @@ export interface MaterialsAnswer {
   priceList: { items: number; uploadedAt: string; uploadedBy: string | null } | null;
 }
 
+const aboutList = (p: StoredPriceList | null): MaterialsAnswer["priceList"] =>
+  p ? { items: p.rows.length, uploadedAt: p.uploadedAt, uploadedBy: p.uploadedBy } : null;
+
 export async function materialsOf(revisionId: string, url: string): Promise<MaterialsAnswer> {
   await requireRevisionAccess(revisionId);
   const raw = new URL(url).searchParams.get("allowance");
@@ -36,8 +41,7 @@ export async function materialsOf(revisionId: string, url: string): Promise<Mate
   if (!row || !parsed?.ok) throw new UserError(404, "Revision not found, or its document can no longer be read.");
   const prices = await getPriceList(row.projectId);
   const priced = applyPrices(materialLines(parsed.doc, allowance), prices?.rows ?? null);
-  return { ...priced, allowancePct: allowance,
-    priceList: prices ? { items: prices.rows.length, uploadedAt: prices.uploadedAt, uploadedBy: prices.uploadedBy } : null };
+  return { ...priced, allowancePct: allowance, priceList: aboutList(prices) };
 }
 
 const CSV_COLUMNS = ["kind", "description", "material", "size", "type", "props", "lengthM", "allowancePct", "orderQuantity", "unit", "code", "price", "total"] as const;
@@ -60,4 +64,14 @@ export async function uploadPriceList(projectId: string, req: Request): Promise<
   await putPriceList(projectId, rows, user.id);
   await audit({ actorId: user.id, action: "price-list.replaced", projectId, detail: { items: rows.length }, ip: await requestIp() });
   return { status: 200, body: { priceList: { items: rows.length } } };
+}
+
+/** Whether the project has a price list, and the pipe prices per metre it gives the size optimiser. Every member. */
+export async function pipePricesOf(projectId: string): Promise<{ priceList: MaterialsAnswer["priceList"]; pipePrices: Prices }> {
+  await requireProjectRole(projectId, "project.read");
+  const prices = await getPriceList(projectId);
+  return {
+    priceList: aboutList(prices),
+    pipePrices: prices ? pipePricesFromList(prices.rows) : {},
+  };
 }

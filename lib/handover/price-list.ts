@@ -73,6 +73,9 @@ const materialAliases: Record<string, string[]> = { copper: ["copper", "cu"], st
 const FITTING_WORDS = ["elbow", "bend", "tee", "reducer", "reducing", "coupling", "connector"];
 const fittingAliases: Record<string, string[]> = { elbow: ["elbow"], bend: ["bend"], tee: ["tee"], reducer: ["reducer", "reducing"] };
 
+/** The first row of the list that prices this line, or undefined. */
+export const rowFor = (line: MaterialLine, rows: readonly PriceRow[]): PriceRow | undefined => rows.find((r) => matches(line, r));
+
 function matches(line: MaterialLine, row: PriceRow): boolean {
   if (row.unit !== line.unit) return false;
   const text = norm(`${row.code} ${row.description}`).replace(/\s/g, " ");
@@ -97,7 +100,7 @@ const round2 = (n: number) => Math.round(n * 100) / 100;
 export function applyPrices(lines: MaterialLine[], rows: PriceRow[] | null): PricedList {
   if (!rows) return { lines, unmatched: [], total: null };
   const priced = lines.map((l): MaterialLine => {
-    const row = rows.find((r) => matches(l, r));
+    const row = rowFor(l, rows);
     return row ? { ...l, code: row.code, price: row.price, total: round2(row.price * l.orderQuantity) } : l;
   });
   const unmatched = priced.filter((l) => l.price === undefined);

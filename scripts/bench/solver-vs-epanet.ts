@@ -53,7 +53,8 @@ export function orderingFloor(doc: Schematic) {
     const b = prep.unknownOf[prep.topo.to[k]!]!;
     if (a >= 0 && b >= 0 && a !== b) pairs.push(a, b);
   }
-  const used = fillOf(prep.m, pairs, prep.sym.order);
+  // unknowns are numbered in the solver's elimination order already
+  const used = fillOf(prep.m, pairs, Int32Array.from({ length: prep.m }, (_, i) => i));
   const nd = fillOf(prep.m, pairs, nestedDissection(prep.m, pairs));
   return { unknowns: prep.m, used, nd };
 }

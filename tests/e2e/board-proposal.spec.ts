@@ -60,3 +60,34 @@ test("find the cheapest sizes, apply them in one undoable step, see them in the 
   await expect(page.getByTestId("find-sizes")).toBeVisible();
   await page.screenshot({ path: `${shots}/proposal-phone.png` });
 });
+
+// With the firm's price list on the project, the panel says so and the optimiser weighs those
+// prices: the panel's answer equals the API's with the same prices, and every proposed copper
+// size is one the list stocks.
+test("the proposal uses the firm's pipe prices when the project has a price list", async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.setViewportSize({ width: 1366, height: 768 });
+  const id = await copySchematic("Bypass only", `Proposal prices e2e ${Date.now()}`);
+  await signInAs(page, "designer");
+  const origin = { origin: new URL(page.url()).origin };
+  const list = "code,description,unit,price\nCU15,Copper tube 15mm,m,2\nCU22,Copper tube 22mm,m,3\nCU28,Copper tube 28mm,m,40\n";
+  try {
+    const up = await page.request.post(`/api/v1/projects/${ORCHARD_END}/price-list`, { data: list, headers: { ...origin, "content-type": "text/csv" } });
+    expect(up.status()).toBe(200);
+    await page.goto(`/projects/${ORCHARD_END}/schematics/${id}`);
+    await page.getByTestId("open-proposal").click();
+    await expect(page.getByTestId("proposal-prices")).toContainText("the firm's price list (3 pipe sizes");
+    const asked = page.waitForRequest((r) => r.url().endsWith("/api/v1/optimise") && r.method() === "POST");
+    await page.getByTestId("find-sizes").click();
+    const sent = (await asked).postDataJSON() as { options: { prices?: unknown } };
+    expect(sent.options.prices).toEqual({ copper: { "15": 2, "22": 3, "28": 40 } });
+    await expect(page.getByTestId("proposal-result")).toBeVisible({ timeout: 60_000 });
+    const view = await (await page.request.get(`/api/v1/schematics/${id}`)).json();
+    const answer = await (await page.request.post("/api/v1/optimise", { data: { doc: view.doc, options: { prices: sent.options.prices } }, headers: origin })).json();
+    for (const p of view.doc.pipes as { id: string; material: string }[]) if (p.material === "copper") expect(["15", "22", "28"]).toContain(answer.sizes[p.id]);
+    await expect(page.getByTestId("proposal-changes").locator("tbody tr")).toHaveCount(answer.changes.length);
+    await page.screenshot({ path: `${shots}/proposal-firm-prices.png` });
+  } finally {
+    await sql("delete from project_price_lists where project_id = $1", [ORCHARD_END]);
+  }
+});

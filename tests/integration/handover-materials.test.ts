@@ -1,6 +1,7 @@
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db";
+import { DEFAULT_PRICES_PER_M } from "@/lib/hydraulics/optimise/prices";
 import { parseSchematic, type Schematic } from "@/lib/schematic";
 import { callRoute, cookieFor } from "./helpers/call";
 import { dropFixtures, makeFixture, type Fixture } from "./helpers/fixture";
@@ -14,6 +15,7 @@ import { getRaw } from "./helpers/raw-route";
 const csvRoute = () => import("@/app/api/v1/revisions/[revisionId]/materials.csv/route");
 const jsonRoute = () => import("@/app/api/v1/revisions/[revisionId]/materials.json/route");
 const priceRoute = () => import("@/app/api/v1/projects/[projectId]/price-list/route");
+const optimiseRoute = () => import("@/app/api/v1/optimise/route");
 
 let f: Fixture;
 let doc: Schematic;
@@ -116,6 +118,32 @@ describe("price list", () => {
     // every line without a price is listed as unmatched, and none with one
     expect(m.body.unmatched.length).toBe(lines.filter((l) => l.price === undefined).length);
     expect(m.body.unmatched.length).toBeGreaterThan(0);
+  });
+
+  it("gives the size optimiser the firm's pipe prices: only the sizes it stocks, at its prices", async () => {
+    const sizes = [...new Set(doc.pipes.filter((p) => p.material === "copper").map((p) => p.size))];
+    // a fitting row and a row for another size come first: neither may price a drawn pipe size
+    const rows = ["code,description,unit,price", "EL-CU,Copper elbow 22mm,m,99", "CU108,Copper tube 108mm,m,80", ...sizes.map((s, i) => `CU${s},Copper tube ${s}mm,m,${(3 + i).toFixed(2)}`)];
+    expect((await upload(rows.join("\n"))).status).toBe(200);
+    const got = await callRoute((await priceRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/price-list`, cookie: await cookieFor("trainee"), params: { projectId: f.projectId } });
+    expect(got.status).toBe(200);
+    expect(got.body.priceList.items).toBe(rows.length - 1);
+    expect(got.body.pipePrices).toEqual({ copper: Object.fromEntries(sizes.map((s, i) => [s, 3 + i])) });
+    const o = await callRoute((await optimiseRoute()).POST as never, { method: "POST", path: "/api/v1/optimise", cookie: owner, body: { doc, options: { prices: got.body.pipePrices } } });
+    expect(o.status).toBe(200);
+    expect(o.body.priceSource.copper).toBe("options");
+    expect(o.body.priceSource.pex).toBe("default-demo");
+    // before: each drawn copper pipe at the list's price for its size, the PE-X ones from the default
+    // (invented) table — a hand sum over the document
+    const before = doc.pipes.reduce((t, p) => t + p.lengthM * (p.material === "copper" ? 3 + sizes.indexOf(p.size) : DEFAULT_PRICES_PER_M[p.material][p.size]!), 0);
+    expect(o.body.before.cost).toBeCloseTo(before, 6);
+    for (const p of doc.pipes) if (p.material === "copper") expect(sizes).toContain(o.body.sizes[p.id]);
+  });
+
+  it("has no pipe prices without a list", async () => {
+    await db()("project_price_lists").where({ project_id: f.projectId }).delete();
+    const got = await callRoute((await priceRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/price-list`, cookie: owner, params: { projectId: f.projectId } });
+    expect(got.body).toEqual({ priceList: null, pipePrices: {} });
   });
 
   it("is uploaded only by owners and designers", async () => {

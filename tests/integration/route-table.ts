@@ -612,6 +612,10 @@ export const rows: Row[] = [
     call: async (f, cookie) => callRoute((await materialsCsvRoute()).GET as never, { path: `/api/v1/revisions/${f.revisionId}/materials.csv?allowance=5`, cookie, params: { revisionId: f.revisionId } }),
   },
   {
+    name: "GET /api/v1/projects/[projectId]/price-list", kind: "route", expect: allow(members),
+    call: async (f, cookie) => callRoute((await priceListRoute()).GET as never, { path: `/api/v1/projects/${f.projectId}/price-list`, cookie, params: { projectId: f.projectId } }),
+  },
+  {
     name: "POST /api/v1/projects/[projectId]/price-list", kind: "route", expect: allow(["owner", "designer"]),
     call: async (f, cookie) => callRoute((await priceListRoute()).POST as never, { method: "POST", path: `/api/v1/projects/${f.projectId}/price-list`, cookie, params: { projectId: f.projectId },
       rawBody: "code,description,unit,price\nCU22,Copper tube 22 mm,m,4.10\n", contentType: "text/csv" }),

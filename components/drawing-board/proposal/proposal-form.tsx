@@ -1,7 +1,12 @@
 "use client";
 
+import { useContext, useEffect } from "react";
+import useSWR from "swr";
 import { LIFE_COST_ASSUMPTIONS } from "@/lib/hydraulics/optimise/life-cost";
+import type { Prices } from "@/lib/hydraulics/optimise/prices";
 import { Button } from "@/components/ui/button";
+import { fetchJson } from "@/lib/fetch-json";
+import { BoardSessionContext } from "../persistence/session-context";
 import { useProposal, UI_HEAD_MARGIN_KPA } from "./proposal-store";
 
 const field = "w-20 rounded border border-ink/15 bg-white px-1.5 py-0.5 text-right text-sm num";
@@ -18,6 +23,22 @@ function NumberInput({ label, value, onChange, step, min, max, unit, testId }: {
         <span className="w-10 text-xs text-ink-faint">{unit}</span>
       </span>
     </label>
+  );
+}
+
+/** The project's price list, when it has one: its pipe prices go to the optimiser; says which prices are used. */
+function PriceSource() {
+  const projectId = useContext(BoardSessionContext)?.projectId;
+  const { data } = useSWR<{ priceList: { items: number } | null; pipePrices: Prices }>(projectId ? `/api/v1/projects/${projectId}/price-list` : null, fetchJson);
+  const setOptions = useProposal((s) => s.setOptions);
+  useEffect(() => setOptions({ prices: data?.pipePrices ?? {} }), [data, setOptions]);
+  const sizes = Object.values(data?.pipePrices ?? {}).reduce((n, bySize) => n + Object.keys(bySize ?? {}).length, 0);
+  return (
+    <p className="text-xs text-ink-faint" data-testid="proposal-prices">
+      {sizes > 0
+        ? `Prices: the firm's price list (${sizes} pipe size${sizes > 1 ? "s" : ""}; only those sizes are offered for their material).`
+        : `Prices: invented demo table${data?.priceList ? " — the firm's price list prices no pipe sizes" : " until the firm's price list is entered (handover pack)"}.`}
+    </p>
   );
 }
 
@@ -54,6 +75,7 @@ export function ProposalForm() {
           </p>
         </div>
       )}
+      <PriceSource />
       <Button type="submit" disabled={busy} className="w-full py-1.5" data-testid="find-sizes">{busy ? "Searching…" : "Find cheapest sizes"}</Button>
     </form>
   );

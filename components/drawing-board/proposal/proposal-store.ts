@@ -8,6 +8,7 @@
 import { createStore, useStore, type StoreApi } from "zustand";
 import type { OptimiseResult } from "@/lib/hydraulics/optimise/optimise";
 import { LIFE_COST_ASSUMPTIONS, type LifeCostInputs } from "@/lib/hydraulics/optimise/life-cost";
+import type { Prices } from "@/lib/hydraulics/optimise/prices";
 import { fetchJson } from "@/lib/fetch-json";
 import { useBoardStore, type BoardStore } from "../store";
 
@@ -17,6 +18,8 @@ export interface ProposalOptions {
   lifeCost: LifeCostInputs;
   /** pipes the user keeps at their drawn size */
   locked: string[];
+  /** the firm's pipe prices from the project's price list (none: the default demo table) */
+  prices: Prices;
 }
 
 export interface ProposalState {
@@ -37,7 +40,7 @@ const stores = new WeakMap<BoardStore, StoreApi<ProposalState>>();
 
 function make(board: BoardStore): StoreApi<ProposalState> {
   return createStore<ProposalState>()((set, get) => ({
-    options: { objective: "pipe-cost", headMarginKpa: UI_HEAD_MARGIN_KPA, lifeCost: { ...LIFE_COST_ASSUMPTIONS }, locked: [] },
+    options: { objective: "pipe-cost", headMarginKpa: UI_HEAD_MARGIN_KPA, lifeCost: { ...LIFE_COST_ASSUMPTIONS }, locked: [], prices: {} },
     status: "idle",
     result: null,
     error: null,
@@ -45,9 +48,10 @@ function make(board: BoardStore): StoreApi<ProposalState> {
     setOptions: (patch) => set({ options: { ...get().options, ...patch } }),
     async run() {
       const { doc, revision } = board.getState();
-      const { locked, ...rest } = get().options;
+      const { locked, prices, ...rest } = get().options;
       const ids = new Set(doc.pipes.map((p) => p.id));
-      const options = { ...rest, locked: locked.filter((id) => ids.has(id)), ...(rest.objective === "pipe-cost" ? { lifeCost: undefined } : {}) };
+      const options = { ...rest, locked: locked.filter((id) => ids.has(id)), ...(rest.objective === "pipe-cost" ? { lifeCost: undefined } : {}),
+        ...(Object.keys(prices).length ? { prices } : {}) };
       set({ status: "running", error: null });
       try {
         const result = await fetchJson<OptimiseResult>("/api/v1/optimise", { method: "POST", body: JSON.stringify({ doc, options }) });

@@ -1,13 +1,12 @@
 /**
  * Fill and work of a sparse LDLᵀ factorisation under a given elimination
- * order, without factorising: the elimination tree and the column counts of L
- * by the row-subtree method (Liu, "The role of elimination trees in sparse
- * factorization", SIAM J. Matrix Anal. Appl. 11, 1990; Davis, Direct Methods
- * for Sparse Linear Systems, SIAM 2006, §4.1–4.4). nnz(L) counts the strictly
- * lower entries; work counts the multiply-adds of the right-looking
- * factorisation, Σ_j c_j(c_j + 1)/2 for a column with c_j entries below the
- * diagonal (the Schur updates ldl.ts performs).
+ * order, without factorising: the symbolic phase of ldl.ts (elimination tree
+ * and column counts, Davis, Direct Methods for Sparse Linear Systems, SIAM
+ * 2006, §4.1–4.4) on the pairs renumbered by that order. nnz(L) counts the
+ * strictly lower entries; work counts the multiply-adds, Σ_j c_j(c_j + 1)/2
+ * for a column with c_j entries below the diagonal.
  */
+import { symbolicFactor } from "./ldl";
 
 export interface FillStats {
   nnzL: number;
@@ -20,43 +19,10 @@ export interface FillStats {
 export function fillOf(m: number, pairs: ArrayLike<number>, order: ArrayLike<number>): FillStats {
   const pos = new Int32Array(m);
   for (let k = 0; k < m; k++) pos[order[k]!] = k;
-  // adjacency in elimination positions: for each position i, the earlier positions it touches
-  const deg = new Int32Array(m + 1);
+  const renumbered: number[] = [];
   for (let t = 0; t + 1 < pairs.length; t += 2) {
-    const a = pos[pairs[t]!]!;
-    const b = pos[pairs[t + 1]!]!;
-    if (a !== b) deg[Math.max(a, b) + 1]!++;
+    if (pairs[t] !== pairs[t + 1]) renumbered.push(pos[pairs[t]!]!, pos[pairs[t + 1]!]!);
   }
-  for (let i = 0; i < m; i++) deg[i + 1]! += deg[i]!;
-  const lower = new Int32Array(deg[m]!);
-  const fillAt = deg.slice(0, m);
-  for (let t = 0; t + 1 < pairs.length; t += 2) {
-    const a = pos[pairs[t]!]!;
-    const b = pos[pairs[t + 1]!]!;
-    if (a !== b) lower[fillAt[Math.max(a, b)]!++] = Math.min(a, b);
-  }
-  // row i of L: the union of the etree paths from each earlier neighbour up to i
-  const parent = new Int32Array(m).fill(-1);
-  const mark = new Int32Array(m).fill(-1);
-  const count = new Int32Array(m);
-  for (let i = 0; i < m; i++) {
-    mark[i] = i;
-    for (let t = deg[i]!; t < deg[i + 1]!; t++) {
-      for (let j = lower[t]!; mark[j] !== i; j = parent[j]!) {
-        if (parent[j] === -1) parent[j] = i;
-        count[j]!++;
-        mark[j] = i;
-      }
-    }
-  }
-  let nnzL = 0;
-  let work = 0;
-  let maxColumn = 0;
-  for (let j = 0; j < m; j++) {
-    const c = count[j]!;
-    nnzL += c;
-    work += (c * (c + 1)) / 2;
-    if (c > maxColumn) maxColumn = c;
-  }
+  const { nnzL, work, maxColumn } = symbolicFactor(m, renumbered).sym;
   return { nnzL, work, maxColumn };
 }

@@ -9,8 +9,8 @@
  * Units are the caller's; the engine uses m³/h and kPa so matrix entries sit
  * near 1 (better conditioned than m³/s and Pa). No module state.
  */
-import { factorInPlace, solveInPlace } from "./ldl";
-import { symbolicFactor } from "./ordering";
+import { factor, newFactor, solve, symbolicFactor } from "./ldl";
+import { minimumDegreeOrder } from "./ordering";
 import { cachedPrepare } from "./topology-cache";
 import type { Prepared, Topology } from "./topology";
 
@@ -33,22 +33,24 @@ export function prepare(topo: Topology): Prepared {
 }
 
 export function prepareUncached(topo: Topology): Prepared {
-  const unknownOf = new Int32Array(topo.nodeCount).fill(-1);
+  const natural = new Int32Array(topo.nodeCount).fill(-1);
   let m = 0;
-  for (let n = 0; n < topo.nodeCount; n++) if (!topo.fixed[n]) unknownOf[n] = m++;
+  for (let n = 0; n < topo.nodeCount; n++) if (!topo.fixed[n]) natural[n] = m++;
+  const pairOfLink = new Int32Array(topo.from.length).fill(-1);
   const pairs: number[] = [];
   for (let k = 0; k < topo.from.length; k++) {
-    const a = unknownOf[topo.from[k]!]!;
-    const b = unknownOf[topo.to[k]!]!;
-    if (a >= 0 && b >= 0 && a !== b) pairs.push(a, b);
+    const a = natural[topo.from[k]!]!;
+    const b = natural[topo.to[k]!]!;
+    if (a >= 0 && b >= 0 && a !== b) pairOfLink[k] = pairs.push(a, b) / 2 - 1;
   }
-  const sym = symbolicFactor(m, pairs);
-  const linkSlot = new Int32Array(topo.from.length);
-  for (let k = 0; k < topo.from.length; k++) {
-    const a = unknownOf[topo.from[k]!]!;
-    const b = unknownOf[topo.to[k]!]!;
-    linkSlot[k] = a >= 0 && b >= 0 && a !== b ? sym.slotOf(a, b) : -1;
-  }
+  // Unknowns renumbered by elimination position once here, so no solve permutes.
+  const order = minimumDegreeOrder(m, pairs);
+  const pos = new Int32Array(m);
+  for (let i = 0; i < m; i++) pos[order[i]!] = i;
+  for (let t = 0; t < pairs.length; t++) pairs[t] = pos[pairs[t]!]!;
+  const unknownOf = natural.map((u) => (u >= 0 ? pos[u]! : -1));
+  const { sym, entryOfPair } = symbolicFactor(m, pairs);
+  const linkSlot = pairOfLink.map((t) => (t >= 0 ? entryOfPair[t]! : -1));
   return { topo, unknownOf, m, sym, linkSlot };
 }
 
@@ -77,6 +79,7 @@ export function solveNetwork(
   options: SolveOptions = {},
 ): SolveResult {
   const { topo, unknownOf, m, sym, linkSlot } = prep;
+  const f = newFactor(sym);
   const maxIter = options.maxIterations ?? 60;
   const accuracy = options.accuracy ?? 1e-7;
   const gMin = options.minGradient ?? 1e-6;
@@ -87,7 +90,7 @@ export function solveNetwork(
   const p = new Float64Array(L);
   const y = new Float64Array(L);
   const diag = new Float64Array(m);
-  const vals = new Float64Array(sym.slotCount);
+  const vals = new Float64Array(sym.rowOf.length);
   const rhs = new Float64Array(m);
   const out = new Float64Array(2);
   let converged = false;
@@ -127,8 +130,8 @@ export function solveNetwork(
       const s = linkSlot[k]!;
       if (s >= 0) vals[s] = vals[s]! - pk;
     }
-    factorOk = factorInPlace(sym, diag, vals) && factorOk;
-    solveInPlace(sym, diag, vals, rhs);
+    factorOk = factor(f, diag, vals) && factorOk;
+    solve(f, rhs);
     for (let n = 0; n < topo.nodeCount; n++) {
       const u = unknownOf[n]!;
       if (u >= 0) head[n] = rhs[u]!;

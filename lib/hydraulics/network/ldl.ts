@@ -1,60 +1,170 @@
 /**
- * Numeric LDLᵀ factorisation and solve on the structure from ordering.ts.
- * The gradient-method matrix is a weighted graph Laplacian with the fixed-
- * head nodes removed, hence symmetric positive definite, so no pivoting is
- * needed (Todini & Pilati 1988; Rossman, EPANET 2.2 manual §12).
+ * Sparse LDLᵀ factorisation and solve for the gradient method's node-head
+ * system, in the up-looking form of Davis's LDL package (T. A. Davis,
+ * "Algorithm 849: A concise sparse Cholesky factorization package", ACM TOMS
+ * 31(4), 2005; Direct Methods for Sparse Linear Systems, SIAM 2006, §4.1–4.4):
+ * the symbolic phase finds the elimination tree and the column counts of L
+ * from the matrix pattern alone; each numeric factorisation then finds row k
+ * of L by walking that tree from the row's nonzeros, so it costs its flops and
+ * nothing more. The matrix is a weighted graph Laplacian with the fixed-head
+ * nodes removed, hence symmetric positive definite: no pivoting (Todini &
+ * Pilati 1988; Rossman, EPANET 2.2 manual §12).
+ *
+ * Unknowns are numbered in elimination order (the caller permutes once, in
+ * the symbolic phase), so no permutation is applied per solve.
  */
-import type { Symbolic } from "./ordering";
 
-export interface Factor {
-  sym: Symbolic;
-  diag: Float64Array;
-  vals: Float64Array;
+export interface Symbolic {
+  m: number;
+  /** strictly upper pattern of A by column: rows rowOf[colStart[k] .. colStart[k+1]) (< k); duplicates allowed */
+  colStart: Int32Array;
+  rowOf: Int32Array;
+  /** elimination tree: parent[k] (−1 at a root) */
+  parent: Int32Array;
+  /** column k of L: entries lp[k] .. lp[k+1] */
+  lp: Int32Array;
+  /** strictly lower entries of L */
+  nnzL: number;
+  /** multiply-adds of the factorisation, Σ c(c+1)/2 over columns of c entries */
+  work: number;
+  /** largest column count */
+  maxColumn: number;
 }
 
-/** Values are the matrix entries on entry and L / D on return (in place). */
-export function factorInPlace(sym: Symbolic, diag: Float64Array, vals: Float64Array): boolean {
-  const { order, colStart, colEnd, colSlots, updStart, updA, updB, updTarget } = sym;
+/**
+ * m unknowns already in elimination order; pairs (i, j) with i ≠ j. Returns
+ * the structure and, for each pair, the index of its entry in A's value array
+ * (entryOfPair[t] for pair t).
+ */
+export function symbolicFactor(m: number, pairs: ArrayLike<number>): { sym: Symbolic; entryOfPair: Int32Array } {
+  const count = pairs.length >> 1;
+  const colStart = new Int32Array(m + 1);
+  for (let t = 0; t < count; t++) colStart[Math.max(pairs[2 * t]!, pairs[2 * t + 1]!) + 1]!++;
+  for (let k = 0; k < m; k++) colStart[k + 1]! += colStart[k]!;
+  const rowOf = new Int32Array(count);
+  const entryOfPair = new Int32Array(count);
+  const at = colStart.slice(0, m);
+  for (let t = 0; t < count; t++) {
+    const a = pairs[2 * t]!;
+    const b = pairs[2 * t + 1]!;
+    const e = at[a > b ? a : b]!++;
+    rowOf[e] = a < b ? a : b;
+    entryOfPair[t] = e;
+  }
+  // ldl_symbolic: row k of L is the union of the tree paths from A's row-k
+  // nonzeros up to k; each node met adds one entry to its column.
+  const parent = new Int32Array(m).fill(-1);
+  const flag = new Int32Array(m);
+  const lnz = new Int32Array(m);
+  for (let k = 0; k < m; k++) {
+    flag[k] = k;
+    for (let p = colStart[k]!; p < colStart[k + 1]!; p++) {
+      for (let i = rowOf[p]!; flag[i] !== k; i = parent[i]!) {
+        if (parent[i] === -1) parent[i] = k;
+        lnz[i]!++;
+        flag[i] = k;
+      }
+    }
+  }
+  const lp = new Int32Array(m + 1);
+  let work = 0;
+  let maxColumn = 0;
+  for (let k = 0; k < m; k++) {
+    const c = lnz[k]!;
+    lp[k + 1] = lp[k]! + c;
+    work += (c * (c + 1)) / 2;
+    if (c > maxColumn) maxColumn = c;
+  }
+  return { sym: { m, colStart, rowOf, parent, lp, nnzL: lp[m]!, work, maxColumn }, entryOfPair };
+}
+
+/** Work arrays and the factor of one matrix of a given structure; reused across iterations. */
+export interface Factor {
+  sym: Symbolic;
+  /** D, and L's row indices and values by column */
+  d: Float64Array;
+  li: Int32Array;
+  lx: Float64Array;
+  y: Float64Array;
+  pattern: Int32Array;
+  flag: Int32Array;
+  lnz: Int32Array;
+}
+
+export function newFactor(sym: Symbolic): Factor {
+  const { m } = sym;
+  return {
+    sym,
+    d: new Float64Array(m),
+    li: new Int32Array(sym.nnzL),
+    lx: new Float64Array(sym.nnzL),
+    y: new Float64Array(m),
+    pattern: new Int32Array(m),
+    flag: new Int32Array(m),
+    lnz: new Int32Array(m),
+  };
+}
+
+/**
+ * ldl_numeric: factor A = L D Lᵀ, A given by its diagonal and the strictly
+ * upper values ax (by the pattern's entries). False when a pivot was not
+ * positive — a node cut off from every fixed head: its pivot is kept tiny so
+ * the factor stays finite, and the caller's balance check reports the part.
+ */
+export function factor(f: Factor, diag: Float64Array, ax: Float64Array): boolean {
+  const { m, colStart, rowOf, parent, lp } = f.sym;
+  const { d, li, lx, y, pattern, flag, lnz } = f;
   let ok = true;
-  for (let k = 0; k < sym.m; k++) {
-    const v = order[k]!;
-    let d = diag[v]!;
-    if (!(d > 1e-300)) {
-      // A node cut off from every fixed head: keep the factor finite; the
-      // caller's balance check reports the element.
+  for (let k = 0; k < m; k++) {
+    y[k] = 0;
+    let top = m;
+    flag[k] = k;
+    lnz[k] = 0;
+    for (let p = colStart[k]!; p < colStart[k + 1]!; p++) {
+      let i = rowOf[p]!;
+      y[i] = y[i]! + ax[p]!;
+      let len = 0;
+      for (; flag[i] !== k; i = parent[i]!) {
+        pattern[len++] = i;
+        flag[i] = k;
+      }
+      while (len > 0) pattern[--top] = pattern[--len]!;
+    }
+    let dk = diag[k]!;
+    for (; top < m; top++) {
+      const i = pattern[top]!;
+      const yi = y[i]!;
+      y[i] = 0;
+      const p2 = lp[i]! + lnz[i]!;
+      for (let p = lp[i]!; p < p2; p++) y[li[p]!] = y[li[p]!]! - lx[p]! * yi;
+      const lki = yi / d[i]!;
+      dk -= lki * yi;
+      li[p2] = k;
+      lx[p2] = lki;
+      lnz[i]!++;
+    }
+    if (!(dk > 1e-300)) {
       ok = false;
-      d = 1e-300;
-      diag[v] = d;
+      dk = 1e-300;
     }
-    const s = colStart[v]!;
-    const e = colEnd[v]!;
-    for (let i = s; i < e; i++) vals[colSlots[i]!] = vals[colSlots[i]!]! / d;
-    for (let u = updStart[v]!; u < updStart[v + 1]!; u++) {
-      const la = vals[colSlots[updA[u]!]!]!;
-      const lb = vals[colSlots[updB[u]!]!]!;
-      const t = updTarget[u]!;
-      if (t < 0) diag[-1 - t] = diag[-1 - t]! - la * lb * d;
-      else vals[t] = vals[t]! - la * lb * d;
-    }
+    d[k] = dk;
   }
   return ok;
 }
 
-/** Solve (L D Lᵀ) x = b, overwriting b with x. */
-export function solveInPlace(sym: Symbolic, diag: Float64Array, vals: Float64Array, b: Float64Array): void {
-  const { order, colStart, colEnd, colRows, colSlots } = sym;
-  const m = sym.m;
-  for (let k = 0; k < m; k++) {
-    const v = order[k]!;
-    const bv = b[v]!;
-    if (bv === 0) continue;
-    for (let i = colStart[v]!; i < colEnd[v]!; i++) b[colRows[i]!] = b[colRows[i]!]! - vals[colSlots[i]!]! * bv;
+/** Solve (L D Lᵀ) x = b with the last factor, overwriting b with x. */
+export function solve(f: Factor, b: Float64Array): void {
+  const { m, lp } = f.sym;
+  const { d, li, lx } = f;
+  for (let j = 0; j < m; j++) {
+    const bj = b[j]!;
+    if (bj === 0) continue;
+    for (let p = lp[j]!; p < lp[j + 1]!; p++) b[li[p]!] = b[li[p]!]! - lx[p]! * bj;
   }
-  for (let v = 0; v < m; v++) b[v] = b[v]! / diag[v]!;
-  for (let k = m - 1; k >= 0; k--) {
-    const v = order[k]!;
-    let x = b[v]!;
-    for (let i = colStart[v]!; i < colEnd[v]!; i++) x -= vals[colSlots[i]!]! * b[colRows[i]!]!;
-    b[v] = x;
+  for (let j = 0; j < m; j++) b[j] = b[j]! / d[j]!;
+  for (let j = m - 1; j >= 0; j--) {
+    let x = b[j]!;
+    for (let p = lp[j]!; p < lp[j + 1]!; p++) x -= lx[p]! * b[li[p]!]!;
+    b[j] = x;
   }
 }

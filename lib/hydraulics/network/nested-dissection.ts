@@ -12,7 +12,7 @@
  * fill and O(n^1.5) work, the known bounds for such graphs (Hoffman, Martin &
  * Rose 1973; Lipton, Rose & Tarjan 1979).
  */
-import { symbolicFactor } from "./ordering";
+import { minimumDegreeOrder } from "./ordering";
 
 const LEAF = 64;
 
@@ -62,7 +62,7 @@ export function nestedDissection(m: number, pairs: ArrayLike<number>): Int32Arra
     const local = new Map(nodes.map((v, i) => [v, i]));
     const sub: number[] = [];
     for (const v of nodes) live(v, (w) => local.has(w) && v < w && sub.push(local.get(v)!, local.get(w)!));
-    return Array.from(symbolicFactor(nodes.length, sub).order, (i) => nodes[i]!);
+    return Array.from(minimumDegreeOrder(nodes.length, sub), (i) => nodes[i]!);
   };
 
   const order: number[] = [];

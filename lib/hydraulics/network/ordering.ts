@@ -1,36 +1,14 @@
 /**
- * Symbolic phase of the sparse LDLᵀ factorisation used by the gradient method:
- * a minimum-degree elimination order (the idea behind the multiple-minimum-
- * degree order EPANET uses, Rossman, EPANET 2.2 manual §12 "Analysis
- * algorithms"; George & Liu, "Computer Solution of Large Sparse Positive
- * Definite Systems", 1981) and the filled structure it produces. Heating
- * networks are near-trees, so minimum degree peels leaves first and creates
- * almost no fill: factorisation and solve stay O(n).
+ * The elimination order of the sparse LDLᵀ factorisation used by the gradient
+ * method (ldl.ts): minimum degree (the idea behind the multiple-minimum-degree
+ * order EPANET uses, Rossman, EPANET 2.2 manual §12 "Analysis algorithms";
+ * George & Liu, "Computer Solution of Large Sparse Positive Definite Systems",
+ * 1981, ch. 5) on the explicit elimination graph. Heating networks are
+ * near-trees, so it peels leaves first and creates almost no fill.
  *
- * Input: m unknown nodes and the node pairs that share a link.
- * Output: for each node, the later-eliminated neighbours at its elimination
- * (its column of L) with a slot index for every value, and the list of Schur
- * updates the numeric phase performs.
+ * Input: m unknown nodes and the node pairs that share a link (either order,
+ * duplicates allowed). Output: order[k] = node eliminated k-th.
  */
-
-export interface Symbolic {
-  m: number;
-  /** order[k] = node eliminated k-th */
-  order: Int32Array;
-  /** column v's entries: colRows[colStart[v] .. colEnd[v]) (node ids), colSlots (value slots) */
-  colStart: Int32Array;
-  colEnd: Int32Array;
-  colRows: Int32Array;
-  colSlots: Int32Array;
-  /** Schur updates of column v: updStart[v]..; entries a,b index colRows; target slot (≥0) or diagonal (−1−node) */
-  updStart: Int32Array;
-  updA: Int32Array;
-  updB: Int32Array;
-  updTarget: Int32Array;
-  slotCount: number;
-  /** slot of the pair (u, v), either order; −1 when u and v are not adjacent */
-  slotOf(u: number, v: number): number;
-}
 
 /** Binary min-heap on (degree, node) with lazy deletion. */
 class Heap {
@@ -85,7 +63,7 @@ class Heap {
   }
 }
 
-export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
+export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Array {
   // Adjacency as plain arrays with lazy removal of eliminated nodes; a stamp
   // array answers "already adjacent?" while forming the fill clique.
   const adj: number[][] = Array.from({ length: m }, () => []);
@@ -116,7 +94,7 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
   for (let v = 0; v < m; v++) heap.push(deg[v]!, v);
   const done = new Uint8Array(m);
   const order = new Int32Array(m);
-  const patterns: number[][] = new Array(m);
+  const nbrs: number[] = [];
   let k = 0;
   let tick = 0;
   while (heap.size > 0) {
@@ -124,9 +102,8 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
     if (done[v] || heap.topKey !== deg[v]) continue;
     done[v] = 1;
     order[k++] = v;
-    const nbrs: number[] = [];
+    nbrs.length = 0;
     for (const u of adj[v]!) if (!done[u]) nbrs.push(u);
-    patterns[v] = nbrs;
     for (const u of nbrs) {
       // u loses v and gains every other neighbour of v it is not adjacent to
       // yet; its list is compacted in place (no allocation per elimination).
@@ -151,85 +128,5 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): Symbolic {
     }
     adj[v] = [];
   }
-  const pos = new Int32Array(m);
-  for (let i = 0; i < m; i++) pos[order[i]!] = i;
-
-  // Slots: column v's entries are consecutive, in elimination order of their
-  // rows; a pair (u, v) lives in the column of whichever was eliminated first.
-  const colStart = new Int32Array(m);
-  const colEnd = new Int32Array(m);
-  let total = 0;
-  for (let i = 0; i < m; i++) {
-    const v = order[i]!;
-    const pat = patterns[v]!;
-    // Insertion sort by elimination position: patterns are a handful of entries
-    // on near-tree networks, and Array#sort allocates a work array per call.
-    for (let i = 1; i < pat.length; i++) {
-      const x = pat[i]!;
-      const px = pos[x]!;
-      let j = i - 1;
-      while (j >= 0 && pos[pat[j]!]! > px) {
-        pat[j + 1] = pat[j]!;
-        j--;
-      }
-      pat[j + 1] = x;
-    }
-    colStart[v] = total;
-    total += pat.length;
-    colEnd[v] = total;
-  }
-  const colRows = new Int32Array(total);
-  const colSlots = new Int32Array(total);
-  for (let v = 0; v < m; v++) {
-    const pat = patterns[v] ?? [];
-    for (let i = 0; i < pat.length; i++) {
-      colRows[colStart[v]! + i] = pat[i]!;
-      colSlots[colStart[v]! + i] = colStart[v]! + i;
-    }
-  }
-  const slotOf = (u: number, v: number): number => {
-    if (u === v) return -1;
-    const a = pos[u]! < pos[v]! ? u : v;
-    const b = a === u ? v : u;
-    for (let i = colStart[a]!, e = colEnd[a]!; i < e; i++) if (colRows[i] === b) return i;
-    return -1;
-  };
-  let updCount = 0;
-  for (let v = 0; v < m; v++) {
-    const d = (patterns[v] ?? []).length;
-    updCount += (d * (d + 1)) / 2;
-  }
-  const updStart = new Int32Array(m + 1);
-  const updA = new Int32Array(updCount);
-  const updB = new Int32Array(updCount);
-  const updTarget = new Int32Array(updCount);
-  let w = 0;
-  for (let v = 0; v < m; v++) {
-    updStart[v] = w;
-    const s = colStart[v]!;
-    const e = colEnd[v]!;
-    for (let a = s; a < e; a++) {
-      for (let b = a; b < e; b++) {
-        updA[w] = a;
-        updB[w] = b;
-        updTarget[w] = a === b ? -1 - colRows[a]! : slotOf(colRows[a]!, colRows[b]!);
-        w++;
-      }
-    }
-  }
-  updStart[m] = w;
-  return {
-    m,
-    order,
-    colStart,
-    colEnd,
-    colRows,
-    colSlots,
-    updStart,
-    updA,
-    updB,
-    updTarget,
-    slotCount: total,
-    slotOf,
-  };
+  return order;
 }

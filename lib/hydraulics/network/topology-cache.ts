@@ -35,7 +35,7 @@ const same = (a: ArrayLike<number>, b: ArrayLike<number>) => {
   return true;
 };
 
-const size = (p: Prepared) => p.sym.slotCount + p.sym.updA.length;
+const size = (p: Prepared) => p.sym.nnzL + p.sym.rowOf.length;
 
 /** The prepared topology from the memo, or made by `make` and kept. */
 export function cachedPrepare(t: Topology, make: (t: Topology) => Prepared): Prepared {

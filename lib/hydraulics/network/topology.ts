@@ -1,4 +1,4 @@
-import type { Symbolic } from "./ordering";
+import type { Symbolic } from "./ldl";
 
 // A network's shape for the solver (lib/hydraulics/network/gga.ts) and its prepared symbolic
 // phase, kept apart so the per-topology memo (topology-cache.ts) and the solver share them.
@@ -13,8 +13,8 @@ export interface Topology {
 
 export interface Prepared {
   topo: Topology;
-  unknownOf: Int32Array; // node → unknown index or −1
+  unknownOf: Int32Array; // node → unknown index (its elimination position) or −1
   m: number;
   sym: Symbolic;
-  linkSlot: Int32Array; // link → off-diagonal slot or −1
+  linkSlot: Int32Array; // link → its entry among the matrix off-diagonals (sym.rowOf) or −1
 }

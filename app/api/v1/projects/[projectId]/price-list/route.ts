@@ -1,9 +1,16 @@
 import { apiHandler } from "@/lib/auth/authorize";
-import { uploadPriceList } from "@/lib/handover/materials-service";
+import { pipePricesOf, uploadPriceList } from "@/lib/handover/materials-service";
 import { CSV_TYPES } from "@/lib/rooms/service";
 
 export const dynamic = "force-dynamic";
 type Ctx = { params: Promise<{ projectId: string }> };
+
+/**
+ * GET {priceList: {items, uploadedAt, uploadedBy} | null, pipePrices: {material: {size: price per m}}}:
+ * whether the project has a price list, and the pipe prices it gives the size optimiser
+ * (options.prices of POST /api/v1/optimise). Every member.
+ */
+export const GET = apiHandler(async (_req: Request, { params }: Ctx) => Response.json(await pipePricesOf((await params).projectId)));
 
 /**
  * POST the firm's price list (text/csv: code, description, unit, price). Every problem is
