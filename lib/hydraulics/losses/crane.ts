@@ -42,6 +42,18 @@ export function craneFt(innerDiameterMm: number): number {
   if (!(innerDiameterMm > 0) || !Number.isFinite(innerDiameterMm)) {
     throw new RangeError(`innerDiameterMm must be > 0, got ${innerDiameterMm}`);
   }
+  // A network has a handful of bores and thousands of fittings: the table search is kept per bore.
+  let fT = ftByBore.get(innerDiameterMm);
+  if (fT === undefined) {
+    fT = nearestFt(innerDiameterMm);
+    if (ftByBore.size < 1000) ftByBore.set(innerDiameterMm, fT);
+  }
+  return fT;
+}
+
+const ftByBore = new Map<number, number>();
+
+function nearestFt(innerDiameterMm: number): number {
   const first = CRANE_FT_TABLE[0]!;
   if (innerDiameterMm < first.sch40InnerDiameterMm) {
     return Math.max(first.fT, fullyRoughFrictionFactor(CRANE_STEEL_ROUGHNESS_MM / innerDiameterMm));

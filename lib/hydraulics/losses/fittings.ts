@@ -69,7 +69,10 @@ export function fittingK(type: FittingType, innerDiameterMm: number): number {
  */
 export function sumFittingsK(fittings: Partial<Record<FittingType, number>>, innerDiameterMm: number): number {
   let sum = 0;
-  for (const [type, count] of Object.entries(fittings) as [FittingType, number | undefined][]) {
+  // for…in rather than Object.entries: no array per pipe (thousands of pipes per calculation)
+  for (const key in fittings) {
+    const type = key as FittingType;
+    const count = fittings[type];
     if (count === undefined || count === 0) continue;
     if (!(count > 0) || !Number.isFinite(count)) throw new RangeError(`fittings.${type} must be ≥ 0, got ${count}`);
     sum += count * fittingK(type, innerDiameterMm);

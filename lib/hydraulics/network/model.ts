@@ -42,16 +42,20 @@ export interface ModelLink {
   index: number;
 }
 
+/** Lookup by "part.port" reference (the map's get, without a key per port built up front). */
+export interface PortLookup<T> {
+  get(ref: string): T | undefined;
+}
+
 export interface NetworkModel {
   nodeCount: number;
-  nodeLabel: string[];
-  portNode: Map<string, number>;
+  portNode: PortLookup<number>;
   links: ModelLink[];
   linksOfPart: Map<string, number[]>;
   linkOfPipe: Map<string, number>;
   partById: Map<string, Part>;
-  /** pipes attached to each port, "part.port" → pipe ids */
-  pipesAtPort: Map<string, string[]>;
+  /** pipes attached to each port, "part.port" → pipe ids (built on first use) */
+  pipesAtPort: PortLookup<string[]>;
   /** one fixed-head node per connected component (an expansion vessel where there is one) */
   fixed: Uint8Array;
   component: Int32Array;
@@ -90,63 +94,72 @@ function partLinks(part: Part, node: (port: string) => number): [LinkRole, numbe
 }
 
 export function buildModel(doc: Schematic): NetworkModel {
-  const portNode = new Map<string, number>();
-  const nodeLabel: string[] = [];
+  const partIndex = new Map<string, number>();
   const partById = new Map<string, Part>();
   const vesselNodes: number[] = [];
   // A part's ports get consecutive nodes in portsOf order (a junction: one node),
-  // so its links find their nodes by port index, without rebuilding and
-  // re-hashing "part.port" keys (ids are unique: parse checks that).
+  // so a port's node is its part's first node plus the port's index: no
+  // "part.port" key is built or hashed per port (ids are unique: parse checks that).
   const firstNode = new Int32Array(doc.parts.length);
   const portLists: string[][] = new Array(doc.parts.length);
+  const junction = new Uint8Array(doc.parts.length);
+  let nodeCount = 0;
   doc.parts.forEach((part, index) => {
+    partIndex.set(part.id, index);
     partById.set(part.id, part);
     const role = partRegistry[part.type].role;
     const ports = portsOf(part);
     portLists[index] = ports;
-    firstNode[index] = nodeLabel.length;
+    firstNode[index] = nodeCount;
     if (role === "junction") {
-      const n = nodeLabel.push(part.id) - 1;
-      for (const port of ports) portNode.set(`${part.id}.${port}`, n);
-    } else {
-      for (const port of ports) {
-        const key = `${part.id}.${port}`;
-        portNode.set(key, nodeLabel.push(key) - 1);
-      }
-    }
-    if (role === "vessel") vesselNodes.push(portNode.get(`${part.id}.connection`)!);
+      junction[index] = 1;
+      nodeCount++;
+    } else nodeCount += ports.length;
+    if (role === "vessel") vesselNodes.push(firstNode[index]! + ports.indexOf("connection"));
   });
+  const nodeOf = (index: number, port: string): number | undefined => {
+    const j = portLists[index]!.indexOf(port);
+    return j < 0 ? undefined : firstNode[index]! + (junction[index] ? 0 : j);
+  };
+  const portNode: PortLookup<number> = {
+    get(ref) {
+      const dot = ref.lastIndexOf(".");
+      const index = partIndex.get(ref.slice(0, dot));
+      return index === undefined ? undefined : nodeOf(index, ref.slice(dot + 1));
+    },
+  };
   const links: ModelLink[] = [];
   const linksOfPart = new Map<string, number[]>();
   doc.parts.forEach((part, index) => {
     const info = partRegistry[part.type];
     if (info.role === "junction" || info.role === "vessel") return; // no through-links (partLinks' default)
-    const ports = portLists[index]!;
-    const base = firstNode[index]!;
-    const node = (port: string) => {
-      const j = ports.indexOf(port);
-      return (j < 0 ? undefined : base + j)!;
-    };
     const ids: number[] = [];
-    for (const [role, from, to] of partLinks(part, node)) ids.push(links.push({ id: part.id, role, from, to, index }) - 1);
+    for (const [role, from, to] of partLinks(part, (port) => nodeOf(index, port)!)) ids.push(links.push({ id: part.id, role, from, to, index }) - 1);
     if (ids.length) linksOfPart.set(part.id, ids);
   });
   const linkOfPipe = new Map<string, number>();
-  const pipesAtPort = new Map<string, string[]>();
-  const atPort = (end: string, id: string) => {
-    const list = pipesAtPort.get(end);
-    if (list) list.push(id);
-    else pipesAtPort.set(end, [id]);
-  };
   doc.pipes.forEach((pipe, index) => {
     const from = portNode.get(pipe.from);
     const to = portNode.get(pipe.to);
-    atPort(pipe.from, pipe.id);
-    atPort(pipe.to, pipe.id);
     if (from === undefined || to === undefined) return; // parse has rejected this already
     linkOfPipe.set(pipe.id, links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1);
   });
-  const nodeCount = nodeLabel.length;
+  let atPort: Map<string, string[]> | null = null;
+  const pipesAtPort: PortLookup<string[]> = {
+    get(ref) {
+      if (!atPort) {
+        atPort = new Map();
+        for (const pipe of doc.pipes) {
+          for (const end of [pipe.from, pipe.to]) {
+            const list = atPort.get(end);
+            if (list) list.push(pipe.id);
+            else atPort.set(end, [pipe.id]);
+          }
+        }
+      }
+      return atPort.get(ref);
+    },
+  };
   const component = components(nodeCount, links);
   const fixed = new Uint8Array(nodeCount);
   const hasFixed = new Set<number>();
@@ -164,7 +177,7 @@ export function buildModel(doc: Schematic): NetworkModel {
       hasFixed.add(c);
     }
   }
-  return { nodeCount, nodeLabel, portNode, links, linksOfPart, linkOfPipe, partById, pipesAtPort, fixed, component };
+  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, partById, pipesAtPort, fixed, component };
 }
 
 /** Connected components by union–find with path halving (Tarjan 1975). */
