@@ -62,8 +62,8 @@ test("find the cheapest sizes, apply them in one undoable step, see them in the 
 });
 
 // With the firm's price list on the project, the panel says so and the optimiser weighs those
-// prices: the panel's answer equals the API's with the same prices, and every proposed copper
-// size is one the list stocks.
+// prices: the panel's answer equals the API's with the same prices, and every copper pipe it
+// resizes gets a size the list stocks.
 test("the proposal uses the firm's pipe prices when the project has a price list", async ({ page }) => {
   test.setTimeout(120_000);
   await page.setViewportSize({ width: 1366, height: 768 });
@@ -84,7 +84,11 @@ test("the proposal uses the firm's pipe prices when the project has a price list
     await expect(page.getByTestId("proposal-result")).toBeVisible({ timeout: 60_000 });
     const view = await (await page.request.get(`/api/v1/schematics/${id}`)).json();
     const answer = await (await page.request.post("/api/v1/optimise", { data: { doc: view.doc, options: { prices: sent.options.prices } }, headers: origin })).json();
-    for (const p of view.doc.pipes as { id: string; material: string }[]) if (p.material === "copper") expect(["15", "22", "28"]).toContain(answer.sizes[p.id]);
+    // every pipe the proposal resizes gets a size the list stocks (pipes it leaves alone keep theirs)
+    const copper = new Set((view.doc.pipes as { id: string; material: string }[]).filter((p) => p.material === "copper").map((p) => p.id));
+    const resized = (answer.changes as { id: string; to: string }[]).filter((c) => copper.has(c.id));
+    expect(resized.length).toBeGreaterThan(0);
+    for (const c of resized) expect(["15", "22", "28"]).toContain(c.to);
     await expect(page.getByTestId("proposal-changes").locator("tbody tr")).toHaveCount(answer.changes.length);
     await page.screenshot({ path: `${shots}/proposal-firm-prices.png` });
   } finally {
