@@ -42,28 +42,15 @@ export function craneFt(innerDiameterMm: number): number {
   if (!(innerDiameterMm > 0) || !Number.isFinite(innerDiameterMm)) {
     throw new RangeError(`innerDiameterMm must be > 0, got ${innerDiameterMm}`);
   }
-  // A network has a handful of bores and thousands of fittings: the table search is kept per bore.
-  let fT = ftByBore.get(innerDiameterMm);
-  if (fT === undefined) {
-    fT = nearestFt(innerDiameterMm);
-    if (ftByBore.size < 1000) ftByBore.set(innerDiameterMm, fT);
-  }
-  return fT;
-}
-
-const ftByBore = new Map<number, number>();
-
-function nearestFt(innerDiameterMm: number): number {
   const first = CRANE_FT_TABLE[0]!;
   if (innerDiameterMm < first.sch40InnerDiameterMm) {
     return Math.max(first.fT, fullyRoughFrictionFactor(CRANE_STEEL_ROUGHNESS_MM / innerDiameterMm));
   }
+  // nearest in ratio: |ln(d/D)| compared as max(d/D, D/d), the same order without a logarithm
+  // (this runs for every fitting of every pipe)
+  const apart = (bore: number) => Math.max(innerDiameterMm / bore, bore / innerDiameterMm);
   let best = first;
-  for (const r of CRANE_FT_TABLE) {
-    if (Math.abs(Math.log(innerDiameterMm / r.sch40InnerDiameterMm)) < Math.abs(Math.log(innerDiameterMm / best.sch40InnerDiameterMm))) {
-      best = r;
-    }
-  }
+  for (const r of CRANE_FT_TABLE) if (apart(r.sch40InnerDiameterMm) < apart(best.sch40InnerDiameterMm)) best = r;
   return best.fT;
 }
 
