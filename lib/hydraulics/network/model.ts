@@ -42,20 +42,33 @@ export interface ModelLink {
   index: number;
 }
 
-/** Lookup by "part.port" reference (the map's get, without a key per port built up front). */
-export interface PortLookup<T> {
-  get(ref: string): T | undefined;
+/** Lookup by id or "part.port" reference: a map's get, its map built only when first asked. */
+export interface Lookup<T> {
+  get(key: string): T | undefined;
+}
+
+/** A Lookup whose map is made by `fill` on the first get (most solves never ask). */
+function lazyLookup<T>(fill: (map: Map<string, T>) => void): Lookup<T> {
+  let map: Map<string, T> | null = null;
+  return {
+    get(key) {
+      if (!map) fill((map = new Map()));
+      return map.get(key);
+    },
+  };
 }
 
 export interface NetworkModel {
   nodeCount: number;
-  portNode: PortLookup<number>;
+  portNode: Lookup<number>;
   links: ModelLink[];
-  linksOfPart: Map<string, number[]>;
-  linkOfPipe: Map<string, number>;
-  partById: Map<string, Part>;
+  linksOfPart: Lookup<number[]>;
+  linkOfPipe: Lookup<number>;
+  /** by doc.pipes index: the pipe's link (−1 when its ends do not resolve; parse refuses those) */
+  pipeLink: Int32Array;
+  partById: Lookup<Part>;
   /** pipes attached to each port, "part.port" → pipe ids (built on first use) */
-  pipesAtPort: PortLookup<string[]>;
+  pipesAtPort: Lookup<string[]>;
   /** one fixed-head node per connected component (an expansion vessel where there is one) */
   fixed: Uint8Array;
   component: Int32Array;
@@ -95,7 +108,6 @@ function partLinks(part: Part, node: (port: string) => number): [LinkRole, numbe
 
 export function buildModel(doc: Schematic): NetworkModel {
   const partIndex = new Map<string, number>();
-  const partById = new Map<string, Part>();
   const vesselNodes: number[] = [];
   // A part's ports get consecutive nodes in portsOf order (a junction: one node),
   // so a port's node is its part's first node plus the port's index: no
@@ -106,7 +118,6 @@ export function buildModel(doc: Schematic): NetworkModel {
   let nodeCount = 0;
   doc.parts.forEach((part, index) => {
     partIndex.set(part.id, index);
-    partById.set(part.id, part);
     const role = partRegistry[part.type].role;
     const ports = portsOf(part);
     portLists[index] = ports;
@@ -121,7 +132,7 @@ export function buildModel(doc: Schematic): NetworkModel {
     const j = portLists[index]!.indexOf(port);
     return j < 0 ? undefined : firstNode[index]! + (junction[index] ? 0 : j);
   };
-  const portNode: PortLookup<number> = {
+  const portNode: Lookup<number> = {
     get(ref) {
       const dot = ref.lastIndexOf(".");
       const index = partIndex.get(ref.slice(0, dot));
@@ -129,37 +140,37 @@ export function buildModel(doc: Schematic): NetworkModel {
     },
   };
   const links: ModelLink[] = [];
-  const linksOfPart = new Map<string, number[]>();
   doc.parts.forEach((part, index) => {
     const info = partRegistry[part.type];
     if (info.role === "junction" || info.role === "vessel") return; // no through-links (partLinks' default)
-    const ids: number[] = [];
-    for (const [role, from, to] of partLinks(part, (port) => nodeOf(index, port)!)) ids.push(links.push({ id: part.id, role, from, to, index }) - 1);
-    if (ids.length) linksOfPart.set(part.id, ids);
+    for (const [role, from, to] of partLinks(part, (port) => nodeOf(index, port)!)) links.push({ id: part.id, role, from, to, index });
   });
-  const linkOfPipe = new Map<string, number>();
+  const pipeLink = new Int32Array(doc.pipes.length).fill(-1);
   doc.pipes.forEach((pipe, index) => {
     const from = portNode.get(pipe.from);
     const to = portNode.get(pipe.to);
     if (from === undefined || to === undefined) return; // parse has rejected this already
-    linkOfPipe.set(pipe.id, links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1);
+    pipeLink[index] = links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1;
   });
-  let atPort: Map<string, string[]> | null = null;
-  const pipesAtPort: PortLookup<string[]> = {
-    get(ref) {
-      if (!atPort) {
-        atPort = new Map();
-        for (const pipe of doc.pipes) {
-          for (const end of [pipe.from, pipe.to]) {
-            const list = atPort.get(end);
-            if (list) list.push(pipe.id);
-            else atPort.set(end, [pipe.id]);
-          }
-        }
+  const partById = lazyLookup<Part>((map) => doc.parts.forEach((part) => map.set(part.id, part)));
+  const linkOfPipe = lazyLookup<number>((map) => doc.pipes.forEach((pipe, i) => pipeLink[i]! >= 0 && map.set(pipe.id, pipeLink[i]!)));
+  const linksOfPart = lazyLookup<number[]>((map) =>
+    links.forEach((l, k) => {
+      if (l.role === "pipe") return;
+      const ids = map.get(l.id);
+      if (ids) ids.push(k);
+      else map.set(l.id, [k]);
+    }),
+  );
+  const pipesAtPort = lazyLookup<string[]>((map) => {
+    for (const pipe of doc.pipes) {
+      for (const end of [pipe.from, pipe.to]) {
+        const list = map.get(end);
+        if (list) list.push(pipe.id);
+        else map.set(end, [pipe.id]);
       }
-      return atPort.get(ref);
-    },
-  };
+    }
+  });
   const component = components(nodeCount, links);
   const fixed = new Uint8Array(nodeCount);
   const hasFixed = new Set<number>();
@@ -177,7 +188,7 @@ export function buildModel(doc: Schematic): NetworkModel {
       hasFixed.add(c);
     }
   }
-  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, partById, pipesAtPort, fixed, component };
+  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, pipeLink, partById, pipesAtPort, fixed, component };
 }
 
 /** Connected components by union–find with path halving (Tarjan 1975). */

@@ -45,8 +45,8 @@ export function engineView(doc: Schematic): EngineView {
     if (doc.parts.some((p) => p.type === "cylinder")) runs.push(runMode(ctx, "hot-water"));
   }
   const pumps = runs.flatMap((r) => r.result.pumps.map((d) => ({ ...d, mode: r.result.mode })));
-  const flowM3h = doc.pipes.map((pipe) => {
-    const k = ctx.model.linkOfPipe.get(pipe.id)!;
+  const flowM3h = doc.pipes.map((_, i) => {
+    const k = ctx.model.pipeLink[i]!;
     return Float64Array.from(runs, (r) => {
       const q = Math.abs(r.solution.q[k]!);
       return q < NO_FLOW_M3H || !Number.isFinite(q) ? 0 : q;

@@ -47,7 +47,7 @@ export function scenarioResult(ctx: EngineContext, spec: ScenarioSpec, sim: Simu
     if (l.role === "heat-source") sourceFlow = (sourceFlow ?? 0) + Math.abs(sim.q[k]!);
   });
   const pipes = doc.pipes.map((p, i) => {
-    const k = model.linkOfPipe.get(p.id)!;
+    const k = model.pipeLink[i]!;
     const l = model.links[k]!;
     const d = ctx.pipeGeom[i]?.innerDiameterM;
     // mean velocity v = Q/A, A = πD²/4 (continuity; White, Fluid Mechanics, eq. 3.7), m/s from m³/h

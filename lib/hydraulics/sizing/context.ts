@@ -84,12 +84,13 @@ function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)
 
 export function createContext(doc: Schematic, findings: Findings): EngineContext {
   const model = buildModel(doc);
-  const prep = prepare({
-    nodeCount: model.nodeCount,
-    from: Int32Array.from(model.links, (l) => l.from),
-    to: Int32Array.from(model.links, (l) => l.to),
-    fixed: model.fixed,
+  const from = new Int32Array(model.links.length);
+  const to = new Int32Array(model.links.length);
+  model.links.forEach((l, k) => {
+    from[k] = l.from;
+    to[k] = l.to;
   });
+  const prep = prepare({ nodeCount: model.nodeCount, from, to, fixed: model.fixed });
   const flowC = doc.design.flowTemperatureC;
   const returnC = doc.design.returnTemperatureC;
   const deltaTK = flowC - returnC > 0 ? flowC - returnC : null;

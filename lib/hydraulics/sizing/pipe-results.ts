@@ -127,7 +127,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, n
   const { design } = ctx.doc;
   const noFlow: string[] = [];
   const out = ctx.doc.pipes.map((pipe, i) => {
-    const k = ctx.model.linkOfPipe.get(pipe.id)!;
+    const k = ctx.model.pipeLink[i]!;
     const raw = q[k]!;
     const flowM3h = Math.abs(raw) < PIPE_NO_FLOW_M3H ? 0 : raw;
     const geom = ctx.pipeGeom[i];
