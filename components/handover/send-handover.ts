@@ -4,6 +4,7 @@ import { db } from "@/lib/db";
 import { audit } from "@/lib/audit";
 import { requireProjectRole } from "@/lib/auth/authorize";
 import { UserError } from "@/lib/auth/errors";
+import { takeHandoverSend } from "@/lib/auth/rate-limit";
 import { requestIp } from "@/lib/auth/request-context";
 import { requireRevisionAccess } from "@/lib/auth/revision-access";
 import { getProjectHead } from "@/db/queries/project-admin";
@@ -13,7 +14,8 @@ import { readReport, reportFileName, reportPdf } from "./report-service";
 
 // Send: the issued revision's report, attached as a PDF, to the client's address (the
 // project's, unless the sender gives another), through the mail path; then a `handover` row
-// in the revision history and the audit log. Owners and designers (policy "handover.send").
+// in the revision history and the audit log. Owners and designers (policy "handover.send"),
+// within the hourly budgets of lib/auth/rate-limit.ts (per sender and per address).
 
 export const handoverInput = z.object({
   to: z.email("to must be an e-mail address, like name@example.com").max(254, "to must be at most 254 characters").optional(),
@@ -30,6 +32,7 @@ export async function sendHandover(revisionId: string, raw: unknown): Promise<{ 
   if (!to) {
     throw new z.ZodError([{ code: "custom", path: ["to"], message: "the project has no client e-mail: give one here, or add it to the project's details", input: raw }]);
   }
+  await takeHandoverSend(user.id, to);
   const report = await readReport(revisionId);
   const { bytes } = await reportPdf(report);
   const file = reportFileName(report, "pdf");

@@ -22,7 +22,13 @@ export const ADDRESS_LIMIT = { points: 30, duration: 15 * 60, blockDuration: 15 
 export const RESET_ACCOUNT_LIMIT = { points: 3, duration: 60 * 60 };
 export const RESET_ADDRESS_LIMIT = { points: 10, duration: 60 * 60 };
 
-type Kind = "account" | "address" | "resetAccount" | "resetAddress" | "signUpAccount" | "signUpAddress";
+// Handover e-mails carry a report to an outside address: a sender may send 20 an hour and
+// one address may receive 10 an hour (common practice for outbound mail on request, no
+// published value) — plenty for resending to a client, too few to flood an inbox.
+export const HANDOVER_SENDER_LIMIT = { points: 20, duration: 60 * 60 };
+export const HANDOVER_RECIPIENT_LIMIT = { points: 10, duration: 60 * 60 };
+
+type Kind = "account" | "address" | "resetAccount" | "resetAddress" | "signUpAccount" | "signUpAddress" | "handoverSender" | "handoverRecipient";
 type Limiters = Record<Kind, RateLimiterPostgres>;
 const g = globalThis as unknown as { __loopwrightLimiters?: Limiters };
 
@@ -36,6 +42,8 @@ function limiters(): Limiters {
     // sign-up e-mails (a confirmation link, or "you already have an account"): same budget as resets
     signUpAccount: new RateLimiterPostgres({ ...common, keyPrefix: "signup-account", ...RESET_ACCOUNT_LIMIT }),
     signUpAddress: new RateLimiterPostgres({ ...common, keyPrefix: "signup-address", ...RESET_ADDRESS_LIMIT }),
+    handoverSender: new RateLimiterPostgres({ ...common, keyPrefix: "handover-sender", ...HANDOVER_SENDER_LIMIT }),
+    handoverRecipient: new RateLimiterPostgres({ ...common, keyPrefix: "handover-recipient", ...HANDOVER_RECIPIENT_LIMIT }),
   };
   return g.__loopwrightLimiters;
 }
@@ -91,4 +99,14 @@ export async function allowAccountMail(purpose: "reset" | "signUp", email: strin
     throw new UserError(429, `Too many ${what} from your network. Try again in ${wait(byAddress.msBeforeNext)}.`, retryAfter(byAddress.msBeforeNext));
   }
   return (await take(`${purpose}Account`, email)) === null;
+}
+
+/** One handover e-mail from this user to this address; a 429 naming the wait when either budget is used up. */
+export async function takeHandoverSend(senderId: string, to: string): Promise<void> {
+  const [bySender, byRecipient] = await Promise.all([take("handoverSender", senderId), take("handoverRecipient", to)]);
+  if (bySender) throw new UserError(429, `You have sent ${HANDOVER_SENDER_LIMIT.points} handover e-mails in the last hour. Try again in ${wait(bySender.msBeforeNext)}.`, retryAfter(bySender.msBeforeNext));
+  if (byRecipient) {
+    throw new UserError(429, `${to} has been sent ${HANDOVER_RECIPIENT_LIMIT.points} handover e-mails in the last hour. Try again in ${wait(byRecipient.msBeforeNext)}.`,
+      retryAfter(byRecipient.msBeforeNext));
+  }
 }

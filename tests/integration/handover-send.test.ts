@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/lib/db";
+import { HANDOVER_RECIPIENT_LIMIT, takeHandoverSend } from "@/lib/auth/rate-limit";
 import { FIRST_CAUTION_LINE } from "@/lib/handover/cautions";
 import { callRoute, cookieFor } from "./helpers/call";
 import { dropFixtures, makeFixture, type Fixture } from "./helpers/fixture";
@@ -49,6 +50,19 @@ describe("handover e-mail", () => {
     const bad = await send(issued, { to: "not an address" });
     expect(bad.status).toBe(400);
     expect(bad.body.issues[0].path).toBe("to");
+  }, 30_000);
+
+  it("is refused with a 429 once an address has had its hourly budget, and nothing is sent or logged", async () => {
+    const flooded = `flooded-${issued.projectId.slice(0, 8)}@example.test`;
+    for (let i = 0; i < HANDOVER_RECIPIENT_LIMIT.points; i++) await takeHandoverSend(`someone-else-${i}`, flooded);
+    const before = await db()("revision_events").where({ revision_id: issued.revisionId, kind: "handover" }).count<{ count: string }[]>("* as count");
+    const r = await send(issued, { to: flooded });
+    expect(r.status).toBe(429);
+    expect(r.body.error).toContain(`${flooded} has been sent ${HANDOVER_RECIPIENT_LIMIT.points} handover e-mails in the last hour`);
+    const after = await db()("revision_events").where({ revision_id: issued.revisionId, kind: "handover" }).count<{ count: string }[]>("* as count");
+    expect(after[0]!.count).toBe(before[0]!.count);
+    // another address is still served
+    expect((await send(issued, { to: `fresh-${issued.projectId.slice(0, 8)}@example.test` })).status).toBe(200);
   }, 30_000);
 
   it("is refused for a revision not issued (409) and for a project without a client address (400)", async () => {
