@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { colebrook } from "./colebrook";
-import { darcyF, darcyFrictionFactor } from "./darcy";
+import { darcyF, darcyFrictionFactor, transitionAnchorF } from "./darcy";
 
 describe("darcyF in each regime", () => {
   // Hagen–Poiseuille f = 64/Re (White, Fluid Mechanics, ch. 6, laminar pipe flow; the equation number not recalled)
@@ -32,6 +32,13 @@ describe("darcyF in each regime", () => {
   it("a warm start (x = 1/√f of a nearby flow) reaches the same root to 1e-12", () => {
     const x = 1 / Math.sqrt(darcyF(1.1e5, 1e-4));
     expect(Math.abs(darcyF(1e5, 1e-4, x) - darcyF(1e5, 1e-4)) / darcyF(1e5, 1e-4)).toBeLessThan(1e-12);
+  });
+  it("a kept transition anchor (Colebrook at Re 4000) gives the same f to the last bit, and is the one the line is drawn to", () => {
+    expect(transitionAnchorF(1e-4)).toBe(colebrook(4000, 1e-4));
+    for (const re of [2300, 3000, 3999]) expect(darcyF(re, 1e-4, 0, transitionAnchorF(1e-4))).toBe(darcyF(re, 1e-4));
+    // the anchor given is the one used: a doubled anchor moves the midpoint by half of it
+    const lo = 64 / 2300, hi = colebrook(4000, 1e-4);
+    expect(darcyF(3150, 1e-4, 0, 2 * hi)).toBeCloseTo((lo + 2 * hi) / 2, 15);
   });
   it.each([0, 1e-301, 500, 2299.5, 2300, 2301, 3000, 3999, 4000, 4001, 2e4, 1e6, 1e8])("Re %s: the same value as darcyFrictionFactor to the last bit", (re) => {
     for (const rr of [0, 1e-5, 1e-3, 0.05]) expect(darcyF(re, rr)).toBe(darcyFrictionFactor(re, rr).f);

@@ -47,18 +47,25 @@ export function darcyFrictionFactor(re: number, relRoughness: number): { f: numb
  * alone (flowRegimeOf). Same rule and the same arithmetic as
  * darcyFrictionFactor, so the same value to the last bit — or, given guessX
  * (1/√f of a nearby turbulent point), Colebrook's Newton started there: the
- * same root to ~1e-15.
+ * same root to ~1e-15. anchorF (optional, > 0) is the transition's turbulent
+ * end, transitionAnchorF(relRoughness), kept by a caller that evaluates the
+ * same pipe again: the same number, without solving Colebrook each time.
  */
-export function darcyF(re: number, relRoughness: number, guessX = 0): number {
+export function darcyF(re: number, relRoughness: number, guessX = 0, anchorF = 0): number {
   if (re < RE_NO_FLOW) return 0;
   if (re < RE_LAMINAR_MAX) return 64 / re;
   if (re < RE_TURBULENT_MIN) {
     const fLam = 64 / RE_LAMINAR_MAX;
-    const fTurb = colebrookUnchecked(RE_TURBULENT_MIN, relRoughness);
+    const fTurb = anchorF > 0 ? anchorF : transitionAnchorF(relRoughness);
     const w = (re - RE_LAMINAR_MAX) / (RE_TURBULENT_MIN - RE_LAMINAR_MAX);
     return fLam + w * (fTurb - fLam);
   }
   return colebrookUnchecked(re, relRoughness, guessX);
+}
+
+/** Colebrook's f at the top of the transition (Re = 4000), the turbulent end the transition interpolates to. */
+export function transitionAnchorF(relRoughness: number): number {
+  return colebrookUnchecked(RE_TURBULENT_MIN, relRoughness);
 }
 
 /** The regime darcyFrictionFactor reports for this Re (Re ≥ 0). */

@@ -12,7 +12,7 @@
  * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { RE_LAMINAR_MAX, RE_TURBULENT_MIN } from "@/lib/hydraulics/friction/darcy";
+import { RE_LAMINAR_MAX, RE_TURBULENT_MIN, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
 import { PIPE_DROP_SLOTS, pipeDropInto, pipePressureDrop } from "@/lib/hydraulics/pipes";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 
@@ -79,6 +79,8 @@ export class LinkTable {
   private readonly lastG: Float64Array;
   /** 1/√f at the last turbulent evaluation: Colebrook's warm start (0: none yet) */
   private readonly lastX: Float64Array;
+  /** Colebrook's f at Re 4000 for a pipe met in the transition (0: not yet), so the interpolation does not solve it again */
+  private readonly anchorF: Float64Array;
   private readonly pumps = new Map<number, PumpData>();
   /** per-pipe constants, filled by setPipe: cross-section πD²/4 and relative roughness ε/D */
   private readonly area: Float64Array;
@@ -109,6 +111,7 @@ export class LinkTable {
     this.lastH = new Float64Array(count);
     this.lastG = new Float64Array(count);
     this.lastX = new Float64Array(count);
+    this.anchorF = new Float64Array(count);
     this.area = new Float64Array(count);
     this.relRough = new Float64Array(count);
     this.badPipe = new Uint8Array(count);
@@ -227,9 +230,10 @@ export class LinkTable {
         });
       }
       const r = this.drop;
-      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, this.lastX[k]!);
+      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, this.lastX[k]!, this.anchorF[k]!);
       const re = r[2]!;
       if (re >= RE_TURBULENT_MIN) this.lastX[k] = 1 / Math.sqrt(r[3]!);
+      else if (re >= RE_LAMINAR_MAX && this.anchorF[k] === 0) this.anchorF[k] = transitionAnchorF(this.relRough[k]!);
       if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
       const fr = r[0]! / 1000;
       const fit = r[1]! / 1000;

@@ -89,7 +89,8 @@ const dropScratch = new Float64Array(PIPE_DROP_SLOTS);
  * Re = |v|·D/ν, laminar R = 32·ρ·ν·|v|/D² (Hagen–Poiseuille) — so the same
  * numbers to the last bit. areaM2 = πD²/4 and relRoughness = ε/D are the
  * caller's per-pipe constants; guessX (optional, > 0) starts Colebrook's
- * Newton at a previous 1/√f of the same pipe (darcyF).
+ * Newton at a previous 1/√f of the same pipe, anchorF (optional, > 0) is the
+ * pipe's transitionAnchorF (darcyF).
  */
 export function pipeDropInto(
   flowM3s: number,
@@ -102,10 +103,11 @@ export function pipeDropInto(
   sumK: number,
   out: Float64Array,
   guessX = 0,
+  anchorF = 0,
 ): void {
   const velocityMps = flowM3s / areaM2;
   const re = (Math.abs(velocityMps) * innerDiameterM) / kinematicViscosityM2s;
-  const f = darcyF(re, relRoughness, guessX);
+  const f = darcyF(re, relRoughness, guessX, anchorF);
   const dynamicPressurePa = (densityKgM3 * velocityMps * velocityMps) / 2;
   const sign = Math.sign(flowM3s);
   // Laminar: Hagen–Poiseuille R = 32·ρ·ν·|v|/D² — the same as f·ρv²/(2D) with f = 64/Re, but
