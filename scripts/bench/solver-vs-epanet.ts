@@ -69,7 +69,8 @@ export async function benchSolverVsEpanet(sizes: number[]): Promise<boolean> {
       const doc = kind === "building" ? generateBuildingWithPipes(n) : generateGridWithPipes(n);
       const file = `${kind}-${n}.inp`;
       (ws as unknown as { writeFile(p: string, d: string): void }).writeFile(file, toInp(doc).inp);
-      const runs = n <= 2000 ? 9 : 5;
+      // enough runs that both sides are measured warm (the JIT and the wasm both settle): medians of 25 (7 at 10,000 pipes)
+      const runs = n <= 2000 ? 25 : 7;
       const ep: { wall: number; cpu: number }[] = [];
       const cold: { wall: number; cpu: number }[] = [];
       const memo: { wall: number; cpu: number }[] = [];
