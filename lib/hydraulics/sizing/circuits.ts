@@ -133,8 +133,13 @@ function circuitOf(
   const root = rootOfSide.get(side) ?? null;
   const passedFlow: number[] = [];
   const passedReturn: number[] = [];
-  const base = { load: load.id, side, rootLink: root, flowM3h: load.flowM3h, rootDpKpa: 0, passedFlow, passedReturn, index: false, excessKpa: null, balancingKv: null };
-  if (root === null) return { ...base, pump: null, path: [], pressureDropKpa: null };
+  // One object literal with every field, written once: markIndex then sets fields of one
+  // shape (object spread per circuit made each a slow, shapeless object).
+  const circuit = (rootDpKpa: number, pump: string | null, path: string[], pressureDropKpa: number | null): TracedCircuit => ({
+    load: load.id, side, rootLink: root, flowM3h: load.flowM3h, rootDpKpa, passedFlow, passedReturn,
+    index: false, excessKpa: null, balancingKv: null, pump, path, pressureDropKpa,
+  });
+  if (root === null) return circuit(0, null, [], null);
   const flowLeg = walk(load.inNode, pf, passedFlow);
   const returnLeg = walk(load.outNode, pr, passedReturn);
   const out = new Float64Array(2);
@@ -162,7 +167,7 @@ function circuitOf(
     path[lead + flowLeg.length] = load.id;
     for (let i = 0; i < returnLeg.length; i++) path[lead + flowLeg.length + 1 + i] = returnLeg[i]!;
   }
-  return { ...base, rootDpKpa: dpRoot, pump: r.id, path, pressureDropKpa: Number.isFinite(dp) ? dp : null };
+  return circuit(dpRoot, r.id, path, Number.isFinite(dp) ? dp : null);
 }
 
 function markIndex(ctx: EngineContext, circuits: TracedCircuit[]): void {
