@@ -21,8 +21,17 @@ export interface Symbolic {
   rowOf: Int32Array;
   /** elimination tree: parent[k] (−1 at a root) */
   parent: Int32Array;
-  /** column k of L: entries lp[k] .. lp[k+1] */
+  /** column k of L: entries lp[k] .. lp[k+1], their rows li (in increasing order) */
   lp: Int32Array;
+  li: Int32Array;
+  /**
+   * row k of L: the columns i < k with an entry, rowPat[rowStart[k] .. rowStart[k+1]),
+   * in an order where each comes after the ones it depends on (the elimination-tree
+   * walk of ldl_numeric, done once here), and the slot of L(k, i) in column i
+   */
+  rowStart: Int32Array;
+  rowPat: Int32Array;
+  rowSlot: Int32Array;
   /** strictly lower entries of L */
   nnzL: number;
   /** multiply-adds of the factorisation, Σ c(c+1)/2 over columns of c entries */
@@ -75,73 +84,76 @@ export function symbolicFactor(m: number, pairs: ArrayLike<number>): { sym: Symb
     work += (c * (c + 1)) / 2;
     if (c > maxColumn) maxColumn = c;
   }
-  return { sym: { m, colStart, rowOf, parent, lp, nnzL: lp[m]!, work, maxColumn }, entryOfPair };
+  // Row patterns in dependency order (each path from a nonzero up the tree, reversed
+  // onto a stack, as ldl_numeric finds them), and L's row indices by column.
+  const nnzL = lp[m]!;
+  const li = new Int32Array(nnzL);
+  const rowStart = new Int32Array(m + 1);
+  const rowPat = new Int32Array(nnzL);
+  const rowSlot = new Int32Array(nnzL);
+  const next = lp.slice(0, m);
+  const stack = new Int32Array(m);
+  flag.fill(-1);
+  let t = 0;
+  for (let k = 0; k < m; k++) {
+    flag[k] = k;
+    let top = m;
+    for (let p = colStart[k]!; p < colStart[k + 1]!; p++) {
+      let len = 0;
+      for (let i = rowOf[p]!; flag[i] !== k; i = parent[i]!) {
+        stack[len++] = i;
+        flag[i] = k;
+      }
+      while (len > 0) stack[--top] = stack[--len]!;
+    }
+    for (; top < m; top++) {
+      const i = stack[top]!;
+      const slot = next[i]!++;
+      li[slot] = k;
+      rowPat[t] = i;
+      rowSlot[t++] = slot;
+    }
+    rowStart[k + 1] = t;
+  }
+  return { sym: { m, colStart, rowOf, parent, lp, li, rowStart, rowPat, rowSlot, nnzL, work, maxColumn }, entryOfPair };
 }
 
-/** Work arrays and the factor of one matrix of a given structure; reused across iterations. */
+/** The factor of one matrix of a given structure (D and L's values), reused across iterations. */
 export interface Factor {
   sym: Symbolic;
-  /** D, and L's row indices and values by column */
   d: Float64Array;
-  li: Int32Array;
   lx: Float64Array;
+  /** dense work vector, all zero between factorisations */
   y: Float64Array;
-  pattern: Int32Array;
-  flag: Int32Array;
-  lnz: Int32Array;
 }
 
 export function newFactor(sym: Symbolic): Factor {
-  const { m } = sym;
-  return {
-    sym,
-    d: new Float64Array(m),
-    li: new Int32Array(sym.nnzL),
-    lx: new Float64Array(sym.nnzL),
-    y: new Float64Array(m),
-    pattern: new Int32Array(m),
-    flag: new Int32Array(m),
-    lnz: new Int32Array(m),
-  };
+  return { sym, d: new Float64Array(sym.m), lx: new Float64Array(sym.nnzL), y: new Float64Array(sym.m) };
 }
 
 /**
  * ldl_numeric: factor A = L D Lᵀ, A given by its diagonal and the strictly
- * upper values ax (by the pattern's entries). False when a pivot was not
- * positive — a node cut off from every fixed head: its pivot is kept tiny so
- * the factor stays finite, and the caller's balance check reports the part.
+ * upper values ax (by the pattern's entries), row by row: row k of L solves
+ * L(0:k, 0:k) D y = A(0:k, k) over the row's pattern only. False when a pivot
+ * was not positive — a node cut off from every fixed head: its pivot is kept
+ * tiny so the factor stays finite, and the caller's balance check reports the part.
  */
 export function factor(f: Factor, diag: Float64Array, ax: Float64Array): boolean {
-  const { m, colStart, rowOf, parent, lp } = f.sym;
-  const { d, li, lx, y, pattern, flag, lnz } = f;
+  const { m, colStart, rowOf, lp, li, rowStart, rowPat, rowSlot } = f.sym;
+  const { d, lx, y } = f;
   let ok = true;
   for (let k = 0; k < m; k++) {
-    y[k] = 0;
-    let top = m;
-    flag[k] = k;
-    lnz[k] = 0;
-    for (let p = colStart[k]!; p < colStart[k + 1]!; p++) {
-      let i = rowOf[p]!;
-      y[i] = y[i]! + ax[p]!;
-      let len = 0;
-      for (; flag[i] !== k; i = parent[i]!) {
-        pattern[len++] = i;
-        flag[i] = k;
-      }
-      while (len > 0) pattern[--top] = pattern[--len]!;
-    }
+    for (let p = colStart[k]!; p < colStart[k + 1]!; p++) y[rowOf[p]!] = y[rowOf[p]!]! + ax[p]!;
     let dk = diag[k]!;
-    for (; top < m; top++) {
-      const i = pattern[top]!;
+    for (let t = rowStart[k]!; t < rowStart[k + 1]!; t++) {
+      const i = rowPat[t]!;
+      const slot = rowSlot[t]!;
       const yi = y[i]!;
       y[i] = 0;
-      const p2 = lp[i]! + lnz[i]!;
-      for (let p = lp[i]!; p < p2; p++) y[li[p]!] = y[li[p]!]! - lx[p]! * yi;
+      for (let p = lp[i]!; p < slot; p++) y[li[p]!] = y[li[p]!]! - lx[p]! * yi;
       const lki = yi / d[i]!;
       dk -= lki * yi;
-      li[p2] = k;
-      lx[p2] = lki;
-      lnz[i]!++;
+      lx[slot] = lki;
     }
     if (!(dk > 1e-300)) {
       ok = false;
@@ -154,8 +166,8 @@ export function factor(f: Factor, diag: Float64Array, ax: Float64Array): boolean
 
 /** Solve (L D Lᵀ) x = b with the last factor, overwriting b with x. */
 export function solve(f: Factor, b: Float64Array): void {
-  const { m, lp } = f.sym;
-  const { d, li, lx } = f;
+  const { m, lp, li } = f.sym;
+  const { d, lx } = f;
   for (let j = 0; j < m; j++) {
     const bj = b[j]!;
     if (bj === 0) continue;
