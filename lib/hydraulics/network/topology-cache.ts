@@ -35,7 +35,8 @@ const same = (a: ArrayLike<number>, b: ArrayLike<number>) => {
   return true;
 };
 
-const size = (p: Prepared) => p.sym.nnzL + p.sym.rowOf.length;
+// stored entries: L's row indices, the row patterns and their slots (3 per entry of L), and A's pattern
+const size = (p: Prepared) => 3 * p.sym.nnzL + p.sym.rowOf.length;
 
 /** The prepared topology from the memo, or made by `make` and kept. */
 export function cachedPrepare(t: Topology, make: (t: Topology) => Prepared): Prepared {
