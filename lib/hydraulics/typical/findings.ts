@@ -19,7 +19,6 @@ const fieldWords: Record<string, string> = {
 const words = (field: string) => fieldWords[field] ?? field;
 
 export function inputFindings(doc: Schematic, inputs: ResolvedInputs, findings: Findings): void {
-  const typeOf = new Map(doc.parts.map((p) => [p.id, p.type]));
   if (inputs.assumptions.length > 0) {
     const shown = inputs.assumptions.slice(0, 20).map((a) => `${a.part} ${words(a.field)} ${a.value.toFixed(a.kind === "water" ? 1 : 2)}${a.kind === "water" ? " L" : ""}`);
     const more = inputs.assumptions.length > 20 ? `, and ${inputs.assumptions.length - 20} more` : "";
@@ -29,7 +28,9 @@ export function inputFindings(doc: Schematic, inputs: ResolvedInputs, findings: 
       [...new Set(inputs.assumptions.map((a) => a.part))],
     );
   }
-  const sources = inputs.notCounted.filter((n) => n.kind === "resistance" && partRegistry[typeOf.get(n.part)!].role === "heat-source");
+  // the part types, only when some resistance is not counted (most calculations have none)
+  const typeOf = inputs.notCounted.some((n) => n.kind === "resistance") ? new Map(doc.parts.map((p) => [p.id, p.type])) : null;
+  const sources = inputs.notCounted.filter((n) => n.kind === "resistance" && partRegistry[typeOf!.get(n.part)!].role === "heat-source");
   if (sources.length > 0) {
     findings.warning(
       "input.source-dp-excluded",

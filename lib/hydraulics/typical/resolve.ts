@@ -99,6 +99,11 @@ function typicalValue(part: Part, rule: TypicalRule, c: Ctx): { value: number; w
   }
 }
 
+function store(out: ResolvedInputs, kind: "resistance" | "water", partId: string, v: number): void {
+  if (kind === "resistance") out.kv.set(partId, v);
+  else out.waterL.set(partId, v);
+}
+
 export function resolveInputs(doc: Schematic, geom: (PipeGeometry | null)[], fluid: FluidForTypical | null, deltaTK: number | null): ResolvedInputs {
   const out: ResolvedInputs = { kv: new Map(), waterL: new Map(), assumptions: [], kvRefOfPart: new Map(), notCounted: [] };
   let bores: Map<string, number> | null = null;
@@ -107,12 +112,8 @@ export function resolveInputs(doc: Schematic, geom: (PipeGeometry | null)[], flu
     const props = part.props as Record<string, unknown>;
     for (const row of rows ?? []) {
       const given = props[row.field];
-      const store = (v: number | null) => {
-        if (row.kind === "resistance") out.kv.set(part.id, v);
-        else if (v !== null) out.waterL.set(part.id, v);
-      };
       if (typeof given === "number") {
-        store(given);
+        store(out, row.kind, part.id, given);
         continue;
       }
       if (row.empty === "computed") continue;
@@ -123,7 +124,7 @@ export function resolveInputs(doc: Schematic, geom: (PipeGeometry | null)[], flu
       bores ??= boresOf(doc, geom);
       const t = typicalValue(part, row.rule, { bore: bores.get(part.id), fluid, deltaTK });
       if (t === null || !Number.isFinite(t.value) || !(t.value > 0)) continue; // unconnected or no load: nothing flows through it
-      store(t.value);
+      store(out, row.kind, part.id, t.value);
       const ref = `${part.id}.${row.field}`;
       out.assumptions.push({
         ref, part: part.id, field: row.field, kind: row.kind, value: t.value,
