@@ -12,7 +12,8 @@ import type { Findings } from "./finding";
 export function topologyFindings(doc: Schematic, model: NetworkModel, f: Findings): void {
   for (const part of doc.parts) {
     const ports = portsOf(part);
-    const used = ports.filter((port) => (model.pipesAtPort.get(`${part.id}.${port}`)?.length ?? 0) > 0);
+    const pipesAt = ports.map((port) => model.pipesAtPort.get(`${part.id}.${port}`) ?? []);
+    const used = ports.filter((_, i) => pipesAt[i]!.length > 0);
     const role = partRegistry[part.type].role;
     if (used.length === 0) {
       f.warning("part.unconnected", `${part.id}: no pipe is connected to it`, [part.id]);
@@ -20,8 +21,8 @@ export function topologyFindings(doc: Schematic, model: NetworkModel, f: Finding
       const open = ports.filter((p) => !used.includes(p));
       f.warning("part.open-port", `${part.id}: port${open.length > 1 ? "s" : ""} ${open.join(", ")} not connected`, [part.id]);
     }
-    for (const port of ports) {
-      const pipes = model.pipesAtPort.get(`${part.id}.${port}`) ?? [];
+    for (const [i, port] of ports.entries()) {
+      const pipes = pipesAt[i]!;
       if (pipes.length > 1) {
         f.error("port.two-pipes", `${part.id}.${port}: ${pipes.length} pipes meet at one port (use a tee)`, [part.id, ...pipes]);
       }
