@@ -10,56 +10,51 @@
  * duplicates allowed). Output: order[k] = node eliminated k-th.
  */
 
-/** Binary min-heap on (degree, node) with lazy deletion. */
-class Heap {
-  private keys: number[] = [];
-  private nodes: number[] = [];
-  get size() {
-    return this.keys.length;
+/**
+ * Nodes by current degree: one doubly linked list per degree (George & Liu
+ * 1981 §5.4 keep the same degree structure), so taking a node of least degree
+ * and moving one to another degree are O(1) — a heap would pay log n for each
+ * of the many small updates a near-tree makes.
+ */
+class DegreeLists {
+  private readonly head: Int32Array;
+  private readonly tail: Int32Array;
+  private readonly next: Int32Array;
+  private readonly prev: Int32Array;
+  private readonly deg: Int32Array;
+  private min = 0;
+  constructor(m: number) {
+    this.head = new Int32Array(m + 1).fill(-1);
+    this.tail = new Int32Array(m + 1).fill(-1);
+    this.next = new Int32Array(m);
+    this.prev = new Int32Array(m);
+    this.deg = new Int32Array(m);
   }
-  push(key: number, node: number) {
-    const k = this.keys;
-    const n = this.nodes;
-    let i = k.length;
-    k.push(key);
-    n.push(node);
-    while (i > 0) {
-      const p = (i - 1) >> 1;
-      if (k[p]! <= key) break;
-      k[i] = k[p]!;
-      n[i] = n[p]!;
-      i = p;
-    }
-    k[i] = key;
-    n[i] = node;
+  insert(v: number, d: number): void {
+    // at the tail: nodes of equal degree leave in the order they reached it
+    this.deg[v] = d;
+    const t = this.tail[d]!;
+    this.prev[v] = t;
+    this.next[v] = -1;
+    if (t >= 0) this.next[t] = v;
+    else this.head[d] = v;
+    this.tail[d] = v;
+    if (d < this.min) this.min = d;
   }
-  /** key of the entry the last pop() returned */
-  topKey = 0;
-  /** removes the smallest entry: returns its node, its key in topKey (no tuple per pop) */
-  pop(): number {
-    const k = this.keys;
-    const n = this.nodes;
-    this.topKey = k[0]!;
-    const top = n[0]!;
-    const lastK = k.pop()!;
-    const lastN = n.pop()!;
-    const len = k.length;
-    if (len > 0) {
-      let i = 0;
-      for (;;) {
-        const l = 2 * i + 1;
-        if (l >= len) break;
-        const r = l + 1;
-        const c = r < len && k[r]! < k[l]! ? r : l;
-        if (k[c]! >= lastK) break;
-        k[i] = k[c]!;
-        n[i] = n[c]!;
-        i = c;
-      }
-      k[i] = lastK;
-      n[i] = lastN;
-    }
-    return top;
+  remove(v: number): void {
+    const n = this.next[v]!;
+    const p = this.prev[v]!;
+    if (p >= 0) this.next[p] = n;
+    else this.head[this.deg[v]!] = n;
+    if (n >= 0) this.prev[n] = p;
+    else this.tail[this.deg[v]!] = p;
+  }
+  /** removes and returns a node of least degree (the first to reach it) */
+  popMin(): number {
+    while (this.head[this.min]! < 0) this.min++;
+    const v = this.head[this.min]!;
+    this.remove(v);
+    return v;
   }
 }
 
@@ -67,7 +62,6 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
   // Adjacency as plain arrays with lazy removal of eliminated nodes; a stamp
   // array answers "already adjacent?" while forming the fill clique.
   const adj: number[][] = Array.from({ length: m }, () => []);
-  const deg = new Int32Array(m);
   const stamp = new Int32Array(m).fill(-1);
   for (let i = 0; i + 1 < pairs.length; i += 2) {
     const a = pairs[i]!;
@@ -76,6 +70,7 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
     adj[a]!.push(b);
     adj[b]!.push(a);
   }
+  const lists = new DegreeLists(m);
   // Merge parallel links: deduplicate each list once.
   for (let v = 0; v < m; v++) {
     const list = adj[v]!;
@@ -84,24 +79,20 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
       const u = list[i]!;
       if (stamp[u] === v) continue;
       stamp[u] = v;
-      list[len++] = u; // compacted in place, first occurrence kept (same order as before)
+      list[len++] = u; // compacted in place, first occurrence kept
     }
     list.length = len;
-    deg[v] = len;
   }
+  for (let v = 0; v < m; v++) lists.insert(v, adj[v]!.length);
   stamp.fill(-1);
-  const heap = new Heap();
-  for (let v = 0; v < m; v++) heap.push(deg[v]!, v);
   const done = new Uint8Array(m);
   const order = new Int32Array(m);
   const nbrs: number[] = [];
-  let k = 0;
   let tick = 0;
-  while (heap.size > 0) {
-    const v = heap.pop();
-    if (done[v] || heap.topKey !== deg[v]) continue;
+  for (let k = 0; k < m; k++) {
+    const v = lists.popMin();
     done[v] = 1;
-    order[k++] = v;
+    order[k] = v;
     nbrs.length = 0;
     for (const u of adj[v]!) if (!done[u]) nbrs.push(u);
     for (const u of nbrs) {
@@ -123,8 +114,8 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
           stamp[w] = t;
         }
       }
-      deg[u] = list.length;
-      heap.push(list.length, u);
+      lists.remove(u);
+      lists.insert(u, list.length);
     }
     adj[v] = [];
   }
