@@ -36,7 +36,8 @@ for (const f of chosen) if (f !== "root" && !folders.includes(f)) throw new Erro
 function equivalents(): Set<string> {
   const keys = new Set<string>();
   for (const line of readFileSync(path.join(ENGINE, "MUTANTS.md"), "utf8").split("\n")) {
-    const cells = line.split("|").map((c) => c.trim());
+    // a cell may hold a `|` escaped as `\|` (GFM tables), e.g. a replacement with `||`
+    const cells = line.split(/(?<!\\)\|/).map((c) => c.trim().replace(/\\\|/g, "|"));
     if (cells.length < 6 || !cells[1]!.endsWith(".ts")) continue;
     keys.add(`${cells[1]}:${cells[2]}:${cells[3]}:${cells[4]!.replace(/^`|`$/g, "")}`);
   }
