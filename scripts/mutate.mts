@@ -17,7 +17,10 @@
  * mutants whose code or covering tests changed. Ends with one line per folder: mutants, killed
  * (+ timed out), survived, no coverage, the score, and the score with the equivalent mutants listed
  * in lib/hydraulics/MUTANTS.md taken out; survivors not listed there are printed.
- * Env: MUTATE_CONCURRENCY (default 2).
+ * Env: MUTATE_CONCURRENCY (default 2); MUTATE_FORCE=1 re-tests every mutant (still writing the
+ * incremental files): Stryker's reuse kept a survivor that a newly added test kills when the mutant
+ * is also reached at load time (seen with friction/darcy.ts after regimes.test.ts), so a score to
+ * record is measured with it.
  */
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
@@ -58,6 +61,7 @@ async function pass(folder: string, name: string, options: PartialStrykerOptions
     mutate,
     ...options,
     concurrency: Number(process.env.MUTATE_CONCURRENCY ?? 2),
+    force: process.env.MUTATE_FORCE === "1",
     incrementalFile: `reports/mutation/${folder}.${name}.incremental.json`,
     jsonReporter: { fileName: `reports/mutation/${folder}.${name}.json` },
     htmlReporter: { fileName: `reports/mutation/${folder}.${name}.html` },

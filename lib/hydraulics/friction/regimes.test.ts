@@ -34,6 +34,11 @@ describe("relative roughness 0 ≤ ε/D < 1", () => {
     expect(() => darcyFrictionFactor(1e5, -1e-9)).toThrow(/^relRoughness must be in \[0, 1\), got -1e-9$/);
     expect(() => darcyFrictionFactor(1e5, 1)).toThrow(/^relRoughness must be in \[0, 1\), got 1$/);
   });
+  it("checked in the laminar range too, where Colebrook (which checks it again) is not reached", () => {
+    expect(darcyFrictionFactor(1000, 0.999).f).toBeCloseTo(0.064, 15); // 64/1000
+    expect(() => darcyFrictionFactor(1000, -1e-9)).toThrow(/^relRoughness must be in \[0, 1\), got -1e-9$/);
+    expect(() => darcyFrictionFactor(1000, 1)).toThrow(/^relRoughness must be in \[0, 1\), got 1$/);
+  });
 });
 
 describe("the citations shown with the working", () => {
