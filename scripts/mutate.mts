@@ -17,7 +17,10 @@
  * mutants whose code or covering tests changed. Ends with one line per folder: mutants, killed
  * (+ timed out), survived, no coverage, the score, and the score with the equivalent mutants listed
  * in lib/hydraulics/MUTANTS.md taken out; survivors not listed there are printed.
- * Env: MUTATE_CONCURRENCY (default 2).
+ * Env: MUTATE_CONCURRENCY (default 2); MUTATE_FORCE=1 re-tests every mutant (still writing the
+ * incremental files): Stryker's reuse kept a survivor that a newly added test kills when the mutant
+ * is also reached at load time (seen with friction/darcy.ts after regimes.test.ts), so a score to
+ * record is measured with it.
  */
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
@@ -45,6 +48,12 @@ function equivalents(): Set<string> {
 }
 const keyOf = (m: MutantResult) => `${path.relative(process.cwd(), m.fileName)}:${m.location.start.line}:${m.mutatorName}:${(m.replacement ?? "").replace(/\s+/g, " ")}`;
 const placeOf = (m: MutantResult) => `${keyOf(m)}:${m.location.start.column}`;
+/** A row's line cell may also give the column (`66:24`) where one line has the same mutant twice. */
+const listed = (equiv: Set<string>, m: MutantResult) =>
+  equiv.has(keyOf(m)) || equiv.has(keyOf(m).replace(`:${m.location.start.line}:`, `:${m.location.start.line}:${m.location.start.column}:`));
+
+/** Folders judged in pass 1 by a smaller test set than the engine set (see the config for why). */
+const PASS1_CONFIG: Record<string, string> = { sizing: "vitest.mutate-sizing.config.mts" };
 
 async function pass(folder: string, name: string, options: PartialStrykerOptions): Promise<MutantResult[]> {
   const mutate = folder === "root" ? [`${ENGINE}/*.ts`, `!${ENGINE}/*.test.ts`] : [`${ENGINE}/${folder}/**/*.ts`, `!${ENGINE}/${folder}/**/*.test.ts`];
@@ -53,6 +62,7 @@ async function pass(folder: string, name: string, options: PartialStrykerOptions
     mutate,
     ...options,
     concurrency: Number(process.env.MUTATE_CONCURRENCY ?? 2),
+    force: process.env.MUTATE_FORCE === "1",
     incrementalFile: `reports/mutation/${folder}.${name}.incremental.json`,
     jsonReporter: { fileName: `reports/mutation/${folder}.${name}.json` },
     htmlReporter: { fileName: `reports/mutation/${folder}.${name}.html` },
@@ -65,7 +75,8 @@ async function main() {
   const unexplained: string[] = [];
   const equiv = equivalents();
   for (const folder of chosen) {
-    const first = await pass(folder, "engine-set", { ignoreStatic: true });
+    const set = PASS1_CONFIG[folder];
+    const first = await pass(folder, set ? "sizing-set" : "engine-set", { ignoreStatic: true, ...(set ? { vitest: { configFile: set, related: true } } : {}) });
     // pass 2: static mutants (ignored above) and hybrid ones (static and per-test coverage) that survived
     const again = first.filter((m) => m.static && (m.status === "Ignored" || m.status === "Survived" || m.status === "NoCoverage"));
     process.env.MUTATE_TESTS = folder === "root" ? `${ENGINE}/*.test.ts` : `${ENGINE}/${folder}/**/*.test.ts`;
@@ -81,13 +92,13 @@ async function main() {
     const n = (s: string) => results.filter((m) => m.status === s).length;
     const killed = n("Killed") + n("Timeout");
     const survivors = results.filter((m) => m.status === "Survived" || m.status === "NoCoverage");
-    const listed = survivors.filter((m) => equiv.has(keyOf(m)));
-    for (const m of survivors) if (!equiv.has(keyOf(m))) unexplained.push(`${keyOf(m)} (${m.status}${again.includes(m) ? ", pass 2" : ""})`);
+    const excused = survivors.filter((m) => listed(equiv, m));
+    for (const m of survivors) if (!listed(equiv, m)) unexplained.push(`${keyOf(m)} (${m.status}${again.includes(m) ? ", pass 2" : ""})`);
     const valid = killed + survivors.length;
     const pct = (x: number, of: number) => (of ? ((100 * x) / of).toFixed(1) : "–");
     rows.push(
       `${folder.padEnd(10)} ${String(valid).padStart(5)} mutants (${statics.length} judged in pass 2), ${killed} killed, ${n("Survived")} survived, ` +
-        `${n("NoCoverage")} no coverage: score ${pct(killed, valid)} %, ${pct(killed, valid - listed.length)} % without ${listed.length} equivalent`,
+        `${n("NoCoverage")} no coverage: score ${pct(killed, valid)} %, ${pct(killed, valid - excused.length)} % without ${excused.length} equivalent`,
     );
     console.log(`\n[mutate] ${rows.at(-1)}`);
   }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { en1264HeatFluxWm2, en1264SurfaceTemperatureC } from "./en1264";
+import { EN1264_SOURCE, en1264HeatFluxWm2, en1264SurfaceTemperatureC } from "./en1264";
 
 // EN 1264-2 basic characteristic q = 8.92·(θ_F,m − θ_i)^1.1 — recalled from memory, then found in
 // print: the trade journal IKZ ("Gut geplant ist optimal wärmeversorgt", ikz.de) gives the DIN EN 1264
@@ -33,5 +33,12 @@ describe("EN 1264 arguments: each limit on both sides", () => {
     expect(() => en1264HeatFluxWm2(29, Number.POSITIVE_INFINITY)).toThrow(/^roomC must be finite, got Infinity$/);
     expect(() => en1264SurfaceTemperatureC(Number.POSITIVE_INFINITY, 20)).toThrow(/^qWm2 must be ≥ 0, got Infinity$/);
     expect(() => en1264SurfaceTemperatureC(100, Number.NaN)).toThrow(/^roomC must be finite, got NaN$/);
+  });
+});
+
+describe("the citation shown with the working", () => {
+  it("names EN 1264-2, the formula and where it was read (the standard's text not seen)", () => {
+    expect(EN1264_SOURCE).toMatch(/^EN 1264-2 basic characteristic q = 8\.92·\(θF,m − θi\)\^1\.1 W\/m²/);
+    expect(EN1264_SOURCE).toMatch(/IKZ-Haustechnik and SBZ/);
   });
 });

@@ -70,3 +70,32 @@ describe("en442FlowTemperatureForOutput (closed form)", () => {
     expect(() => en442FlowTemperatureForOutput({ outputW: 10, outputAtDt50W: 1000, exponentN: 1.3, deltaTK: 0, roomC: 20 })).toThrow(/deltaTK/);
   });
 });
+
+describe("inverse arguments: each limit on both sides, the message naming the value", () => {
+  const flow = { outputW: 353.8, outputAtDt50W: 1000, exponentN: 1.3, deltaTK: 5, roomC: 20 };
+  const rating = { outputW: 1000, exponentN: 1.3, flowC: 45, returnC: 35, roomC: 20 };
+  it("1 ≤ n ≤ 2 in both: the ends taken (by hand at 45/35/20: ΔT_ln/ΔT_n = 19.576/49.833 = 0.39283), 0.99 and 2.01 refused", () => {
+    const r = 10 / Math.log(25 / 15) / (10 / Math.log(55 / 45)); // EN 442-2 log mean, written out
+    expect(en442RatingForOutput({ ...rating, exponentN: 1 })).toBeCloseTo(1000 / r, 9);
+    expect(en442RatingForOutput({ ...rating, exponentN: 2 })).toBeCloseTo(1000 / (r * r), 9);
+    for (const n of [0.99, 2.01]) {
+      expect(() => en442RatingForOutput({ ...rating, exponentN: n })).toThrow(new RegExp(`^exponentN must be in \\[1, 2\\], got ${n}$`));
+      expect(() => en442FlowTemperatureForOutput({ ...flow, exponentN: n })).toThrow(new RegExp(`^exponentN must be in \\[1, 2\\], got ${n}$`));
+    }
+    // n = 1: ΔT* = 49.833·0.3538 = 17.631 K; a = 5/(1 − e^(−5/17.631)) = 20.211 K → t1 = 40.21 °C (hand)
+    const star = (10 / Math.log(55 / 45)) * 0.3538;
+    expect(en442FlowTemperatureForOutput({ ...flow, exponentN: 1 })).toBeCloseTo(20 + 5 / (1 - Math.exp(-5 / star)), 9);
+    // n = 2: ΔT* = 49.833·0.3538^(1/2) = 29.642 K → t1 = 20 + 5/(1 − e^(−5/29.642)) = 52.17 °C (hand)
+    const star2 = (10 / Math.log(55 / 45)) * Math.sqrt(0.3538);
+    expect(en442FlowTemperatureForOutput({ ...flow, exponentN: 2 })).toBeCloseTo(20 + 5 / (1 - Math.exp(-5 / star2)), 9);
+  });
+  it("outputW, Φ50 and Δt > 0 and finite, room finite: each refused by name", () => {
+    expect(() => en442RatingForOutput({ ...rating, outputW: 0 })).toThrow(/^outputW must be > 0, got 0$/);
+    expect(() => en442RatingForOutput({ ...rating, outputW: Number.POSITIVE_INFINITY })).toThrow(/^outputW must be > 0, got Infinity$/);
+    expect(() => en442FlowTemperatureForOutput({ ...flow, outputAtDt50W: 0 })).toThrow(/^outputAtDt50W must be > 0, got 0$/);
+    expect(() => en442FlowTemperatureForOutput({ ...flow, outputAtDt50W: -5 })).toThrow(/^outputAtDt50W must be > 0, got -5$/);
+    expect(() => en442FlowTemperatureForOutput({ ...flow, deltaTK: -1 })).toThrow(/^deltaTK must be > 0, got -1$/);
+    expect(() => en442FlowTemperatureForOutput({ ...flow, roomC: Number.NaN })).toThrow(/^roomC must be finite, got NaN$/);
+    expect(() => en442FlowTemperatureForOutput({ ...flow, roomC: Number.NEGATIVE_INFINITY })).toThrow(/^roomC must be finite, got -Infinity$/);
+  });
+});

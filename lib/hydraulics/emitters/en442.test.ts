@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { arithmeticExcessK, EN442_NOMINAL_LMTD_K, en442Output, en442OutputArithmetic, lmtdK } from "./en442";
+import { arithmeticExcessK, EN442_NOMINAL_LMTD_K, en442Output, EN442_SOURCE, en442OutputArithmetic, lmtdK } from "./en442";
 
 // references.md §7 (EN 442-2 characteristic equation; worked values computed, ratios printed
 // to 4 decimals → 1e-4 absolute on Φ/Φ50).
@@ -86,5 +86,12 @@ describe("EN 442 arguments: each limit on both sides, the message naming the val
     expect(en442OutputArithmetic({ outputAtDt50W: 1000, exponentN: 1.3, flowC: 22, returnC: 18, roomC: 20 })).toBe(0);
     expect(en442OutputArithmetic({ outputAtDt50W: 1000, exponentN: 1.3, flowC: 24, returnC: 18, roomC: 20 })).toBeCloseTo(1000 * (1 / 50) ** 1.3, 12);
     expect(() => en442OutputArithmetic({ outputAtDt50W: 1000, exponentN: 3, flowC: 45, returnC: 40, roomC: 20 })).toThrow(/exponentN/);
+  });
+});
+
+describe("the citation shown with the working", () => {
+  it("names EN 442-2 and the logarithmic mean", () => {
+    expect(EN442_SOURCE).toMatch(/^EN 442-2:2014, characteristic equation/);
+    expect(EN442_SOURCE).toMatch(/logarithmic mean excess temperature/);
   });
 });

@@ -106,3 +106,27 @@ describe("UFH loop verdict, EN 1264-2 basic characteristic", () => {
     expect(Math.abs(low.emitters[0]!.outputAtDesignW! / (0.98 * 800) - 1)).toBeLessThan(1e-9);
   });
 });
+
+describe("the undersized messages carry the numbers worked out here", () => {
+  const ufh = (props: Props) => ({ id: "ufh", type: "ufh-loop" as const, props: { loopLengthM: 60, innerDiameterMm: 12, roomTemperatureC: 20, maxSurfaceTemperatureC: 29, ...props } });
+  const undersized = (r: ReturnType<typeof results>) => r.findings.filter((f) => f.code === "emitter.undersized").map((f) => f.message);
+
+  it("radiator: 2000 W at ΔT 50 gives 593.6 W at 45/35 °C, below a 605 W room", () => {
+    const r = results(doc(radiator({ outputAtDt50W: 2000, heatLoadW: 605 })));
+    expect(undersized(r)).toEqual(["rad: gives 594 W at 45/35 °C, below the room's 605 W"]);
+  });
+  it("UFH on 7.5 m²: 800 W needs 106.7 W/m², a surface of 20 + (106.7/8.92)^(1/1.1) = 29.5 °C, above the 29 °C limit; the floor gives 7.5·100.04 = 750 W", () => {
+    const need = 20 + (800 / 7.5 / 8.92) ** (1 / 1.1); // EN 1264-2 basic characteristic, inverted by hand
+    expect(need).toBeCloseTo(29.54, 2);
+    expect(undersized(results(doc(ufh({ heatLoadW: 800, floorAreaM2: 7.5 }))))).toEqual([
+      "ufh: 800 W on 7.5 m² needs 107 W/m², a mean floor surface of 29.5 °C in a 20 °C room (EN 1264-2), above the 29 °C surface limit; the floor gives at most 750 W",
+    ]);
+  });
+  it("UFH at 30/25 °C: the mean water 27.5 °C is the limit; 8.92·7.5^1.1·7.5 m² = 613.75 W", () => {
+    const r = results(doc(ufh({ heatLoadW: 800, floorAreaM2: 7.5 }), { flowTemperatureC: 30, returnTemperatureC: 25 }));
+    expect(8.92 * 7.5 ** 1.1 * 7.5).toBeCloseTo(613.75, 2);
+    expect(undersized(r)).toEqual([
+      "ufh: 800 W on 7.5 m² needs 107 W/m², a mean floor surface of 29.5 °C in a 20 °C room (EN 1264-2), above the mean water temperature 27.5 °C; the floor gives at most 614 W",
+    ]);
+  });
+});

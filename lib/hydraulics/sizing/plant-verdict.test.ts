@@ -84,3 +84,37 @@ describe("hot-water store: reheat, the hottest flow and the 60 °C storage", () 
     expect(codes(r, "hot-water.store-cool")).toEqual([["cyl"]]);
   });
 });
+
+describe("hot-water store: which flow temperature judges it, and the coil against the heat source", () => {
+  // reheat = V·ρ·cp·(t_store − t_cold)/P (references §1.1), water at the 35 °C store mean (hand-calc WATER table)
+  const reheatAt = (kW: number) => (0.2 * WATER[35].rho * WATER[35].cp * 50) / (kW * 1000) / 60;
+  const fields = (r: ReturnType<typeof doc>, code: string) => r.findings.filter((f) => f.code === code).map((f) => [f.refs, f.fields]);
+
+  it("no hottest flow stated: a reheat time, and hot-water.flow-unknown pointing at the hot-water flow field", () => {
+    const r = doc({}, { storeTemperatureC: 60 });
+    expect(Math.abs(r.hotWater!.reheatMinutes! / reheatAt(6) - 1)).toBeLessThan(1e-3);
+    expect(fields(r, "hot-water.flow-unknown")).toEqual([[["cyl"], ["design.hotWaterFlowTemperatureC"]]]);
+  });
+  it("a hot-water flow temperature is the one judged (65 °C passes a 60 °C store even with the heating's highest at 55 °C)", () => {
+    const r = doc({}, { storeTemperatureC: 60 }, { hotWaterFlowTemperatureC: 65, maxFlowTemperatureC: 55 });
+    expect(r.hotWater!.reheatMinutes).not.toBeNull();
+    expect(fields(r, "hot-water.flow-too-cool")).toEqual([]);
+    expect(fields(r, "hot-water.flow-unknown")).toEqual([]);
+  });
+  it("a hot-water flow at the store setting: no reheat, the finding points at that field; with only the highest flow, at that one", () => {
+    const hw = doc({}, { storeTemperatureC: 60 }, { hotWaterFlowTemperatureC: 60, maxFlowTemperatureC: 70 });
+    expect(hw.hotWater!.reheatMinutes).toBeNull();
+    expect(fields(hw, "hot-water.flow-too-cool")).toEqual([[["cyl"], ["design.hotWaterFlowTemperatureC"]]]);
+    const max = doc({}, { storeTemperatureC: 60 }, { maxFlowTemperatureC: 59 });
+    expect(fields(max, "hot-water.flow-too-cool")).toEqual([[["cyl"], ["design.maxFlowTemperatureC"]]]);
+  });
+  it("a coil smaller than the heat source reheats at its own output: 4 kW coil on a 6 kW heat pump → 173.1 min", () => {
+    const r = doc({}, { storeTemperatureC: 60, coilOutputKw: 4 }, { maxFlowTemperatureC: 65 });
+    expect(reheatAt(4)).toBeCloseTo(173.1, 1);
+    expect(Math.abs(r.hotWater!.reheatMinutes! / reheatAt(4) - 1)).toBeLessThan(1e-3);
+  });
+  it("store exactly 60 °C is not cool; 59.9 °C is", () => {
+    expect(fields(doc({}, { storeTemperatureC: 60 }, { maxFlowTemperatureC: 65 }), "hot-water.store-cool")).toEqual([]);
+    expect(fields(doc({}, { storeTemperatureC: 59.9 }, { maxFlowTemperatureC: 65 }), "hot-water.store-cool").length).toBe(1);
+  });
+});

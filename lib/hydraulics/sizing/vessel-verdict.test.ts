@@ -10,11 +10,11 @@ import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { COPPER_ID_MM, en12828NominalL, litresPerM, WATER_EXPANSION_FROM_10C } from "@/lib/hydraulics/testing/hand-calc";
 
-function doc(vesselsL: number[]) {
+function doc(vesselsL: number[], coldFillPressureBar = 1.2) {
   const cu = (id: string, from: string, to: string, size: string, lengthM: number) => ({ id, from, to, material: "copper", size, lengthM });
   return {
     format: "loopwright/schematic", version: 1, name: "vessel verdict", fluid: { kind: "water" },
-    design: { flowTemperatureC: 45, returnTemperatureC: 35, maxFlowTemperatureC: 55, fillTemperatureC: 10, coldFillPressureBar: 1.2, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1, targetGradientPaPerM: 300 },
+    design: { flowTemperatureC: 45, returnTemperatureC: 35, maxFlowTemperatureC: 55, fillTemperatureC: 10, coldFillPressureBar, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1, targetGradientPaPerM: 300 },
     parts: [
       { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, kv: 2, waterVolumeL: 40, pumpCurve: [[0, 40], [1, 30], [2, 0]] } },
       { id: "hl", type: "heat-load", props: { heatLoadW: 3000, kv: 1, waterVolumeL: 100 } },
@@ -89,5 +89,34 @@ describe("expansion vessel verdict (EN 12828 Annex D)", () => {
     expect(ev.ok).toBeNull();
     // without the 1 m vessel leg: V_s 141.28 L
     expect(Math.abs(ev.requiredVolumeL! / en12828NominalL(systemL - litresPerM(COPPER_ID_MM["15"]), 0.01421, 5, 3).nominalL - 1)).toBeLessThan(3e-3);
+  });
+});
+
+describe("cold fill pressure (EN 12828 Annex D, Boyle): within [p_fill,min, p_e)", () => {
+  // p_fill,min = (p_0 + 1)·V/(V − V_WR) − 1 for the vessel drawn (V > V_WR), else for V_n; p_e = 3 − 0.5 = 2.5 bar.
+  // 12 L drawn: 1.7·12/(12 − 3) − 1 = 1.2667 bar (hand). Same closed form both sides → ±0.005 bar margins suffice.
+  const fillFindings = (fill: number, vesselsL: number[]) => {
+    const out = calculate(doc(vesselsL, fill));
+    if (!out.ok) throw new Error(JSON.stringify(out.issues));
+    return out.results.findings.filter((f) => f.code === "vessel.fill-pressure");
+  };
+  it("12 L drawn: 1.27 bar fills enough, 1.26 bar does not (naming the vessel and the field, with the range)", () => {
+    expect(fillFindings(1.27, [12])).toEqual([]);
+    const low = fillFindings(1.26, [12]);
+    expect(low.map((f) => [f.severity, f.refs, f.fields])).toEqual([["warning", ["ev1"], ["design.coldFillPressureBar"]]]);
+    expect(low[0]!.message).toBe("design: cold fill 1.26 bar is outside 1.27–2.50 bar for a 12.0 L vessel pre-charged to 0.70 bar (EN 12828 Annex D)");
+  });
+  it("12 L drawn: 2.49 bar is below p_e = 2.5 bar, 2.5 bar is not", () => {
+    expect(fillFindings(2.49, [12])).toEqual([]);
+    expect(fillFindings(2.5, [12]).map((f) => f.refs)).toEqual([["ev1"]]);
+  });
+  it("no vessel drawn: judged against V_n = 9.741 L: 1.7·9.741/6.741 − 1 = 1.4566 bar (hand; ±0.003 bar for V_n's ±0.3 %)", () => {
+    expect(1.7 * hand.nominalL / (hand.nominalL - 3) - 1).toBeCloseTo(1.4566, 3);
+    expect(fillFindings(1.47, [])).toEqual([]);
+    expect(fillFindings(1.44, []).map((f) => f.refs)).toEqual([[]]);
+  });
+  it("a 2 L vessel drawn, smaller than the 3 L reserve: judged against V_n too, and too small", () => {
+    expect(fillFindings(1.47, [2])).toEqual([]);
+    expect(fillFindings(1.44, [2]).map((f) => f.refs)).toEqual([["ev1"]]);
   });
 });
