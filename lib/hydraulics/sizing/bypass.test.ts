@@ -10,6 +10,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
+import { perTest } from "@/lib/hydraulics/testing/per-test";
 import type { Results } from "@/lib/schematic/results";
 
 type Doc = { parts: { id: string; type: string; props: Record<string, unknown> }[] };
@@ -28,24 +29,29 @@ const setOpening = (d: Doc, kpa: number | null) => {
 };
 
 describe("dp-bypass recommendation covers the simulated all-zones-open Δp (Millbrook demo)", () => {
-  const r = run(millbrook());
-  const design = r.modes.find((m) => m.mode === "heating")!.parts.find((p) => p.id === "bp")!.pressureDropKpa!;
-  const openScen = r.scenarios.find((s) => s.name === "all zones open")!;
-  const openBp = openScen.parts.find((p) => p.id === "bp")!;
+  const sized = perTest(() => {
+    const r = run(millbrook());
+    const design = r.modes.find((m) => m.mode === "heating")!.parts.find((p) => p.id === "bp")!.pressureDropKpa!;
+    const openScen = r.scenarios.find((s) => s.name === "all zones open")!;
+    return { r, design, openScen, openBp: openScen.parts.find((p) => p.id === "bp")! };
+  });
 
   it("the pump on its curve puts more across the bypass than the design flows do", () => {
+    const { design, openScen, openBp } = sized();
     expect(openScen.converged).toBe(true);
     expect(openBp.flowM3h).toBe(0); // drawn at 30 kPa: shut with all zones open
     expect(openBp.pressureDropKpa!).toBeGreaterThan(design);
   });
 
   it("recommended = max(design Δp, all-zones-open Δp) + max(10 %, 2 kPa)", () => {
+    const { r, design, openBp } = sized();
     const need = Math.max(design, openBp.pressureDropKpa!);
     expect(r.bypass!.recommendedOpeningKpa!).toBeCloseTo(withMargin(need), 2);
     expect(r.bypass!.recommendedOpeningKpa!).toBeGreaterThan(openBp.pressureDropKpa! + 2 - 1e-9);
   });
 
   it("a bypass set to the recommendation passes nothing with every zone open", () => {
+    const { r } = sized();
     const rec = r.bypass!.recommendedOpeningKpa!;
     const r2 = run(setOpening(millbrook(), rec));
     const s = r2.scenarios.find((x) => x.name === "all zones open")!;
@@ -55,6 +61,7 @@ describe("dp-bypass recommendation covers the simulated all-zones-open Δp (Mill
   });
 
   it("with no opening drawn the recommendation is simulated and the bypass stays shut with every zone open", () => {
+    const { r } = sized();
     const r3 = run(setOpening(millbrook(), null));
     expect(r3.bypass!.recommendedOpeningKpa!).toBeCloseTo(r.bypass!.recommendedOpeningKpa!, 6);
     const s = r3.scenarios.find((x) => x.name === "all zones open")!;
@@ -64,6 +71,7 @@ describe("dp-bypass recommendation covers the simulated all-zones-open Δp (Mill
   });
 
   it("an opening between the design Δp and the all-zones-open Δp → bypass.opening-low naming the bypass", () => {
+    const { design, openBp } = sized();
     const between = (design + openBp.pressureDropKpa!) / 2;
     const r4 = run(setOpening(millbrook(), between));
     const f = r4.findings.find((x) => x.code === "bypass.opening-low")!;

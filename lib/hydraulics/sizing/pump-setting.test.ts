@@ -9,6 +9,7 @@ import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { resultsSchema } from "@/lib/schematic/results";
 import { smallSystem } from "@/lib/hydraulics/testing/small-system";
+import { perTest } from "@/lib/hydraulics/testing/per-test";
 
 const curve: [number, number][] = [[0, 40], [0.5, 35], [1, 25], [1.5, 10]];
 const drawn = (q: number) => {
@@ -21,18 +22,22 @@ const drawn = (q: number) => {
 };
 
 describe("pump setting of an oversized pump", () => {
-  const r = calculate(smallSystem());
-  if (!r.ok) throw new Error(JSON.stringify(r.issues));
-  const results = resultsSchema.parse(r.results);
-  const duty = results.modes.find((m) => m.mode === "heating")!.pump!;
+  const sized = perTest(() => {
+    const r = calculate(smallSystem());
+    if (!r.ok) throw new Error(JSON.stringify(r.issues));
+    const results = resultsSchema.parse(r.results);
+    return { results, duty: results.modes.find((m) => m.mode === "heating")!.pump! };
+  });
 
   it("states the surplus: available − required at the design flow", () => {
+    const { duty } = sized();
     expect(duty.id).toBe("pump");
     expect(duty.availableHeadKpa!).toBeCloseTo(drawn(duty.designFlowM3h!), 9);
     expect(duty.surplusKpa!).toBeCloseTo(duty.availableHeadKpa! - duty.requiredHeadKpa!, 9);
   });
 
   it("gives the speed at which the curve drawn meets the duty: n²·H(Q/n) = H_req", () => {
+    const { duty } = sized();
     const n = duty.speedFraction!;
     expect(n).toBeGreaterThan(0);
     expect(n).toBeLessThan(1);
@@ -41,6 +46,7 @@ describe("pump setting of an oversized pump", () => {
   });
 
   it("raises pump.oversized naming the pump, with the margin and the settings", () => {
+    const { results, duty } = sized();
     const f = results.findings.find((x) => x.code === "pump.oversized")!;
     expect(f.refs).toEqual(["pump"]);
     expect(f.message).toMatch(/25 % margin/);
@@ -49,6 +55,7 @@ describe("pump setting of an oversized pump", () => {
   });
 
   it("a pump within the margin gets a speed but no finding", () => {
+    const { duty } = sized();
     // Scale the curve so it gives only ~10 % more than needed at the design flow.
     const d = smallSystem();
     const need = duty.requiredHeadKpa!;

@@ -9,6 +9,7 @@ import { calculate } from "@/lib/hydraulics/calculate";
 import { bisect, COPPER_ID_MM, copperDpKpa, en12828NominalL, en442LogW, kvDpKpa, kvForDp, litresPerM, WATER, WATER_EXPANSION_FROM_10C, type Water } from "@/lib/hydraulics/testing/hand-calc";
 import { resultsSchema, type Results } from "@/lib/schematic/results";
 import { smallSystem } from "@/lib/hydraulics/testing/small-system";
+import { perTest } from "@/lib/hydraulics/testing/per-test";
 
 function run(doc: unknown = smallSystem()): Results {
   const r = calculate(doc);
@@ -42,10 +43,13 @@ const circuit1 = common + pipeDp("15", 3, q1) * 2 + kvDp(q1, 1);
 const circuit2 = common + pipeDp("15", 8, q2) * 2 + kvDp(q2, 1);
 
 describe("design sizing of a two-radiator system (hand-checked)", () => {
-  const r = run();
-  const heating = r.modes.find((m) => m.mode === "heating")!;
+  const sized = perTest(() => {
+    const r = run();
+    return { r, heating: r.modes.find((m) => m.mode === "heating")! };
+  });
 
   it("load flows follow Q = P/(ρ·cp·ΔT): 1000 W at 5 K ≈ 0.1738 m³/h", () => {
+    const { heating } = sized();
     expect(q1).toBeCloseTo(0.17383, 4);
     const byId = new Map(heating.parts.map((p) => [p.id, p]));
     expect(rel(byId.get("r1")!.flowM3h, q1)).toBeLessThan(FLOW);
@@ -54,6 +58,7 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   });
 
   it("pipe flows by continuity, pressure drops by Darcy–Weisbach", () => {
+    const { heating } = sized();
     const pipes = new Map(heating.pipes.map((p) => [p.id, p]));
     expect(rel(pipes.get("p2")!.flowM3h, q1)).toBeLessThan(FLOW);
     expect(rel(pipes.get("p3")!.flowM3h, q2)).toBeLessThan(FLOW);
@@ -65,6 +70,7 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   });
 
   it("circuits: sums of their elements, the larger is the index, the other gets a balancing Kv", () => {
+    const { heating } = sized();
     const c1 = heating.circuits.find((c) => c.load === "r1")!;
     const c2 = heating.circuits.find((c) => c.load === "r2")!;
     // Hand numbers: r1 ≈ 4.786 kPa (valve 2.995 kPa dominates), r2 ≈ 2.318 kPa.
@@ -80,6 +86,7 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   });
 
   it("pump: required = index circuit, available read off the curve at design flow", () => {
+    const { heating } = sized();
     expect(heating.pump!.id).toBe("pump");
     expect(rel(heating.pump!.requiredHeadKpa, circuit1)).toBeLessThan(DP);
     expect(rel(heating.pump!.availableHeadKpa, 40 - 10 * q)).toBeLessThan(FLOW); // first segment: 40 → 35 kPa over 0.5 m³/h
@@ -87,6 +94,7 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   });
 
   it("expansion vessel per EN 12828 from the system volume: V_n 6.18 L against the 8 L drawn", () => {
+    const { r } = sized();
     const ev = r.expansionVessel!;
     // Pipes: 22 mm d_i 20.2 (13 m), 15 mm d_i 13.6 (22.8 m) + heat pump 2 L + radiators 6 L and 3 L.
     const vol = 13 * litresPerM(COPPER_ID_MM["22"]) + 22.8 * litresPerM(COPPER_ID_MM["15"]) + 2 + 9;
@@ -100,6 +108,7 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   });
 
   it("emitters: EN 442 output at 45/40/20 = 0.3538 × Φ50 (references §7, logarithmic mean)", () => {
+    const { r } = sized();
     const e1 = r.emitters.find((e) => e.id === "r1")!;
     expect(e1.outputAtDesignW! / 3000).toBeCloseTo(0.3538, 4);
     expect(rel(e1.outputAtDesignW, en442LogW(3000, 1.3, 45, 40, 20))).toBeLessThan(1e-9);
@@ -107,6 +116,7 @@ describe("design sizing of a two-radiator system (hand-checked)", () => {
   });
 
   it("simulated 'all zones open': the pump on its curve pushes more than design, in the same split", () => {
+    const { r } = sized();
     const s = r.scenarios.find((x) => x.name === "all zones open")!;
     expect(s.converged).toBe(true);
     expect(s.heatSourceFlowM3h!).toBeGreaterThan(q);
@@ -145,17 +155,21 @@ describe("design sizing with a fixed bypass beside the radiator (hand-checked)",
   const dpTees = cu22(qRad, 10) + kv40(qRad, 1.5);
   // bypass flow: the q with cu22(q, 1 m) + Kv-drop(q, 0.5) = dpTees, by bisection
   const qBypass = bisect((x) => cu22(x, 1) + kv40(x, 0.5) - dpTees, 1e-6, 2);
-  const results = run(doc);
-  const heating = results.modes.find((m) => m.mode === "heating")!;
-  const pipe = (id: string) => heating.pipes.find((p) => p.id === id)!;
+  const bypassed = perTest(() => {
+    const results = run(doc);
+    const heating = results.modes.find((m) => m.mode === "heating")!;
+    return { heating, pipe: (id: string) => heating.pipes.find((p) => p.id === id)! };
+  });
 
   it("the bypass carries flow from the flow tee to the return tee, as the Δp across the radiator branch drives", () => {
+    const { pipe } = bypassed();
     expect(qBypass).toBeGreaterThan(0.05); // a material flow: a backwards or zero answer cannot pass
     expect(rel(pipe("x1").flowM3h, qBypass)).toBeLessThan(DP);
     expect(rel(pipe("p2").flowM3h, qRad)).toBeLessThan(FLOW);
   });
 
   it("the heat source carries radiator + bypass, and its required head is the index circuit with that flow", () => {
+    const { heating } = bypassed();
     const total = qRad + qBypass;
     expect(rel(heating.heatSourceFlowM3h, total)).toBeLessThan(DP);
     const required = kv40(total, 4) + cu22(total, 4) + dpTees;
