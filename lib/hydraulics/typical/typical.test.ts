@@ -10,6 +10,7 @@ import { calculate } from "@/lib/hydraulics/calculate";
 import { fluidProperties } from "@/lib/hydraulics/fluids";
 import { resultsSchema, type Results } from "@/lib/schematic/results";
 import { smallSystem, type SmallSystem } from "@/lib/hydraulics/testing/small-system";
+import { perTest } from "@/lib/hydraulics/testing/per-test";
 
 function run(change: (d: SmallSystem) => void): Results {
   const d = smallSystem();
@@ -22,10 +23,13 @@ const part = (d: SmallSystem, id: string) => d.parts.find((p) => p.id === id)!;
 const heating = (r: Results) => r.modes.find((m) => m.mode === "heating")!;
 
 describe("heat pump without a Kv (the small system: 3 kW heat pump, 1.5 kW of radiators)", () => {
-  const typical = run((d) => delete part(d, "hp").props!.kv);
-  const negligible = run((d) => (part(d, "hp").props!.kv = 1000)); // 1000 m³/h at 1 bar: < 1e-5 kPa here
+  const sized = perTest(() => ({
+    typical: run((d) => delete part(d, "hp").props!.kv),
+    negligible: run((d) => (part(d, "hp").props!.kv = 1000)), // 1000 m³/h at 1 bar: < 1e-5 kPa here
+  }));
 
   it("gets the assumption finding naming the heat pump", () => {
+    const { typical } = sized();
     const f = typical.findings.find((x) => x.code === "input.assumed-values");
     expect(f?.severity).toBe("warning");
     expect(f?.refs).toContain("hp");
@@ -34,6 +38,7 @@ describe("heat pump without a Kv (the small system: 3 kW heat pump, 1.5 kW of ra
   });
 
   it("its head includes the typical exchanger drop: 20 kPa at rated flow → 20·(1.5/3)² = 5 kPa at the design flow", () => {
+    const { typical, negligible } = sized();
     // Table basis (common practice): the exchanger loses 20 kPa at the rated flow, the rated
     // output at the design ΔT. Same fluid and ΔT, so the flows scale with the heat and the
     // quadratic Kv law gives 20 kPa × (1500 W / 3000 W)² = 5 kPa at the design flow.
@@ -45,6 +50,7 @@ describe("heat pump without a Kv (the small system: 3 kW heat pump, 1.5 kW of ra
   });
 
   it("the numbers resting on it are marked, those that do not are not", () => {
+    const { typical, negligible } = sized();
     const h = heating(typical);
     expect(h.pump!.restsOn).toContain("hp.kv");
     for (const c of h.circuits) expect(c.restsOn).toContain("hp.kv");
@@ -57,16 +63,17 @@ describe("heat pump without a Kv (the small system: 3 kW heat pump, 1.5 kW of ra
 });
 
 describe("an isolation valve without a Kv: a full-bore ball valve, K = 3·fT (Crane TP-410)", () => {
-  const r = run((d) => {
+  const valved = perTest(() => run((d) => {
     d.parts.push({ id: "iso", type: "isolation-valve", props: {} });
     d.pipes.find((p) => p.id === "p1")!.to = "iso.a";
     d.pipes.push({ id: "p1b", from: "iso.b", to: "tf.a", material: "copper", size: "22", lengthM: 0.2 });
-  });
+  }));
   it("loses (q/Kv)² bar with Kv = 3600·A·√(200/K) at the 20.2 mm bore of its 22 mm pipes", () => {
     // Crane TP-410 Appendix A: ball valve K = 3·fT; fT of ¾" = 0.025 (the 22 mm copper bore is
     // nearest the ¾" Sch 40 bore). Kv from the definitions: Δp = K·ρv²/2 = (Q/Kv)² bar·ρ/1000.
     const kv = 3600 * ((Math.PI * 0.0202 ** 2) / 4) * Math.sqrt(200 / (3 * 0.025));
     const water = fluidProperties({ kind: "water" }, 42.5);
+    const r = valved();
     const h = heating(r);
     const q = h.parts.find((p) => p.id === "iso")!.flowM3h!;
     expect(h.parts.find((p) => p.id === "iso")!.pressureDropKpa!).toBeCloseTo(100 * (q / kv) ** 2 * (water.densityKgM3 / 1000), 9);
@@ -93,12 +100,13 @@ describe("water content left empty", () => {
 });
 
 describe("a boiler without a Kv: no typical value is safe", () => {
-  const r = run((d) => {
+  const boiler = perTest(() => run((d) => {
     const hp = part(d, "hp");
     hp.type = "boiler";
     delete hp.props!.kv;
-  });
+  }));
   it("warns that the head required excludes its own drop, and assumes nothing", () => {
+    const r = boiler();
     const f = r.findings.find((x) => x.code === "input.source-dp-excluded");
     expect(f).toMatchObject({ severity: "warning", refs: ["hp"] });
     expect(f!.message).toMatch(/excludes/);
