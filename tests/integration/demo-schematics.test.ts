@@ -10,23 +10,26 @@
  */
 import fs from "node:fs";
 import path from "node:path";
-import { describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
 import { resultsSchema, type Results } from "@/lib/schematic/results";
 
 const dir = path.join(process.cwd(), "db/seeds/data");
 const FILES = ["millbrook-hall.json", "orchard-end-bypass-only.json", "orchard-end-buffer-40l.json"];
 
+/** Sized inside the tests (a describe's beforeEach runs as part of each test), never while the file is collected. */
 function run(file: string): Results {
   const r = calculate(JSON.parse(fs.readFileSync(path.join(dir, file), "utf8")));
   if (!r.ok) throw new Error(`${file}: ${JSON.stringify(r.issues)}`);
   resultsSchema.parse(r.results);
   return r.results;
 }
-const results = new Map(FILES.map((f) => [f, run(f)]));
 
 describe.each(FILES)("demo schematic %s", (file) => {
-  const r = results.get(file)!;
+  let r: Results;
+  beforeEach(() => {
+    r = run(file);
+  });
   const doc = JSON.parse(fs.readFileSync(path.join(dir, file), "utf8")) as { parts: { id: string; type: string }[] };
 
   it("calculates ok", () => {
@@ -69,11 +72,11 @@ describe.each(FILES)("demo schematic %s", (file) => {
 
 describe("Orchard End variants", () => {
   it("'with 40 L buffer' holds more system water than 'bypass only'", () => {
-    const buffer = results.get("orchard-end-buffer-40l.json")!.volume.systemL!;
-    const bypass = results.get("orchard-end-bypass-only.json")!.volume.systemL!;
+    const withBuffer = run("orchard-end-buffer-40l.json");
+    const bypassOnly = run("orchard-end-bypass-only.json");
+    const buffer = withBuffer.volume.systemL!;
+    const bypass = bypassOnly.volume.systemL!;
     expect(buffer).toBeGreaterThan(bypass);
-    expect(results.get("orchard-end-buffer-40l.json")!.expansionVessel!.systemVolumeL!).toBeGreaterThan(
-      results.get("orchard-end-bypass-only.json")!.expansionVessel!.systemVolumeL!,
-    );
+    expect(withBuffer.expansionVessel!.systemVolumeL!).toBeGreaterThan(bypassOnly.expansionVessel!.systemVolumeL!);
   });
 });

@@ -27,8 +27,9 @@ import { spawnSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
+import { documentSet } from "@/lib/hydraulics/testing/document-set";
 import { bisect, curveHeadKpa, darcyFriction, en442LogW, flowM3h, kvDpKpa, kvForDp, pipeFlow } from "@/lib/hydraulics/testing/hand-calc";
 import { repeatedFindings } from "@/lib/hydraulics/testing/repeated-findings";
 
@@ -97,8 +98,11 @@ function nonFinitePaths(x: unknown, at = "results"): string[] {
   if (x && typeof x === "object") return Object.entries(x).flatMap(([k, v]) => nonFinitePaths(v, `${at}.${k}`));
   return [];
 }
-/** Every results document produced in this file, for the "null only with a finding" sweep at the end. */
-const ALL_RESULTS: { label: string; r: AnyR }[] = [];
+/**
+ * Every document this file sizes with run(), for the "null only with a finding" sweep at the end. The engine
+ * runs only inside tests (in an it, or a describe's beforeEach): registered builders are plain data.
+ */
+const DOCS = documentSet();
 function run(d: unknown): AnyR {
   let out: AnyR;
   expect(() => {
@@ -108,8 +112,6 @@ function run(d: unknown): AnyR {
   const r = out.results;
   expect(nonFinitePaths(r)).toEqual([]);
   expect(JSON.parse(JSON.stringify(r))).toEqual(r); // JSON round trip is lossless
-  const ids = ((d as AnyR)?.parts ?? []).map((p: AnyR) => p.id).join(",");
-  ALL_RESULTS.push({ label: `doc #${ALL_RESULTS.length} [${ids.slice(0, 60)}]`, r });
   return r;
 }
 
@@ -222,8 +224,13 @@ function loop1DpKpa(q: number) {
 }
 
 describe("Case 1 — heat pump + pump + radiator, one loop (45/35 °C)", () => {
-  const r = run(case1());
-  const h = mode(r);
+  const make = DOCS.add(case1);
+  let r: AnyR;
+  let h: AnyR;
+  beforeEach(() => {
+    r = run(make());
+    h = mode(r);
+  });
 
   it("fluid at the mean temperature 40 °C (IAPWS, references §1.1)", () => {
     expect(r.fluid.temperatureC).toBeCloseTo(40, 9);
@@ -388,7 +395,11 @@ function case2(): Json {
 // common: 16 m Cu22 at 0.21703 + hp (0.21703/5)²·99.22 = 0.187 kPa
 // excess of r2 = branch1 − branch2 (common cancels); balancing Kv = q2/√(excess/100·1000/ρ)
 describe("Case 2 — two radiators in parallel on tees: index circuit, excess and balancing Kv", () => {
-  const r = run(case2());
+  const make = DOCS.add(case2);
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const q1 = flowM3h(1500, 10, W40);
   const q2 = flowM3h(1000, 10, W40);
   const br1 = pipeFlow(q1, 13.6, CU_EPS, 12, W40).dpKpa + kvDpKpa(q1, 0.8, W40.rho);
@@ -456,17 +467,19 @@ describe("Case 2 — two radiators in parallel on tees: index circuit, excess an
 });
 
 describe("Case 2b — a balancing valve with kv null (\"compute the preset\") in the r2 branch", () => {
-  const d = case2() as AnyR;
-  d.parts.push(P("bv2", "balancing-valve", { kv: null }));
-  d.pipes = d.pipes.filter((p: AnyR) => p.id !== "b2");
-  d.pipes.push(cu("b2a", "r2.return", "bv2.a", "15", 1), cu("b2b", "bv2.b", "tr.b", "15", 1));
-  const r = run(d);
+  const make = DOCS.add(() => {
+    const d = case2() as AnyR;
+    d.parts.push(P("bv2", "balancing-valve", { kv: null }));
+    d.pipes = d.pipes.filter((p: AnyR) => p.id !== "b2");
+    d.pipes.push(cu("b2a", "r2.return", "bv2.a", "15", 1), cu("b2b", "bv2.b", "tr.b", "15", 1));
+    return d;
+  });
   const q1 = flowM3h(1500, 10, W40);
   const q2 = flowM3h(1000, 10, W40);
   const br1 = pipeFlow(q1, 13.6, CU_EPS, 12, W40).dpKpa + kvDpKpa(q1, 0.8, W40.rho);
   const br2 = pipeFlow(q2, 13.6, CU_EPS, 4, W40).dpKpa + kvDpKpa(q2, 2.0, W40.rho);
   it("the r2 circuit passes bv2; its preset = the Kv that burns the excess, q2/√(excess/100·1000/ρ)", () => {
-    const c2 = circ(r, "r2");
+    const c2 = circ(run(make()), "r2");
     expect(c2.path).toContain("bv2");
     near(c2.balancingKv, kvForDp(q2, br1 - br2, W40.rho), 2e-2, "balancingKv");
   });
@@ -502,7 +515,11 @@ function case3(): Json {
 // l3 in d 12 mm: v = 9.6455e-6/1.131e-4 = 0.08528 m/s, Re = 1556 → LAMINAR, f = 64/Re, roughness does not matter:
 // Δp = 32·μ·L·v/d² = 32·(992.216·0.6578e-6)·100·0.08528/0.012² = 1.237 kPa
 describe("Case 3 — manifold with 3 UFH loops", () => {
-  const r = run(case3());
+  const make = DOCS.add(case3);
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const spec = [
     { id: "l1", w: 200, len: 60 },
     { id: "l2", w: 300, len: 80 },
@@ -575,7 +592,11 @@ const qB = flowM3h(1000, 10, W40); // 0.086811 m³/h
 const zoneDp = (q: number) => pipeFlow(q, 13.6, CU_EPS, 10, W40).dpKpa + kvDpKpa(q, 4, W40.rho) + kvDpKpa(q, 1.0, W40.rho);
 
 describe("Case 4 — zone valve drawn shut (open=false) and the zone scenarios", () => {
-  const r = run(zonesDoc(false, 25));
+  const make = DOCS.add(() => zonesDoc(false, 25));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
 
   it("heating mode uses zone valves AS DRAWN: zone B gets no design flow, the heat source carries zone A only", () => {
     near(pipeR(r, "a1").flowM3h, qA, 3e-3, "zone A");
@@ -615,8 +636,9 @@ describe("Case 4 — zone valve drawn shut (open=false) and the zone scenarios",
     }
   });
 
+  const bAlone = DOCS.add(() => zonesDoc(false, 25, { scenarios: [{ name: "B alone", valves: { zv1: false, zv2: true } }] }));
   it("named scenarios replace the default list: {name:'B alone', valves:{zv1:false, zv2:true}}", () => {
-    const r2 = run(zonesDoc(false, 25, { scenarios: [{ name: "B alone", valves: { zv1: false, zv2: true } }] }));
+    const r2 = run(bAlone());
     expect(r2.scenarios.map((s: AnyR) => s.name)).toEqual(["B alone"]);
     const s = r2.scenarios[0];
     expect(scenEm(s, "rB").flowM3h).toBeGreaterThan(0.05);
@@ -653,7 +675,11 @@ function case5(position: "a" | "b"): Json {
   );
 }
 describe("Case 5 — diverter with a cylinder: heating and hot-water modes, reheat time", () => {
-  const r = run(case5("a"));
+  const make = DOCS.add(() => case5("a"));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const qRad = flowM3h(4000, 10, W40); // 0.34724 m³/h
   const qHw = flowM3h(6000, 10, W40); // 0.52087 m³/h: heat source at its rated 6 kW (contract)
 
@@ -678,8 +704,9 @@ describe("Case 5 — diverter with a cylinder: heating and hot-water modes, rehe
     near(circ(r, "cyl", "hot-water").pressureDropKpa, dp, 1.5e-2, "coil circuit Δp");
   });
 
+  const drawnAtCylinder = DOCS.add(() => case5("b"));
   it("a diverter DRAWN at the cylinder (position b) still goes to the heating side in heating mode", () => {
-    const rb = run(case5("b"));
+    const rb = run(drawnAtCylinder());
     near(pipeR(rb, "h1").flowM3h, qRad, 3e-3, "h1 heating");
     dry(pipeR(rb, "c1").flowM3h);
     near(pipeR(rb, "c1", "hot-water").flowM3h, qHw, 3e-3, "c1 hot-water");
@@ -706,8 +733,9 @@ describe("Case 5 — diverter with a cylinder: heating and hot-water modes, rehe
  * Case 6 — differential bypass: recommendation and set value          *
  * ================================================================== */
 describe("Case 6 — dp bypass valve", () => {
+  const openingNull = DOCS.add(() => zonesDoc(true, null));
   it("openingKpa null → recommendation above the zones' design Δp across its ends", () => {
-    const r = run(zonesDoc(true, null));
+    const r = run(openingNull());
     // across the bypass ends (mf ↔ mr) at design: the larger zone branch, zone A:
     // 10 m Cu15 at 0.10417 (≈0.40 kPa) + zv Kv 4 (0.067 kPa) + valve Kv 1 (1.077 kPa) ≈ 1.55 kPa
     const across = Math.max(zoneDp(qA), zoneDp(qB));
@@ -737,11 +765,12 @@ describe("Case 6 — dp bypass valve", () => {
     20 + kvDpKpa(q, 5, W40.rho) + pipeFlow(q, 20.2, CU_EPS, 6, W40).dpKpa + pipeFlow(q, 13.6, CU_EPS, 1, W40).dpKpa;
   const qShut = bisect((q) => 40 - 20 * q - bypassLoop(q), 0.01, 1.0);
 
+  const opening20 = DOCS.add(() => zonesDoc(true, 20));
   it("openingKpa 20 → heat-source flow with all zones shut where the pump curve meets the bypass loop", () => {
-    const r = run(zonesDoc(true, 20));
+    const r = run(opening20());
     expect(qShut).toBeGreaterThan(0.6); // ≈ 0.78 m³/h
     // the recommendation does not depend on the opening drawn: the same as with openingKpa null
-    expect(r.bypass.recommendedOpeningKpa).toBeCloseTo(run(zonesDoc(true, null)).bypass.recommendedOpeningKpa, 9);
+    expect(r.bypass.recommendedOpeningKpa).toBeCloseTo(run(openingNull()).bypass.recommendedOpeningKpa, 9);
     // ±3 %: the bypass characteristic above its opening is "≈ openingKpa" (Kvs 20 term ≈ 0.15 kPa)
     near(r.bypass.heatSourceFlowAllZonesClosedM3h, qShut, 3e-2, "heatSourceFlowAllZonesClosedM3h");
     expect(r.bypass.minFlowMet).toBe(true); // minFlowM3h 0.5
@@ -749,8 +778,9 @@ describe("Case 6 — dp bypass valve", () => {
     near(s.heatSourceFlowM3h, qShut, 3e-2, "scenario all zones shut");
   });
 
+  const minFlowHigh = DOCS.add(() => zonesDoc(true, 20, {}, { minFlowM3h: 1.2 }));
   it("minFlowM3h above that flow → minFlowMet false with a finding naming the heat source", () => {
-    const r = run(zonesDoc(true, 20, {}, { minFlowM3h: 1.2 }));
+    const r = run(minFlowHigh());
     expect(r.bypass.minFlowMet).toBe(false);
     const f = r.findings.filter((x: AnyR) => /min-flow/.test(x.code));
     expect(f.length).toBeGreaterThan(0);
@@ -782,7 +812,11 @@ function case7(header: "buffer-vessel" | "low-loss-header"): Json {
 describe("Case 7 — buffer / low-loss header separates primary and secondary", () => {
   for (const header of ["buffer-vessel", "low-loss-header"] as const) {
     describe(header, () => {
-      const r = run(case7(header));
+      const make = DOCS.add(() => case7(header));
+      let r: AnyR;
+      beforeEach(() => {
+        r = run(make());
+      });
       const qRad = flowM3h(4000, 10, W40);
       const secDp = pipeFlow(qRad, 20.2, CU_EPS, 17, W40).dpKpa + kvDpKpa(qRad, 2.5, W40.rho);
 
@@ -821,13 +855,15 @@ describe("Case 7 — buffer / low-loss header separates primary and secondary", 
 });
 
 describe("Case 7b — zone valve on the secondary of a buffer: the heat source is protected (no 'can all shut' naming hp)", () => {
-  const d = case7("buffer-vessel") as AnyR;
-  d.parts.push(P("zv", "zone-valve", { kvs: 4 }));
-  d.pipes = d.pipes.filter((p: AnyR) => p.id !== "s2");
-  d.pipes.push(cu("s2a", "pu.out", "zv.a", "22", 4), cu("s2b", "zv.b", "rad.flow", "22", 4));
-  const r = run(d);
+  const make = DOCS.add(() => {
+    const d = case7("buffer-vessel") as AnyR;
+    d.parts.push(P("zv", "zone-valve", { kvs: 4 }));
+    d.pipes = d.pipes.filter((p: AnyR) => p.id !== "s2");
+    d.pipes.push(cu("s2a", "pu.out", "zv.a", "22", 4), cu("s2b", "zv.b", "rad.flow", "22", 4));
+    return d;
+  });
   it("no zones.can-all-shut naming hp", () => {
-    expect(findingsWith(r, "zones.can-all-shut").filter((f: AnyR) => f.refs.includes("hp"))).toEqual([]);
+    expect(findingsWith(run(make()), "zones.can-all-shut").filter((f: AnyR) => f.refs.includes("hp"))).toEqual([]);
   });
 });
 
@@ -857,8 +893,10 @@ function case8(vesselL: number, minSystemVolumeL: number | null): Json {
 // V_n = 3.6354·3.5/1.8 = 7.07 L (7.48 L at p0 0.8)
 describe("Case 8 — expansion vessel (EN 12828 Annex D) compared with the drawn vessel", () => {
   const vs = 40 * litresPerM(26.2) + litresPerM(13.6) + 23;
+  const drawn6 = DOCS.add(() => case8(6, null));
+  const drawn10 = DOCS.add(() => case8(10, null));
   it("6 L drawn: too small → ok false and vessel finding naming ev", () => {
-    const r = run(case8(6, null));
+    const r = run(drawn6());
     near(vs, 44.71, 1e-3, "hand V_s");
     const ev = r.expansionVessel;
     near(ev.systemVolumeL, vs, 5e-3, "systemVolumeL");
@@ -872,11 +910,11 @@ describe("Case 8 — expansion vessel (EN 12828 Annex D) compared with the drawn
     expect(f.some((x: AnyR) => x.refs.includes("ev"))).toBe(true);
   });
   it("10 L drawn: ok", () => {
-    const r = run(case8(10, null));
+    const r = run(drawn10());
     expect(r.expansionVessel.ok).toBe(true);
     expect(codes(r)).not.toContain("vessel.too-small");
   });
-  it("references §8.1 worked example A: V_s 200 L (pipes + buffer), 10→55 °C, 5 m, SV 3 bar → 11.36 L (p0 0.7) … 12.03 L (p0 0.8)", () => {
+  const exampleA = DOCS.add(() => {
     // build V_s = 200 L exactly: 40 m Cu 28 = 21.565 L + 1 m Cu 15 0.145 L + hp 3 L + rad 20 L → buffer makes up the rest
     const d = case8(12, null) as AnyR;
     const rest = 200 - vs;
@@ -884,7 +922,10 @@ describe("Case 8 — expansion vessel (EN 12828 Annex D) compared with the drawn
     // buffer drawn unconnected would raise part.unconnected; put it in series on the return (p1/p2 = primary pass)
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "h");
     d.pipes.push(cu("h1", "t.b", "buf.p1", "28", 0.0001), cu("h2", "buf.p2", "hp.return", "28", 0.0001));
-    const r = run(d);
+    return d;
+  });
+  it("references §8.1 worked example A: V_s 200 L (pipes + buffer), 10→55 °C, 5 m, SV 3 bar → 11.36 L (p0 0.7) … 12.03 L (p0 0.8)", () => {
+    const r = run(exampleA());
     near(r.expansionVessel.systemVolumeL, 200, 5e-3, "systemVolumeL");
     expect(r.expansionVessel.requiredVolumeL).toBeGreaterThanOrEqual(11.36 * 0.995);
     expect(r.expansionVessel.requiredVolumeL).toBeLessThanOrEqual(12.03 * 1.005);
@@ -893,8 +934,10 @@ describe("Case 8 — expansion vessel (EN 12828 Annex D) compared with the drawn
 
 describe("Case 9 — system volume vs the heat source's minSystemVolumeL", () => {
   const vs = 40 * litresPerM(26.2) + litresPerM(13.6) + 23; // 44.71 L
+  const min150 = DOCS.add(() => case8(10, 150));
+  const min30 = DOCS.add(() => case8(10, 30));
   it("minimum 150 L > 44.71 L → bufferRecommended, finding naming hp", () => {
-    const r = run(case8(10, 150));
+    const r = run(min150());
     near(r.volume.systemL, vs, 5e-3, "systemL");
     expect(r.volume.minimumL).toBe(150);
     expect(r.volume.bufferRecommended).toBe(true);
@@ -902,7 +945,7 @@ describe("Case 9 — system volume vs the heat source's minSystemVolumeL", () =>
     expect(f.length).toBeGreaterThan(0);
   });
   it("minimum 30 L ≤ 44.71 L → no buffer needed", () => {
-    const r = run(case8(10, 30));
+    const r = run(min30());
     expect(r.volume.bufferRecommended).toBe(false);
     expect(r.findings.filter((x: AnyR) => /volume/.test(x.code) && x.severity !== "info")).toEqual([]);
   });
@@ -926,7 +969,11 @@ function case10(fluid: Json, minOutdoorTemperatureC: number | null): Json {
 describe("Case 10 — propylene glycol 30 % vol: properties at the mean 40 °C, flows, frost", () => {
   // ASHRAE PG table (refs §2.2, by volume) at 40 °C, 30 %: ρ 1018.4 kg/m³, cp 3.90 kJ/(kg·K); μ ≈ 1.62 mPa·s (APG)
   const pg = { kind: "propylene-glycol", percentByVolume: 30 };
-  const r = run(case10(pg, -20));
+  const make = DOCS.add(() => case10(pg, -20));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   it("ρ 1018.4 (±0.5 %), cp 3900 (±1.5 %), ν = 1.62e-3/1018.4 = 1.59e-6 m²/s (±10 %)", () => {
     // tolerances: ASHRAE vs Melinder datasets differ ~0.5 % ρ, ~1 % cp, ~5–10 % μ (refs §2.3 note)
     near(r.fluid.densityKgM3, 1018.4, 5e-3, "ρ");
@@ -942,12 +989,14 @@ describe("Case 10 — propylene glycol 30 % vol: properties at the mean 40 °C, 
     expect(f.length).toBeGreaterThan(0);
     expect(f.some((x: AnyR) => x.refs.includes("hp"))).toBe(true);
   });
+  const site8 = DOCS.add(() => case10(pg, -8));
+  const waterSite10 = DOCS.add(() => case10({ kind: "water" }, -10));
   it("strong enough for a −8 °C site: no frost warning", () => {
-    const r2 = run(case10(pg, -8));
+    const r2 = run(site8());
     expect(r2.findings.filter((x: AnyR) => /frost|glycol/.test(x.code) && x.severity !== "info")).toEqual([]);
   });
   it("plain water at a −10 °C site: frost warning", () => {
-    const r3 = run(case10({ kind: "water" }, -10));
+    const r3 = run(waterSite10());
     expect(r3.findings.filter((x: AnyR) => /frost|glycol/.test(x.code) && x.severity !== "info").length).toBeGreaterThan(0);
   });
 });
@@ -971,7 +1020,11 @@ describe("Case 11 — boiler type, 70/50 °C (mean 60 °C)", () => {
     [cu("f1", "b.flow", "pu.in", "22", 2), cu("f2", "pu.out", "hl.flow", "22", 10), cu("r1", "hl.return", "b.return", "22", 12)],
     { flowTemperatureC: 70, returnTemperatureC: 50 },
   );
-  const r = run(d);
+  const make = DOCS.add(() => structuredClone(d));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const q = flowM3h(10000, 20, W60); // 10000/(983.196·4185·20)·3600 = 0.43745 m³/h
   it("fluid at 60 °C; q = 0.43745 m³/h; circuit Δp = 24 m Cu 22 + boiler Kv 6 + load Kv 4; pump = pu", () => {
     near(r.fluid.densityKgM3, W60.rho, 5e-4, "ρ 60 °C");
@@ -1004,7 +1057,11 @@ describe("Case 12 — innerDiameterMm / roughnessMm overrides against references
     ],
     { flowTemperatureC: 55, returnTemperatureC: 45, maxVelocityMps: 0.8, targetGradientPaPerM: 200 },
   );
-  const r = run(d);
+  const make = DOCS.add(() => structuredClone(d));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   it("flow 1.8 m³/h (0.5 L/s)", () => near(pipeR(r, "sa").flowM3h, 1.8, 3e-3, "flow"));
   it("catalogue steel DN25 (27.3 mm, ε 0.045): v 0.854, Re 42 159, f 0.02619, R 346 Pa/m (refs §3.4)", () => {
     const p = pipeR(r, "sa");
@@ -1039,10 +1096,13 @@ describe("Case 12 — innerDiameterMm / roughnessMm overrides against references
     expect(dn32.gradientPaPerM).toBeLessThan(200);
     expect(pipeR(r, "sa").suggestedSize).toBe("DN32");
   });
-  it("fittings add K·ρv²/2: 4 elbows on the DN25 pipe add 4·K with K in the published range 0.3–1.5 (Crane 30fT 0.69, Perry 0.75)", () => {
+  const elbows = DOCS.add(() => {
     const d2 = JSON.parse(JSON.stringify(d));
     d2.pipes[0].fittings = { elbow: 4 };
-    const r2 = run(d2);
+    return d2;
+  });
+  it("fittings add K·ρv²/2: 4 elbows on the DN25 pipe add 4·K with K in the published range 0.3–1.5 (Crane 30fT 0.69, Perry 0.75)", () => {
+    const r2 = run(elbows());
     const extra = (pipeR(r2, "sa").pressureDropKpa - pipeR(r, "sa").pressureDropKpa) * 1000;
     const kEach = extra / 4 / ((W50.rho * 0.854 ** 2) / 2);
     expect(kEach).toBeGreaterThan(0.3);
@@ -1070,7 +1130,11 @@ describe("Case C — catalogue inner diameters seen through velocity v = Q/(πd�
     prev = `j${i}.b`;
   });
   pipes.push(cu("cin", prev, "hl.flow", "22", 1), cu("cout", "hl.return", "hp.return", "22", 1));
-  const r = run(doc(parts, pipes));
+  const make = DOCS.add(() => structuredClone(doc(parts, pipes)));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   it.each(rows.map((row, i) => [i, ...row] as const))("c%i %s %s → d_i %f mm", (i, _m, _s, dMm) => {
     const v = Q1 / 3600 / ((Math.PI * (dMm / 1000) ** 2) / 4);
     // ±0.6 %: flow ±0.3 % plus catalogue rounding of d_i to 0.1 mm (±0.3 % on d² at 35 mm)
@@ -1086,39 +1150,52 @@ describe("Case C — catalogue inner diameters seen through velocity v = Q/(πd�
  * Case V — valves drawn shut / one-way, vessel max temperature        *
  * ================================================================== */
 describe("Case V — a shut isolation valve, a check valve drawn against the flow, maxFlowTemperatureC", () => {
-  it("isolation valve drawn open=false in the only loop: no design flow can pass → a finding naming the valve or the radiator, no NaN", () => {
+  const iv2Shut = DOCS.add(() => {
     const d = case1() as AnyR;
     d.parts.find((p: AnyR) => p.id === "iv2").props.open = false;
-    const r = run(d);
+    return d;
+  });
+  it("isolation valve drawn open=false in the only loop: no design flow can pass → a finding naming the valve or the radiator, no NaN", () => {
+    const r = run(iv2Shut());
     expect(r.findings.some((f: AnyR) => f.severity !== "info" && (f.refs.includes("iv2") || f.refs.includes("rad")))).toBe(true);
     const p8 = pipeR(r, "p8");
     expect(p8.flowM3h === null || Math.abs(p8.flowM3h) <= 1e-6).toBe(true);
   });
-  it("check valve drawn against the flow (its b on the pump side): a finding naming it or the radiator", () => {
+  const checkAgainst = DOCS.add(() => {
     const d = case1() as AnyR;
     d.parts.push(P("cv", "check-valve", { kv: 10 }));
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p4");
     d.pipes.push(cu("p4a", "pu.out", "cv.b", "22", 5), cu("p4b", "cv.a", "rad.flow", "22", 5));
-    const r = run(d);
+    return d;
+  });
+  it("check valve drawn against the flow (its b on the pump side): a finding naming it or the radiator", () => {
+    const r = run(checkAgainst());
     expect(r.findings.some((f: AnyR) => f.severity !== "info" && (f.refs.includes("cv") || f.refs.includes("rad")))).toBe(true);
   });
-  it("maxFlowTemperatureC 70 sizes the vessel for 10 → 70 °C: e = 2.244 % (refs §1.4)", () => {
+  const maxFlow70 = DOCS.add(() => {
     const d = case8(10, null) as AnyR;
     d.design.maxFlowTemperatureC = 70;
-    const r = run(d);
+    return d;
+  });
+  it("maxFlowTemperatureC 70 sizes the vessel for 10 → 70 °C: e = 2.244 % (refs §1.4)", () => {
+    const r = run(maxFlow70());
     const vs = 40 * litresPerM(26.2) + litresPerM(13.6) + 23;
     near(r.expansionVessel.expansionVolumeL, 0.02244 * vs, 1e-2, "expansionVolumeL");
   });
-  it("glycol expands more than water: PG 30 % vol, 10 → 55 °C, e between 1.1× and 1.6× water's 1.421 % (refs §8.1: ≈1.2–1.3×, from memory)", () => {
+  const glycolVessel = DOCS.add(() => {
     const d = case8(10, null) as AnyR;
     d.fluid = { kind: "propylene-glycol", percentByVolume: 30 };
-    const r = run(d);
+    return d;
+  });
+  it("glycol expands more than water: PG 30 % vol, 10 → 55 °C, e between 1.1× and 1.6× water's 1.421 % (refs §8.1: ≈1.2–1.3×, from memory)", () => {
+    const r = run(glycolVessel());
     const e = r.expansionVessel.expansionVolumeL / r.expansionVessel.systemVolumeL;
     expect(e).toBeGreaterThan(1.1 * 0.01421);
     expect(e).toBeLessThan(1.6 * 0.01421);
   });
+  const bypassRecommended = DOCS.add(() => zonesDoc(true, null));
   it("bypass with openingKpa null: the all-zones-shut flow is found at the RECOMMENDED opening (hand bisection)", () => {
-    const r = run(zonesDoc(true, null));
+    const r = run(bypassRecommended());
     const o = r.bypass.recommendedOpeningKpa;
     const loop = (q: number) => o + kvDpKpa(q, 5, W40.rho) + pipeFlow(q, 20.2, CU_EPS, 6, W40).dpKpa + pipeFlow(q, 13.6, CU_EPS, 1, W40).dpKpa;
     const q = bisect((x) => 40 - 20 * x - loop(x), 0.01, 1.99);
@@ -1133,7 +1210,11 @@ describe("Case E — emitter output at design (EN 442) and a load's own ΔT", ()
   const d = case2() as AnyR;
   d.parts.find((p: AnyR) => p.id === "r1").props = { outputAtDt50W: 2000, exponentN: 1.3, roomTemperatureC: 20, heatLoadW: 800, valveKv: 0.8, deltaTK: 5 };
   d.parts.find((p: AnyR) => p.id === "r2").props = { outputAtDt50W: 3000, exponentN: 1.3, roomTemperatureC: 20, heatLoadW: 800, valveKv: 2.0, deltaTK: 5 };
-  const r = run(d);
+  const make = DOCS.add(() => structuredClone(d));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   it("45/40/20, n 1.3: Φ = 0.3538·Φ50 (log) / 0.3541 (arith) → 707.6 W < 800 W: undersized; 1061 W ≥ 800 W: ok", () => {
     const e1 = r.emitters.find((e: AnyR) => e.id === "r1");
     const e2 = r.emitters.find((e: AnyR) => e.id === "r2");
@@ -1158,93 +1239,122 @@ describe("Case F — findings the issue lists", () => {
   const base = () => case1() as AnyR;
   const refsOf = (r: AnyR, code: string) => findingsWith(r, code).flatMap((f: AnyR) => f.refs);
 
-  it("unconnected part → part.unconnected naming it", () => {
+  const lonely = DOCS.add(() => {
     const d = base();
     d.parts.push(P("lonely", "radiator", { heatLoadW: 500 }));
-    expect(refsOf(run(d), "part.unconnected")).toContain("lonely");
+    return d;
   });
-  it("unconnected port → finding naming the part (radiator with only its flow piped)", () => {
+  it("unconnected part → part.unconnected naming it", () => {
+    expect(refsOf(run(lonely()), "part.unconnected")).toContain("lonely");
+  });
+  const halfPiped = DOCS.add(() => {
     const d = base();
     d.parts.push(P("half", "radiator", { heatLoadW: 500 }), P("t9", "tee"));
     // splice a tee into p4 so 'half.flow' can be fed
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p4");
     d.pipes.push(cu("p4a", "pu.out", "t9.a", "22", 5), cu("p4b", "t9.b", "rad.flow", "22", 5), cu("hx", "t9.c", "half.flow", "15", 1));
-    const r = run(d);
+    return d;
+  });
+  it("unconnected port → finding naming the part (radiator with only its flow piped)", () => {
+    const r = run(halfPiped());
     const f = r.findings.filter((x: AnyR) => /^part\.(open-port|unconnected)|port/.test(x.code) && x.refs.includes("half"));
     expect(f.length).toBeGreaterThan(0);
     // and it has no path back: a load with no return path
     expect(refsOf(r, "load.no-return-path")).toContain("half");
   });
-  it("a port with two pipes → port.two-pipes naming the part and both pipes", () => {
+  const twoPipes = DOCS.add(() => {
     const d = base();
     d.pipes.push(cu("dup", "hp.flow", "t1.c", "15", 1));
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p9");
     d.parts = d.parts.filter((p: AnyR) => p.id !== "ev");
-    const r = run(d);
+    return d;
+  });
+  it("a port with two pipes → port.two-pipes naming the part and both pipes", () => {
+    const r = run(twoPipes());
     const refs = refsOf(r, "port.two-pipes");
     expect(refs).toEqual(expect.arrayContaining(["hp", "p1", "dup"]));
   });
-  it("no heat source → system.no-heat-source", () => {
-    const d = doc(
+  const noHeatSource = DOCS.add(() =>
+    doc(
       [P("pu", "pump", { curve: CURVE1 }), P("hl", "heat-load", { heatLoadW: 1000, kv: 3 })],
       [cu("x1", "pu.out", "hl.flow", "22", 5), cu("x2", "hl.return", "pu.in", "22", 5)],
-    );
-    expect(codes(run(d))).toContain("system.no-heat-source");
+    ),
+  );
+  it("no heat source → system.no-heat-source", () => {
+    expect(codes(run(noHeatSource()))).toContain("system.no-heat-source");
   });
-  it("no pump (heat pump without a curve, no pump part) → system.no-pump", () => {
-    const d = doc(
+  const noPump = DOCS.add(() =>
+    doc(
       [P("hp", "heat-pump", { kv: 4 }), P("hl", "heat-load", { heatLoadW: 1000, kv: 3 })],
       [cu("x1", "hp.flow", "hl.flow", "22", 5), cu("x2", "hl.return", "hp.return", "22", 5)],
-    );
-    const r = run(d);
+    ),
+  );
+  it("no pump (heat pump without a curve, no pump part) → system.no-pump", () => {
+    const r = run(noPump());
     expect(codes(r)).toContain("system.no-pump");
   });
+  const noVesselNoValve = DOCS.add(() => case10({ kind: "water" }, null));
   it("no expansion vessel and no safety valve → both findings", () => {
-    const d = case10({ kind: "water" }, null);
-    const c = codes(run(d));
+    const c = codes(run(noVesselNoValve()));
     expect(c).toContain("system.no-expansion-vessel");
     expect(c).toContain("system.no-safety-valve");
   });
-  it("a load with no path back (return piped to a dead-end drain cock) → load.no-return-path naming it", () => {
+  const deadEnd = DOCS.add(() => {
     const d = base();
     d.parts.push(P("dead", "heat-load", { heatLoadW: 500, kv: 2 }), P("t9", "tee"), P("dc", "drain-cock"));
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p4");
     d.pipes.push(cu("p4a", "pu.out", "t9.a", "22", 5), cu("p4b", "t9.b", "rad.flow", "22", 5), cu("hx", "t9.c", "dead.flow", "15", 1), cu("hy", "dead.return", "dc.connection", "15", 1));
-    const r = run(d);
+    return d;
+  });
+  it("a load with no path back (return piped to a dead-end drain cock) → load.no-return-path naming it", () => {
+    const r = run(deadEnd());
     expect(refsOf(r, "load.no-return-path")).toContain("dead");
   });
-  it("a pump curve that does not reach the design flow → pump not ok, finding naming the pump", () => {
+  const weakPump = DOCS.add(() => {
     const d = base();
     d.parts.find((p: AnyR) => p.id === "pu").props.curve = [[0, 20], [0.05, 10], [0.1, 0]];
-    const r = run(d);
+    return d;
+  });
+  it("a pump curve that does not reach the design flow → pump not ok, finding naming the pump", () => {
+    const r = run(weakPump());
     expect(mode(r).pump.ok).toBe(false);
     const f = r.findings.filter((x: AnyR) => /^pump\./.test(x.code) && x.refs.includes("pu"));
     expect(f.length).toBeGreaterThan(0);
   });
-  it("zone valves that can all shut with no bypass or buffer → zones.can-all-shut naming the heat source and valves", () => {
+  const noBypass = DOCS.add(() => {
     const d = zonesDoc(true, 20) as AnyR;
     d.parts = d.parts.filter((p: AnyR) => p.id !== "bp");
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "y1" && p.id !== "y2");
     d.parts.find((p: AnyR) => p.id === "mf").props.outlets = 2;
     d.parts.find((p: AnyR) => p.id === "mr").props.outlets = 2;
-    const r = run(d);
+    return d;
+  });
+  const withBypass = DOCS.add(() => zonesDoc(true, 20));
+  it("zone valves that can all shut with no bypass or buffer → zones.can-all-shut naming the heat source and valves", () => {
+    const r = run(noBypass());
     expect(refsOf(r, "zones.can-all-shut")).toEqual(expect.arrayContaining(["hp", "zv1", "zv2"]));
     // and with the bypass (case 4/6 documents) the finding is absent
-    expect(codes(run(zonesDoc(true, 20)))).not.toContain("zones.can-all-shut");
+    expect(codes(run(withBypass()))).not.toContain("zones.can-all-shut");
   });
-  it("no strainer on the heat-source return → heat-source.no-strainer naming hp", () => {
+  const noStrainer = DOCS.add(() => {
     const d = base();
     d.parts = d.parts.filter((p: AnyR) => p.id !== "st");
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p6" && p.id !== "p7");
     d.pipes.push(cu("p67", "t1.b", "iv2.a", "22", 3));
-    expect(refsOf(run(d), "heat-source.no-strainer")).toContain("hp");
+    return d;
   });
-  it("no isolation either side of the heat source → heat-source.no-isolation naming hp", () => {
+  it("no strainer on the heat-source return → heat-source.no-strainer naming hp", () => {
+    expect(refsOf(run(noStrainer()), "heat-source.no-strainer")).toContain("hp");
+  });
+  const noIsolation = DOCS.add(() => {
     const d = base();
     d.parts = d.parts.filter((p: AnyR) => p.id !== "iv1");
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p1" && p.id !== "p2");
     d.pipes.push(cu("p12", "hp.flow", "t2.a", "22", 2));
-    expect(refsOf(run(d), "heat-source.no-isolation")).toContain("hp");
+    return d;
+  });
+  it("no isolation either side of the heat source → heat-source.no-isolation naming hp", () => {
+    expect(refsOf(run(noIsolation()), "heat-source.no-isolation")).toContain("hp");
   });
 });
 
@@ -1255,41 +1365,56 @@ describe("Case G — bad input", () => {
   // The base case already carries a warning (vessel.fill-pressure naming ev): every check below names
   // the finding it looks for, so the base case's own findings cannot pass it.
   const about = (r: AnyR, code: string) => findingsWith(r, code).map((f: AnyR) => [f.severity, f.refs]);
+  const negativeLength = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.pipes[3].lengthM = -4;
+    return d;
+  });
   it("negative pipe length → an input.pipe-length error naming p4, its Δp null", () => {
-    const d = case1() as AnyR;
-    d.pipes[3].lengthM = -4;
-    const r = run(d);
+    const r = run(negativeLength());
     expect(about(r, "input.pipe-length")).toEqual([["error", ["p4"]]]);
     expect(pipeR(r, "p4").pressureDropKpa).toBeNull();
   });
+  const zeroDiameter = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.pipes[3].innerDiameterMm = 0;
+    return d;
+  });
   it("zero inner-diameter override → an input.pipe-diameter error naming p4; its numbers null, never made up", () => {
-    const d = case1() as AnyR;
-    d.pipes[3].innerDiameterMm = 0;
-    const r = run(d);
+    const r = run(zeroDiameter());
     expect(about(r, "input.pipe-diameter")).toEqual([["error", ["p4"]]]);
     const p4 = pipeR(r, "p4");
     for (const k of ["velocityMps", "reynolds", "frictionFactor", "pressureDropKpa", "gradientPaPerM"]) expect(p4[k], k).toBeNull();
     near(p4.flowM3h, Q1, 3e-3, "p4 still carries the design flow");
   });
+  const deltaT0 = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.design.returnTemperatureC = 45;
+    return d;
+  });
   it("ΔT 0 (flow = return): an input.delta-t error for the document, and no mode is sized (no flow can be made up)", () => {
-    const d = case1() as AnyR;
-    d.design.returnTemperatureC = 45;
-    const r = run(d);
+    const r = run(deltaT0());
     expect(about(r, "input.delta-t")).toEqual([["error", []]]);
     expect(r.modes).toEqual([]);
     expect(r.scenarios).toEqual([]);
   });
+  const deltaTNegative = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.design.returnTemperatureC = 50;
+    return d;
+  });
   it("return warmer than flow (ΔT < 0): the same input.delta-t error, no mode sized", () => {
-    const d = case1() as AnyR;
-    d.design.returnTemperatureC = 50;
-    const r = run(d);
+    const r = run(deltaTNegative());
     expect(about(r, "input.delta-t")).toEqual([["error", []]]);
     expect(r.modes).toEqual([]);
   });
+  const risingCurve = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.parts.find((p: AnyR) => p.id === "pu").props.curve = [[0, 10], [1, 20], [2, 30]];
+    return d;
+  });
   it("a pump curve whose head rises with flow (over two segments) → one pump.curve-rising warning naming pu", () => {
-    const d = case1() as AnyR;
-    d.parts.find((p: AnyR) => p.id === "pu").props.curve = [[0, 10], [1, 20], [2, 30]];
-    expect(about(run(d), "pump.curve-rising")).toEqual([["warning", ["pu"]]]);
+    expect(about(run(risingCurve()), "pump.curve-rising")).toEqual([["warning", ["pu"]]]);
   });
   it("a pump curve of two points only → ok:false naming parts[3].props.curve", () => {
     const d = case1() as AnyR;
@@ -1312,10 +1437,13 @@ describe("Case G — bad input", () => {
     expect(out.ok).toBe(false);
     expect(out.issues.some((i: AnyR) => i.path === "pipes[0].from" && i.message.includes("pipes[0].from"))).toBe(true);
   });
+  const sizeNotInCatalogue = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.pipes[3].size = "DN25"; // a steel size on copper
+    return d;
+  });
   it("a pipe size not in the material's catalogue → an input.pipe-size error naming p4, its velocity null", () => {
-    const d = case1() as AnyR;
-    d.pipes[3].size = "DN25"; // a steel size on copper
-    const r = run(d);
+    const r = run(sizeNotInCatalogue());
     expect(about(r, "input.pipe-size")).toEqual([["error", ["p4"]]]);
     expect(pipeR(r, "p4").velocityMps).toBeNull();
   });
@@ -1343,30 +1471,36 @@ describe("Case G — bad input", () => {
       expect(out.issues.length).toBeGreaterThan(0);
     }
   });
+  const ghostValve = DOCS.add(() => zonesDoc(true, 20, { scenarios: [{ name: "ghost", valves: { nope: false } }] }));
   it("a scenario naming a valve that does not exist → a scenario.unknown-valve warning that names it; the scenario still runs", () => {
-    const r = run(zonesDoc(true, 20, { scenarios: [{ name: "ghost", valves: { nope: false } }] }));
+    const r = run(ghostValve());
     const f = findingsWith(r, "scenario.unknown-valve");
     expect(f).toHaveLength(1);
     expect(f[0].message).toContain("nope");
     expect(r.scenarios.map((s: AnyR) => s.name)).toEqual(["ghost"]);
   });
+  const hot105 = DOCS.add(() => {
+      const d = case1() as AnyR;
+      d.design.flowTemperatureC = 105;
+      d.design.returnTemperatureC = 95;
+    return d;
+  });
   it("105/95 °C: above what the vessel sizing takes → vessel.not-sizable error naming ev, vessel numbers null; flows still finite", () => {
-    const d = case1() as AnyR;
-    d.design.flowTemperatureC = 105;
-    d.design.returnTemperatureC = 95;
-    const r = run(d);
+    const r = run(hot105());
     expect(about(r, "vessel.not-sizable")).toEqual([["error", ["ev"]]]);
     expect(r.expansionVessel.requiredVolumeL).toBeNull();
     expect(r.expansionVessel.ok).toBeNull();
     expect(mode(r).heatSourceFlowM3h).toBeGreaterThan(0);
   });
+  // zone A branch ≈ 1.55 kPa across the bypass ends; opening 0.5 kPa means the bypass steals design flow
+  const openingLow = DOCS.add(() => zonesDoc(true, 0.5));
   it("bypass opening set BELOW the zones' design Δp → bypass.opening-low naming the bypass", () => {
-    // zone A branch ≈ 1.55 kPa across the bypass ends; opening 0.5 kPa means the bypass steals design flow
-    const r = run(zonesDoc(true, 0.5));
+    const r = run(openingLow());
     expect(about(r, "bypass.opening-low")).toEqual([["warning", ["bp"]]]);
   });
+  const empty = DOCS.add(() => doc([], []));
   it("an empty schematic calculates without NaN (nothing to size)", () => {
-    run(doc([], []));
+    run(empty());
   });
 });
 
@@ -1413,13 +1547,21 @@ describe.skipIf(process.env.LOOPWRIGHT_MUTATION === "1")("Case H — CLI: npx ts
  * Sweep — "null with a finding, never a made-up value"                *
  * ================================================================== */
 describe("Sweep — every null in every results document above is explained by a finding naming that id", () => {
+  // every document registered above, sized here again: the sweep depends on no other test having run
+  let allResults: { label: string; r: AnyR }[];
+  beforeEach(() => {
+    allResults = DOCS.all().map((d, i) => {
+      const ids = ((d as AnyR)?.parts ?? []).map((p: AnyR) => p.id).join(",");
+      return { label: `doc #${i} [${ids.slice(0, 60)}]`, r: run(d) };
+    });
+  });
   it("no unexplained nulls", () => {
-    expect(ALL_RESULTS.length).toBeGreaterThan(20);
-    const bad = ALL_RESULTS.flatMap(({ label, r }) => unexplainedNulls(r).map((x) => `${label}: ${x}`));
+    expect(allResults.length).toBeGreaterThan(20);
+    const bad = allResults.flatMap(({ label, r }) => unexplainedNulls(r).map((x) => `${label}: ${x}`));
     expect(bad).toEqual([]);
   });
   it("one finding per fault: no document names the same code and refs twice", () => {
-    const repeats = ALL_RESULTS.flatMap(({ label, r }) => repeatedFindings(r.findings).map((x) => `${label}: ${x}`));
+    const repeats = allResults.flatMap(({ label, r }) => repeatedFindings(r.findings).map((x) => `${label}: ${x}`));
     expect(repeats).toEqual([]);
   });
 });

@@ -47,8 +47,9 @@
  *  - ethylene glycol (F) is interpolated here between Melinder mass fractions, a coarser hand
  *    method: cp 1.5 %, ρ 0.5 %, ν 2 % (measured 1.1 %, 0.3 %, 0.3 %).
  */
-import { describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics";
+import { documentSet } from "@/lib/hydraulics/testing/document-set";
 import { repeatedFindings } from "@/lib/hydraulics/testing/repeated-findings";
 import { bisect, colebrook, flowM3h, kvDpKpa, kvForDp, litresPerM } from "@/lib/hydraulics/testing/hand-calc";
 
@@ -148,8 +149,11 @@ function nonFinitePaths(x: unknown, at = "results"): string[] {
   if (x && typeof x === "object") return Object.entries(x).flatMap(([k, v]) => nonFinitePaths(v, `${at}.${k}`));
   return [];
 }
-/** Every results document of this file, for the no-repeated-finding sweep at the end. */
-const ALL_RESULTS: AnyR[] = [];
+/**
+ * Every document this file sizes with run(), for the no-repeated-finding sweep at the end. The engine runs
+ * only inside tests (in an it, or a describe's beforeEach): registered builders are plain data.
+ */
+const DOCS = documentSet();
 function run(d: unknown): AnyR {
   let out: AnyR;
   expect(() => {
@@ -157,7 +161,6 @@ function run(d: unknown): AnyR {
   }).not.toThrow();
   expect(out.ok, JSON.stringify(out.issues ?? null)).toBe(true);
   expect(nonFinitePaths(out.results)).toEqual([]);
-  ALL_RESULTS.push(out.results);
   return out.results;
 }
 /** calculate() must not throw; returns the raw answer (ok true or false). */
@@ -249,7 +252,11 @@ const brHl = (q: number) => cuDp(q, "22", 8, W40) + kvDp(q, 4, W40);
 const priLoop = (Q: number) => cuDp(Q, "28", 4, W40) + kvDp(Q, 3, W40);
 
 describe("A — low-loss header: primary (heat pump's own pump) and secondary (pump 'ps') with a fan coil and a heat load", () => {
-  const r = run(caseA(8));
+  const make = DOCS.add(() => caseA(8));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const qPri = flowM3h(8000, 10, W40);
 
   it("hand numbers are in the turbulent range (Colebrook valid): Re > 4000 in every pipe", () => {
@@ -323,8 +330,9 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
     near(r.volume.systemL, vs, 5e-3, "system volume");
   });
 
+  const simulated = DOCS.add(() => caseA(8, [{ name: "run", mode: "heating", valves: {} }]));
   it("simulated: each pump meets ITS OWN loop — primary where 50−10Q… = Kv 3 + 4 m Cu 28; secondary on its curve with the two branches at equal Δp", () => {
-    const r2 = run(caseA(8, [{ name: "run", mode: "heating", valves: {} }]));
+    const r2 = run(simulated());
     const s = scen(r2, "run");
     expect(s.converged).toBe(true);
     const Qp = bisect((Q) => curveAt(HP_A, Q) - priLoop(Q), 0.01, 2.99);
@@ -338,7 +346,7 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
   });
 
   it("simulated energy balance: heat given by the source ρ·cp·Q·(45 − t_return) = Σ emitter outputs (first law, no pipe losses in the contract)", () => {
-    const r2 = run(caseA(8, [{ name: "run", mode: "heating", valves: {} }]));
+    const r2 = run(simulated());
     const s = scen(r2, "run");
     const sum = s.emitters.reduce((a: number, e: AnyR) => a + e.outputW, 0);
     const src = W40.rho * W40.cp * (s.heatSourceFlowM3h / 3600) * (45 - s.heatSourceReturnC);
@@ -347,8 +355,9 @@ describe("A — low-loss header: primary (heat pump's own pump) and secondary (p
   });
 
   // The secondary mixes down to 43.6 °C: a warning (header.primary-low) names the header and the heat source.
+  const rated6 = DOCS.add(() => caseA(6));
   it("primary flow BELOW secondary flow (rated 6 kW: 0.52086 < 0.60767 m³/h) → a warning naming the header or heat source (common practice, no single source: secondary flow mixes down to (0.52086·45+0.08681·35)/0.60767 = 43.6 °C)", () => {
-    const r3 = run(caseA(6));
+    const r3 = run(rated6());
     const qp = flowM3h(6000, 10, W40);
     expect(qp).toBeLessThan(qSec);
     near(mode(r3).heatSourceFlowM3h, qp, FLOW, "primary");
@@ -418,7 +427,11 @@ const priHeat = (Q: number, w: Fl) => kvDp(Q, 3, w) + kvDp(Q, 5, w) + cuDp(Q, "2
 const priHw = (Q: number, w: Fl) => kvDp(Q, 3, w) + kvDp(Q, 5, w) + kvDp(Q, 2.5, w) + cuDp(Q, "28", 4, w) + cuDp(Q, "22", 8, w);
 
 describe("B — buffer vessel as header; diverter to the buffer (heating) or the cylinder (hot water); propylene glycol 30 % vol", () => {
-  const r = run(caseB());
+  const make = DOCS.add(() => caseB());
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const qRated = flowM3h(6000, 10, PG); // 6000/(1018.4·3900·10)·3600 = 0.54383 m³/h
 
   it("fluid properties at the mean 40 °C are the glycol's (ASHRAE PG 30 % vol, refs §2.2): ρ 1018.4 ±0.1 %, cp 3900 ±0.3 % (table rounding)", () => {
@@ -492,8 +505,9 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
     near(r.volume.systemL, vs, 1e-9, "system volume (radiators drawn with 0 L; same bores: exact)");
   });
 
+  const coil4 = DOCS.add(() => caseB({ coilKw: 4 }));
   it("coil rated BELOW the heat source (coil 4 kW < 6 kW): reheat at the coil's 4 kW → 104.0 min (common practice: the lesser of source and coil output transfers)", () => {
-    const rc = run(caseB({ coilKw: 4 }));
+    const rc = run(coil4());
     const hand = (0.15 * 995.649 * 4179.8 * 40) / 4000 / 60;
     near(hand, 104.03, 1e-3, "hand");
     near(rc.hotWater.reheatMinutes, hand, 1e-3, "reheatMinutes");
@@ -502,13 +516,15 @@ describe("B — buffer vessel as header; diverter to the buffer (heating) or the
   // Second law: water at the highest flow temperature cannot bring the store above it. The heating design
   // flow (45 °C) is not that limit — a heat source runs hotter for hot water — so it applies only where
   // design.maxFlowTemperatureC states the highest flow (DEVELOPERS.md contract additions).
+  const maxFlow50 = DOCS.add(() => caseB({ maxFlowC: 50 }));
+  const maxFlowUnstated = DOCS.add(() => caseB({ maxFlowC: null }));
   it("store 50 °C with the highest flow stated as 50 °C: cannot be reheated → reheatMinutes null with a finding naming cyl (second law)", () => {
-    const rn = run(caseB({ maxFlowC: 50 }));
+    const rn = run(maxFlow50());
     expect(rn.hotWater.reheatMinutes).toBeNull();
     expect(naming(rn, "cyl").filter((f: AnyR) => f.code !== "hot-water.store-cool").length).toBeGreaterThan(0);
   });
   it("store 50 °C, highest flow not stated (heating flow 45 °C): the reheat time is given (hot-water runs hotter)", () => {
-    expect(typeof run(caseB({ maxFlowC: null })).hotWater.reheatMinutes).toBe("number");
+    expect(typeof run(maxFlowUnstated()).hotWater.reheatMinutes).toBe("number");
   });
 });
 
@@ -553,8 +569,13 @@ function caseC(o: { static?: number; sv?: number; svPart?: number; fill?: number
 const vsC = (bufferL = 250) => 28 * litresPerM(26.2) + 2 * litresPerM(20.2) + 0.5 * litresPerM(13.6) + 5 + bufferL + 20;
 
 describe("C — expansion vessel, EN 12828 Annex D (refs §8.1), PG 30 % vol, 10 → 40 °C, 12 m static, SV 4 bar", () => {
-  const r = run(caseC());
-  const ev = r.expansionVessel;
+  const make = DOCS.add(() => caseC());
+  let r: AnyR;
+  let ev: AnyR;
+  beforeEach(() => {
+    r = run(make());
+    ev = r.expansionVessel;
+  });
   // glycol expansion 10 → 40 °C from the ASHRAE PG 30 % vol densities (refs §2.2, confirmed-in-search):
   // e = ρ10/ρ40 − 1 = 1032.6/1018.4 − 1 = 1.394 %; Melinder 30 % mass (refs §2.3): 1028.0/1013.4 − 1 = 1.441 %.
   // Water over the same range: 0.754 % (refs §1.4) — glycol is ~1.85× water here (not 1.2–1.3×: water barely expands near 10 °C).
@@ -589,13 +610,15 @@ describe("C — expansion vessel, EN 12828 Annex D (refs §8.1), PG 30 % vol, 10
     expect(ev.ok).toBe(ev.requiredVolumeL <= 25);
   });
 
+  const sv25 = DOCS.add(() => caseC({ svPart: 2.5 }));
   it("a drawn safety valve set at 2.5 bar while the design assumes 4 bar → finding naming sv (the vessel was sized for a p_e the valve never allows)", () => {
-    const r2 = run(caseC({ svPart: 2.5 }));
+    const r2 = run(sv25());
     expect(naming(r2, "sv").length).toBeGreaterThan(0);
   });
 
+  const fill12 = DOCS.add(() => caseC({ fill: 1.2 }));
   it("cold fill pressure 1.2 bar below p0 (≈1.4 bar) → a finding (refs §8.1: fill ≈ p0 + 0.3 bar, common practice; below p0 the vessel holds no reserve)", () => {
-    const r2 = run(caseC({ fill: 1.2 }));
+    const r2 = run(fill12());
     expect(serious(r2).some((f: AnyR) => /fill/.test(f.code))).toBe(true);
   });
 
@@ -603,17 +626,20 @@ describe("C — expansion vessel, EN 12828 Annex D (refs §8.1), PG 30 % vol, 10
     expect(serious(r).filter((f: AnyR) => /fill/.test(f.code))).toEqual([]);
   });
 
+  const static30 = DOCS.add(() => caseC({ static: 30, sv: 3 }));
   it("static height 30 m with SV 3 bar: p0 3.2 bar > p_e 2.5 bar → the vessel cannot work: requiredVolumeL null with a finding naming ev, no NaN/negative", () => {
-    const r2 = run(caseC({ static: 30, sv: 3 }));
+    const r2 = run(static30());
     expect(r2.expansionVessel.requiredVolumeL).toBeNull();
     expect(naming(r2, "ev").length).toBeGreaterThan(0);
   });
 
+  const min200 = DOCS.add(() => caseC({ minVol: 200 }));
+  const min200Buffer20 = DOCS.add(() => caseC({ minVol: 200, bufferL: 20 }));
   it("minimum volume 200 L: buffer 250 L makes V_s ≈ 292 L → no buffer recommended; buffer 20 L → V_s ≈ 62 L → buffer recommended, finding naming hp", () => {
-    const ok = run(caseC({ minVol: 200 }));
+    const ok = run(min200());
     expect(ok.volume.minimumL).toBe(200);
     expect(ok.volume.bufferRecommended).toBe(false);
-    const low = run(caseC({ minVol: 200, bufferL: 20 }));
+    const low = run(min200Buffer20());
     near(low.volume.systemL, vsC(20), 5e-3, "systemL");
     expect(low.volume.bufferRecommended).toBe(true);
     expect(naming(low, "hp", /volume/).length).toBeGreaterThan(0);
@@ -652,7 +678,11 @@ function caseD(): Json {
 const surfaceFor = (qWm2: number, room: number) => room + (qWm2 / 8.92) ** (1 / 1.1);
 
 describe("D — UFH loops on a manifold: flows and the EN 1264-2 surface-temperature check", () => {
-  const r = run(caseD());
+  const make = DOCS.add(caseD);
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   const em = (id: string) => r.emitters.find((e: AnyR) => e.id === id);
 
   it("hand: l1 120 W/m² → 30.6 °C > 29; l2 60 W/m² → 25.7 °C; l3/l4 (room 24) 60 W/m² → 29.7 °C (≤ 33 bathroom, > 29 occupied)", () => {
@@ -727,14 +757,16 @@ describe("E1 — check valve across the radiator", () => {
   // In DESIGN mode the supply tee ta is upstream of the radiator, so p(ta) > p(tb): the valve, drawn to pass
   // only tb → ta, stays shut and the heat source carries the radiator's design flow alone. (An engine that
   // treated pumps as loss-free here shared the return flow backwards through the valve: 0.0565 m³/h.)
+  const against = DOCS.add(() => caseE(false));
+  const along = DOCS.add(() => caseE(true));
   it("DESIGN mode, drawn AGAINST the pressure (b on the supply tee): it passes nothing; heat source carries the radiator's design flow", () => {
-    const r = run(caseE(false));
+    const r = run(against());
     near(pipeR(r, "p2").flowM3h, flowM3h(2000, 10, W40), FLOW, "design radiator");
     near(mode(r).heatSourceFlowM3h, flowM3h(2000, 10, W40), FLOW, "design heat source");
     dry(pipeR(r, "x1").flowM3h, "design x1");
   });
   it("SIMULATED, drawn AGAINST the pressure: it passes nothing; the pump meets the radiator loop alone", () => {
-    const r = run(caseE(false));
+    const r = run(against());
     const s = scen(r, "as drawn");
     expect(s.converged).toBe(true);
     dry(scenPipe(s, "x1").flowM3h, "simulated x1 (check valve shut)");
@@ -744,7 +776,7 @@ describe("E1 — check valve across the radiator", () => {
   });
 
   it("drawn WITH the pressure (a on the supply tee): it opens and short-circuits most of the flow — hand split of two parallel branches at equal Δp", () => {
-    const r = run(caseE(true));
+    const r = run(along());
     const s = scen(r, "as drawn");
     expect(s.converged).toBe(true);
     const Q = bisect((q) => curveAt(HP_E, q) - mainsE(q) - split(q, radBr, cvBr)[2], 0.01, 2.99);
@@ -780,7 +812,11 @@ function caseE2(): Json {
   );
 }
 describe("E2 — isolation valve drawn shut on one of two branches", () => {
-  const r = run(caseE2());
+  const make = DOCS.add(caseE2);
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   it("valve.shut finding names ivB (DEVELOPERS.md finding code)", () => {
     expect(r.findings.some((f: AnyR) => f.code === "valve.shut" && f.refs.includes("ivB"))).toBe(true);
   });
@@ -832,7 +868,11 @@ const zoneZ = (q: number) => cuDp(q, "15", 10, W40) + kvDp(q, 4, W40) + kvDp(q, 
 const bypassZ = (q: number) => 8 + kvDp(q, 20, W40) + cuDp(q, "15", 1, W40);
 
 describe("E3 — zone valves + differential bypass set at 8 kPa: 'only zv1 open' makes the bypass open", () => {
-  const r = run(caseZ());
+  const make = DOCS.add(caseZ);
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   it("design: zone Δp 2.3 kPa < 8 kPa → bypass shut at design, zones at design flow", () => {
     expect(zoneZ(flowM3h(1500, 10, W40))).toBeLessThan(8);
     dry(pipeR(r, "y1").flowM3h, "bypass at design");
@@ -888,7 +928,11 @@ function caseF(fluid: Json, minOut: number | null): Json {
 }
 describe("F — ethylene glycol 20 % by volume (≈ 21.8 % by mass: 20·1.113/(20·1.113 + 80·0.998))", () => {
   const eg = { kind: "ethylene-glycol", percentByVolume: 20 };
-  const r = run(caseF(eg, -3));
+  const make = DOCS.add(() => caseF(eg, -3));
+  let r: AnyR;
+  beforeEach(() => {
+    r = run(make());
+  });
   // Melinder (refs §2.3) at 40 °C, interpolated to 21.8 % mass between 20 % and 30 %:
   //   ρ 1016.4 + 0.18·(1028.8−1016.4) = 1018.6; cp 3933 − 0.18·(3933−3775) = 3905; μ 1.01 + 0.18·0.28 = 1.06 mPa·s
   it("ρ ≈ 1018.6 (±0.5 %), cp ≈ 3905 (±1.5 %), ν ≈ 1.04e-6 m²/s (±2 %) at the 40 °C mean — EG, NOT PG or water", () => {
@@ -902,23 +946,28 @@ describe("F — ethylene glycol 20 % by volume (≈ 21.8 % by mass: 20·1.113/(2
   it("freezing ≈ −9 °C (AEG 20 % vol −8.98 °C; ASHRAE mass table interpolated −9.0 °C, refs §2.1): site −3 °C → no frost warning", () => {
     expect(serious(r).filter((f: AnyR) => /frost|glycol/.test(f.code))).toEqual([]);
   });
+  const site15 = DOCS.add(() => caseF(eg, -15));
   it("site −15 °C → fluid.frost-protection warning ('glycol too weak') naming the heat source", () => {
-    const r2 = run(caseF(eg, -15));
+    const r2 = run(site15());
     const f = serious(r2).filter((x: AnyR) => /frost|glycol/.test(x.code));
     expect(f.length).toBeGreaterThan(0);
     expect(f.some((x: AnyR) => x.refs.includes("hp"))).toBe(true);
   });
+  const eg0 = DOCS.add(() => caseF({ kind: "ethylene-glycol", percentByVolume: 0 }, -2));
   it("EG 0 % is water: freezes at 0 °C → site −2 °C gives a frost warning; properties equal water's at 40 °C (±0.05 %)", () => {
-    const r3 = run(caseF({ kind: "ethylene-glycol", percentByVolume: 0 }, -2));
+    const r3 = run(eg0());
     expect(serious(r3).filter((f: AnyR) => /frost|glycol/.test(f.code)).length).toBeGreaterThan(0);
     near(r3.fluid.densityKgM3, W40.rho, 5e-4, "ρ");
   });
-  it("EG 20 % expands more than water between 10 and 45 °C (maxFlowTemperatureC null → design flow 45 °C): e > water's 0.958 % (refs §1.4)", () => {
+  const withVessel = DOCS.add(() => {
     const d = caseF(eg, null);
     d.parts.push(P("t", "tee"), P("ev", "expansion-vessel", { volumeL: 12, prechargeBar: 0.7 }));
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "r");
     d.pipes.push(pipe("r1", "hl.return", "t.a", "22", 9), pipe("r2", "t.b", "hp.return", "22", 1), pipe("e", "t.c", "ev.connection", "15", 1));
-    const r4 = run(d);
+    return d;
+  });
+  it("EG 20 % expands more than water between 10 and 45 °C (maxFlowTemperatureC null → design flow 45 °C): e > water's 0.958 % (refs §1.4)", () => {
+    const r4 = run(withVessel());
     const e = r4.expansionVessel.expansionVolumeL / r4.expansionVessel.systemVolumeL;
     expect(e).toBeGreaterThan(0.00958 * 1.05);
   });
@@ -947,15 +996,19 @@ function small(): Json {
   );
 }
 describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infinity/throw", () => {
+  const baseline = DOCS.add(small);
   it("baseline document is clean enough: calculates", () => {
-    run(small());
+    run(baseline());
   });
 
   // lib/schematic/schema.ts: "a zero/negative length is an input.* finding" (zero: info, treated as a direct joint).
+  const zeroLength = DOCS.add(() => {
+      const d = small();
+      d.pipes[1].lengthM = 0;
+    return d;
+  });
   it("zero-length pipe → one input.pipe-length warning naming it; a direct joint: Δp exactly 0, flow still the load's", () => {
-    const d = small();
-    d.pipes[1].lengthM = 0;
-    const r = run(d);
+    const r = run(zeroLength());
     expect(findingsAbout(r, "input.pipe-length")).toEqual([["warning", ["p2"]]]);
     const p = pipeR(r, "p2");
     expect(p.pressureDropKpa).toBe(0);
@@ -970,53 +1023,65 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     expect(out.issues.some((i: AnyR) => i.path === "parts[1].props.deltaTK")).toBe(true);
   });
 
+  const room38 = DOCS.add(() => {
+      const d = small();
+      d.parts[2].props.roomTemperatureC = 38;
+    return d;
+  });
   it("radiator room at 38 °C between return 35 and flow 45: the log-mean is undefined (ln of a negative) → output finite or null, ok not true, a finding naming rad", () => {
-    const d = small();
-    d.parts[2].props.roomTemperatureC = 38;
-    const r = run(d);
+    const r = run(room38());
     const e = r.emitters.find((x: AnyR) => x.id === "rad");
     expect(e.ok === true).toBe(false);
     expect(naming(r, "rad").length).toBeGreaterThan(0);
   });
 
+  const risingCurve = DOCS.add(() => {
+      const d = small();
+      d.parts[0].props.pumpCurve = [[0, 10], [1, 20], [2, 30]];
+    return d;
+  });
   it("heat-pump's OWN pumpCurve rising with flow (two rising segments) → ONE pump.curve-rising warning naming hp", () => {
-    const d = small();
-    d.parts[0].props.pumpCurve = [[0, 10], [1, 20], [2, 30]];
-    expect(findingsAbout(run(d), "pump.curve-rising")).toEqual([["warning", ["hp"]]]);
+    expect(findingsAbout(run(risingCurve()), "pump.curve-rising")).toEqual([["warning", ["hp"]]]);
   });
 
+  const unorderedCurve = DOCS.add(() => {
+      const d = small();
+      d.parts[0].props.pumpCurve = [[0, 30], [2, 8], [1, 22]];
+    return d;
+  });
   it("pump curve with flows not ascending → pump.curve-invalid warning naming hp; its head at the design flow unknown (null), not ok", () => {
-    const d = small();
-    d.parts[0].props.pumpCurve = [[0, 30], [2, 8], [1, 22]];
-    const r = run(d);
+    const r = run(unorderedCurve());
     expect(findingsAbout(r, "pump.curve-invalid")).toEqual([["warning", ["hp"]]]);
     expect(mode(r).pump.availableHeadKpa).toBeNull();
     expect(mode(r).pump.ok).toBe(false);
   });
 
-  const island = () => {
+  const island = DOCS.add(() => {
     const d = small();
     d.parts.push(P("pu2", "pump", { curve: [[0, 20], [1, 10], [2, 0]] }), P("hl2", "heat-load", { heatLoadW: 800, kv: 2 }));
     d.pipes.push(pipe("x1", "pu2.out", "hl2.flow", "15", 2), pipe("x2", "hl2.return", "pu2.in", "15", 2));
-    return run(d);
-  };
+    return d;
+  });
   // Nothing heats the island: a finding names its load (circuit.no-heat-source) and it is not reported as ok.
   it("a disconnected sub-circuit (pump + heat load, no heat source) → a finding naming its load, and its emitter is not reported as ok", () => {
-    const r = island();
+    const r = run(island());
     expect(naming(r, "hl2").length).toBeGreaterThan(0);
     expect(r.emitters.find((e: AnyR) => e.id === "hl2").ok === true).toBe(false);
   });
   it("the main circuit is sized as before when a disconnected island exists", () => {
-    near(mode(island()).heatSourceFlowM3h, flowM3h(3000, 10, W40), FLOW, "main circuit");
+    near(mode(run(island())).heatSourceFlowM3h, flowM3h(3000, 10, W40), FLOW, "main circuit");
   });
 
-  it("a port with two pipes on a load's return → port.two-pipes naming the part and both pipes", () => {
+  const twoPipes = DOCS.add(() => {
     const d = small();
     d.pipes.push(pipe("p7", "hl.return", "tb.c", "15", 1));
     d.pipes = d.pipes.filter((p: AnyR) => p.id !== "p6");
     d.parts.push(P("dc", "drain-cock"));
     d.pipes.push(pipe("p6", "rad.return", "dc.connection", "15", 1));
-    const r = run(d);
+    return d;
+  });
+  it("a port with two pipes on a load's return → port.two-pipes naming the part and both pipes", () => {
+    const r = run(twoPipes());
     const refs = r.findings.filter((f: AnyR) => f.code === "port.two-pipes").flatMap((f: AnyR) => f.refs);
     expect(refs).toEqual(expect.arrayContaining(["hl", "p3", "p7"]));
   });
@@ -1057,19 +1122,25 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
     expect(out.issues.some((i: AnyR) => i.path === "pipes[0].fittings.elbow")).toBe(true);
   });
 
+  const zeroLoad = DOCS.add(() => {
+      const d = small();
+      d.parts[1].props.heatLoadW = 0;
+    return d;
+  });
   it("a zero heat load: its flow is 0, not NaN; the other load is sized normally", () => {
-    const d = small();
-    d.parts[1].props.heatLoadW = 0;
-    const r = run(d);
+    const r = run(zeroLoad());
     const q = partR(r, "hl").flowM3h;
     expect(q === null || Math.abs(q) <= 1e-9).toBe(true);
     near(partR(r, "rad").flowM3h, flowM3h(1000, 10, W40), FLOW, "rad");
   });
 
+  const deltaT0 = DOCS.add(() => {
+      const d = caseB();
+      d.design.returnTemperatureC = 45;
+    return d;
+  });
   it("design ΔT 0 with a cylinder and glycol (both modes) → an input.delta-t error for the document, no mode sized, no scenario run", () => {
-    const d = caseB();
-    d.design.returnTemperatureC = 45;
-    const r = run(d);
+    const r = run(deltaT0());
     expect(findingsAbout(r, "input.delta-t")).toEqual([["error", []]]);
     expect(r.modes).toEqual([]);
     expect(r.scenarios).toEqual([]);
@@ -1078,9 +1149,14 @@ describe("G — edge and bad input: JSON-path issues or findings, never NaN/Infi
 });
 
 describe("Sweep — one finding per fault", () => {
+  // every document registered above, sized here again: the sweep depends on no other test having run
+  let allResults: AnyR[];
+  beforeEach(() => {
+    allResults = DOCS.all().map(run);
+  });
   it("no results document above names the same code and refs twice", () => {
-    expect(ALL_RESULTS.length).toBeGreaterThan(30);
-    const repeats = ALL_RESULTS.flatMap((r: AnyR, i: number) => repeatedFindings(r.findings).map((x) => `doc #${i}: ${x}`));
+    expect(allResults.length).toBeGreaterThan(30);
+    const repeats = allResults.flatMap((r: AnyR, i: number) => repeatedFindings(r.findings).map((x) => `doc #${i}: ${x}`));
     expect(repeats).toEqual([]);
   });
 });

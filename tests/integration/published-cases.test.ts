@@ -6,10 +6,11 @@
  */
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { parseSchematic, resultsSchema, type Results } from "@/lib/schematic";
 
+/** Sized in each describe's beforeEach, which runs inside every test: never while the file is collected. */
 function size(name: string): Results {
   const raw: unknown = JSON.parse(readFileSync(path.resolve("tests/fixtures/published-cases", name), "utf8"));
   const parsed = parseSchematic(raw);
@@ -23,7 +24,10 @@ const pipe = (r: Results, id: string) => heating(r).pipes.find((p) => p.id === i
 const rel = (actual: number | null | undefined, expected: number) => Math.abs((actual ?? NaN) / expected - 1);
 
 describe("Q = ṁ·cp·ΔT — references §10 (IAPWS-95 ρ, cp at the 37.5 °C mean)", () => {
-  const r = size("heat-flow-10kw-dt5.json");
+  let r: Results;
+  beforeEach(() => {
+    r = size("heat-flow-10kw-dt5.json");
+  });
   it("10 kW at ΔT 5 K (40/35 °C) needs 1.7347 m³/h = 0.4819 L/s", () => {
     // tolerance 0.2 %: references §13 check 39; the simplified ρ 1000 / cp 4.18 convention gives 1.7225 (−0.7 %) and fails it
     expect(rel(pipe(r, "flow").flowM3h, 1.7347)).toBeLessThan(0.002);
@@ -37,7 +41,10 @@ describe("Q = ṁ·cp·ΔT — references §10 (IAPWS-95 ρ, cp at the 37.5 °C 
 });
 
 describe("Darcy–Weisbach with Colebrook, copper EN 1057 at 50 °C — references §3.4", () => {
-  const r = size("copper-pipes-50c.json");
+  let r: Results;
+  beforeEach(() => {
+    r = size("copper-pipes-50c.json");
+  });
   // references §3.4 rows (IAPWS water at 50 °C, ε 0.0015 mm); printed to 3–4 significant figures,
   // so tolerances are the rounding of the printed value plus 0.1 % for the flow set through Q = P/(ρ·cp·ΔT)
   const rows = [
@@ -56,7 +63,10 @@ describe("Darcy–Weisbach with Colebrook, copper EN 1057 at 50 °C — referenc
 });
 
 describe("Expansion vessel, EN 12828 Annex D — references §8.1 worked example A", () => {
-  const r = size("en12828-example-a.json");
+  let r: Results;
+  beforeEach(() => {
+    r = size("en12828-example-a.json");
+  });
   it("V_s 200 L, 10 → 55 °C, 5 m, SV 3 bar: p_0 0.7 bar, V_e 2.843 L, V_n 11.36 L", () => {
     const ev = r.expansionVessel!;
     expect(ev.systemVolumeL).toBeCloseTo(200, 2); // the fixture's parts + pipes hold exactly 200 L
@@ -68,7 +78,10 @@ describe("Expansion vessel, EN 12828 Annex D — references §8.1 worked example
 });
 
 describe("Pump and system curve, closed loop — references §11", () => {
-  const r = size("pump-closed-loop.json");
+  let r: Results;
+  beforeEach(() => {
+    r = size("pump-closed-loop.json");
+  });
   it("H = 6 − 4Q² m against 3Q² m meets at Q = √(6/7) = 0.9258 m³/h, H = 2.571 m", () => {
     const sc = r.scenarios.find((s) => s.name === "design")!;
     expect(sc.converged).toBe(true);
