@@ -5,14 +5,15 @@
  *
  * Two passes per folder:
  *  1. every mutant against the engine test set (vitest.mutate.config.mts), each running only the
- *     tests whose own code reached it (perTest coverage); static mutants (module-level tables and
- *     constants, evaluated once at load) are left out of this pass;
- *  2. the static mutants, and the mutants code run while test files were collected also reached
- *     (a `describe` that calls calculate() before its `it`s: per-test coverage cannot credit the
- *     tests that read that result) which pass 1 did not kill, against the unit tests beside the
- *     folder (vitest.mutate-unit.config.mts), every test run for every such mutant. The whole
- *     engine set per mutant takes hours on 2 shared cores. Judged by fewer tests a mutant can only
- *     survive more often: the score is not flattered. A kill in either pass is a kill.
+ *     tests whose own code reached it (perTest coverage); sizing/ uses that set less its property
+ *     tests (vitest.mutate-sizing.config.mts: they reach every sizing mutant and take seconds each);
+ *     static mutants (module-level tables and constants, evaluated once at load) are left out here;
+ *  2. the static mutants, and those that pass 1 did not kill which code run while a test file was
+ *     collected also reached, against the unit tests beside the folder
+ *     (vitest.mutate-unit.config.mts), every test run for every such mutant. Engine tests size their
+ *     documents inside each test (testing/per-test.ts), so few mutants land here. Judged by fewer
+ *     tests a mutant can only survive more often: the score is not flattered. A kill in either pass
+ *     is a kill.
  * Incremental files per folder and pass in reports/mutation/ (git-ignored): a re-run tests only the
  * mutants whose code or covering tests changed. Ends with one line per folder: mutants, killed
  * (+ timed out), survived, no coverage, the score, and the score with the equivalent mutants listed
