@@ -97,6 +97,7 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
   // The load links were cut (near-zero conductance): put their design flow back.
   for (const load of served) r.q[load.link] = load.flowM3h;
   const looped = pumpsOnLoops(ctx, state);
+  let unsettledKpa = 0;
   if (looped.length > 0) {
     // A passive path beside a pump (a fixed bypass, a short circuit, a check
     // valve between flow and return) carries what the pump's head drives
@@ -104,25 +105,40 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
     // loss-free it would share the return flow backwards instead. So each such
     // pump gives its required head (its index circuit's pressure drop, which
     // depends on that flow in turn): a fixed point, reached in a few rounds.
+    // Secant steps on f(g) = H(g) − g per pump (Burden & Faires, Numerical Analysis, §2.3): plain
+    // substitution g ← H(g) diverges where the pump's own drop grows faster with the bypass flow
+    // than the bypass flow grows with the head (a small heat-source Kv beside a fixed bypass).
+    const last = new Map<number, { gain: number; f: number }>();
+    let change = 0;
     for (let round = 0; round < 30; round++) {
       const sol = { mode, state, loads, served, laws, q: r.q, head: r.head, converged: r.converged, iterations: r.iterations };
       const heads = requiredHeads(traceCircuits(ctx, sol, NO_WATCH));
-      let change = 0;
-      for (const k of looped) {
-        const gain = (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1);
-        change = Math.max(change, Math.abs(gain - laws.gain[k]!));
-        laws.gain[k] = gain;
-      }
+      const f = looped.map((k) => (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1) - laws.gain[k]!);
+      change = Math.max(...f.map(Math.abs));
       if (change < 1e-7) break;
+      looped.forEach((k, i) => {
+        const gain = laws.gain[k]!;
+        const before = last.get(k);
+        const secant = before && f[i] !== before.f ? gain - (f[i]! * (gain - before.gain)) / (f[i]! - before.f) : gain + f[i]!;
+        last.set(k, { gain, f: f[i]! });
+        laws.gain[k] = Number.isFinite(secant) ? secant : gain + f[i]!;
+      });
       r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: 40 });
       for (const load of served) r.q[load.link] = load.flowM3h;
     }
+    if (change >= 1e-7) unsettledKpa = change;
   }
-  if (!r.converged) {
+  if (unsettledKpa > 0) {
+    ctx.findings.warning(
+      "design.not-converged",
+      `${mode} design flows did not settle: the head of a pump beside a bypass or other passive path changed by ${unsettledKpa.toPrecision(2)} kPa after 30 rounds, so its required head and the flows it drives are not reliable`,
+      looped.map((k) => ctx.doc.parts[ctx.model.links[k]!.index]!.id),
+    );
+  } else if (!r.converged) {
     ctx.findings.warning(
       "design.not-converged",
       `${mode} design flows did not converge in ${r.iterations} iterations; loops in the network may be badly conditioned`,
     );
   }
-  return { mode, state, loads, served, laws, q: r.q, head: r.head, converged: r.converged, iterations: r.iterations };
+  return { mode, state, loads, served, laws, q: r.q, head: r.head, converged: r.converged && unsettledKpa === 0, iterations: r.iterations };
 }
