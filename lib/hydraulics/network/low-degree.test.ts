@@ -7,7 +7,7 @@ import { minimumDegreeOrder } from "./ordering";
 function lowDegree(m: number, pairs: number[]) {
   const order = new Int32Array(m);
   const done = new Uint8Array(m);
-  const count = eliminateLowDegree(graphOf(m, pairs), order, done);
+  const count = eliminateLowDegree(graphOf(m, pairs), order, done, new Int32Array(m));
   return { count, order: order.subarray(0, count), done };
 }
 

@@ -79,9 +79,10 @@ function bridge(g: ShrinkingGraph, u: number, v: number, w: number): void {
 /**
  * Eliminates every node that has or comes to have degree ≤ 2, writing them to
  * order[0 ..) and marking them in done; returns how many. The graph is left
- * as the rest's elimination graph (all degrees ≥ 3).
+ * as the rest's elimination graph (all degrees ≥ 3); touched[u] is when u last
+ * lost or changed a neighbour (1, 2, …; 0: never), for the rest's tie-breaking.
  */
-export function eliminateLowDegree(g: ShrinkingGraph, order: Int32Array, done: Uint8Array): number {
+export function eliminateLowDegree(g: ShrinkingGraph, order: Int32Array, done: Uint8Array, touched: Int32Array): number {
   const m = g.len.length;
   // FIFO queues: degree ≤ 1 and degree 2; a node enters each at most once (degrees only fall)
   const low = new Int32Array(m);
@@ -96,6 +97,7 @@ export function eliminateLowDegree(g: ShrinkingGraph, order: Int32Array, done: U
     else if (g.len[u] === 2) two[twoTail++] = u;
   };
   let k = 0;
+  let clock = 0;
   for (;;) {
     let v: number;
     if (lowHead < lowTail) v = low[lowHead++]!;
@@ -108,6 +110,7 @@ export function eliminateLowDegree(g: ShrinkingGraph, order: Int32Array, done: U
     if (g.len[v] === 1) {
       const a = g.adj[s]!;
       drop(g, a, v);
+      touched[a] = ++clock;
       fell(a);
     } else if (g.len[v] === 2) {
       const a = g.adj[s]!;
@@ -116,6 +119,8 @@ export function eliminateLowDegree(g: ShrinkingGraph, order: Int32Array, done: U
       const lb = g.len[b]!;
       bridge(g, a, v, b);
       bridge(g, b, v, a);
+      touched[a] = ++clock;
+      touched[b] = ++clock;
       if (g.len[a] !== la) fell(a);
       if (g.len[b] !== lb) fell(b);
     }

@@ -66,7 +66,8 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
   const g = graphOf(m, pairs);
   const order = new Int32Array(m);
   const done = new Uint8Array(m);
-  const first = eliminateLowDegree(g, order, done);
+  const touched = new Int32Array(m);
+  const first = eliminateLowDegree(g, order, done, touched);
   if (first === m) return order;
   // The rest, all of degree ≥ 3: adjacency as plain arrays whose live part is
   // adj[v][0 .. len[v]) (eliminated nodes removed lazily; no array shrunk);
@@ -74,8 +75,14 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
   const adj: number[][] = new Array(m);
   const len = new Int32Array(m);
   const lists = new DegreeLists(m);
-  for (let v = 0; v < m; v++) {
-    if (done[v]) continue;
+  // Ties broken as if the first stage had run on the degree lists: a node whose
+  // neighbours changed moves to the tail of its list, so the rest enter in the
+  // order of their last change, untouched ones first (that order measurably
+  // lowers the fill on meshes: the factorisation's work, not only the order's).
+  const rest: number[] = [];
+  for (let v = 0; v < m; v++) if (!done[v]) rest.push(v);
+  rest.sort((a, b) => touched[a]! - touched[b]! || a - b);
+  for (const v of rest) {
     len[v] = g.len[v]!;
     adj[v] = Array.from(g.adj.subarray(g.start[v]!, g.start[v]! + len[v]!));
     lists.insert(v, len[v]!);
