@@ -74,36 +74,36 @@ export interface NetworkModel {
   component: Int32Array;
 }
 
-function partLinks(part: Part, node: (port: string) => number): [LinkRole, number, number][] {
+/** A through-link of a part: its role and the ports it joins, from → to. */
+type LinkSpec = readonly [LinkRole, string, string];
+
+const HEADER_LINKS: readonly LinkSpec[] = [
+  ["header-primary", "p1", "p2"],
+  ["header-secondary", "p4", "p3"],
+  ["header-top", "p1", "p3"],
+  ["header-bottom", "p4", "p2"],
+];
+const FIXED_LINKS: Partial<Record<string, readonly LinkSpec[]>> = {
+  "heat-source": [["heat-source", "return", "flow"]],
+  pump: [["pump", "in", "out"]],
+  link: [["link", "a", "b"]],
+  bypass: [["bypass", "a", "b"]],
+  diverter: [
+    ["diverter-a", "ab", "a"],
+    ["diverter-b", "ab", "b"],
+  ],
+  header: HEADER_LINKS,
+};
+/** A load's one link by part type (its through ports differ by type), made on first use. */
+const loadLinks = new Map<string, readonly LinkSpec[]>();
+
+/** The part's through-links (none for junctions, vessels and accessories): shared constant lists, nothing made per part. */
+function partLinks(part: Part): readonly LinkSpec[] {
   const info = partRegistry[part.type];
-  switch (info.role) {
-    case "heat-source":
-      return [["heat-source", node("return"), node("flow")]];
-    case "pump":
-      return [["pump", node("in"), node("out")]];
-    case "link":
-      return [["link", node("a"), node("b")]];
-    case "bypass":
-      return [["bypass", node("a"), node("b")]];
-    case "load": {
-      const [i, o] = info.through!;
-      return [["load", node(i), node(o)]];
-    }
-    case "diverter":
-      return [
-        ["diverter-a", node("ab"), node("a")],
-        ["diverter-b", node("ab"), node("b")],
-      ];
-    case "header":
-      return [
-        ["header-primary", node("p1"), node("p2")],
-        ["header-secondary", node("p4"), node("p3")],
-        ["header-top", node("p1"), node("p3")],
-        ["header-bottom", node("p4"), node("p2")],
-      ];
-    default:
-      return [];
-  }
+  if (info.role !== "load") return FIXED_LINKS[info.role] ?? [];
+  let specs = loadLinks.get(part.type);
+  if (!specs) loadLinks.set(part.type, (specs = [["load", info.through![0], info.through![1]]]));
+  return specs;
 }
 
 export function buildModel(doc: Schematic): NetworkModel {
@@ -113,13 +113,17 @@ export function buildModel(doc: Schematic): NetworkModel {
   // so a port's node is its part's first node plus the port's index: no
   // "part.port" key is built or hashed per port (ids are unique: parse checks that).
   const firstNode = new Int32Array(doc.parts.length);
-  const portLists: string[][] = new Array(doc.parts.length);
+  const portLists: (readonly string[])[] = new Array(doc.parts.length);
+  // one port list per part type (a manifold's per outlet count): not an array per part
+  const sharedPorts = new Map<string, readonly string[]>();
   const junction = new Uint8Array(doc.parts.length);
   let nodeCount = 0;
   doc.parts.forEach((part, index) => {
     partIndex.set(part.id, index);
     const role = partRegistry[part.type].role;
-    const ports = portsOf(part);
+    const key = part.type === "manifold" ? `manifold/${(part.props as { outlets: number }).outlets}` : part.type;
+    let ports = sharedPorts.get(key);
+    if (!ports) sharedPorts.set(key, (ports = portsOf(part)));
     portLists[index] = ports;
     firstNode[index] = nodeCount;
     if (role === "junction") {
@@ -128,30 +132,39 @@ export function buildModel(doc: Schematic): NetworkModel {
     } else nodeCount += ports.length;
     if (role === "vessel") vesselNodes.push(firstNode[index]! + ports.indexOf("connection"));
   });
-  const nodeOf = (index: number, port: string): number | undefined => {
-    const j = portLists[index]!.indexOf(port);
-    return j < 0 ? undefined : firstNode[index]! + (junction[index] ? 0 : j);
-  };
+  const nodeAt = (index: number, j: number): number | undefined => (j < 0 ? undefined : firstNode[index]! + (junction[index] ? 0 : j));
+  const nodeOf = (index: number, port: string): number | undefined => nodeAt(index, portLists[index]!.indexOf(port));
   const portNode: Lookup<number> = {
     get(ref) {
-      const dot = ref.lastIndexOf(".");
+      // the last dot by charCodeAt: String#lastIndexOf is a runtime call, not compiled inline
+      let dot = ref.length - 1;
+      while (dot >= 0 && ref.charCodeAt(dot) !== 46) dot--;
       const index = partIndex.get(ref.slice(0, dot));
-      return index === undefined ? undefined : nodeOf(index, ref.slice(dot + 1));
+      if (index === undefined) return undefined;
+      // the port matched in place (its name is the ref's tail): no string cut per pipe end
+      const ports = portLists[index]!;
+      let j = ports.length - 1;
+      while (j >= 0 && !(ports[j]!.length === ref.length - dot - 1 && ref.endsWith(ports[j]!))) j--;
+      return nodeAt(index, j);
     },
   };
   const links: ModelLink[] = [];
   doc.parts.forEach((part, index) => {
-    const info = partRegistry[part.type];
-    if (info.role === "junction" || info.role === "vessel") return; // no through-links (partLinks' default)
-    for (const [role, from, to] of partLinks(part, (port) => nodeOf(index, port)!)) links.push({ id: part.id, role, from, to, index });
+    const specs = partLinks(part);
+    for (let i = 0; i < specs.length; i++) {
+      const [role, a, b] = specs[i]!;
+      links.push({ id: part.id, role, from: nodeOf(index, a)!, to: nodeOf(index, b)!, index });
+    }
   });
   const pipeLink = new Int32Array(doc.pipes.length).fill(-1);
-  doc.pipes.forEach((pipe, index) => {
+  for (let index = 0; index < doc.pipes.length; index++) {
+    const pipe = doc.pipes[index]!;
     const from = portNode.get(pipe.from);
     const to = portNode.get(pipe.to);
-    if (from === undefined || to === undefined) return; // parse has rejected this already
-    pipeLink[index] = links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1;
-  });
+    if (from === undefined || to === undefined) continue; // parse has rejected this already
+    pipeLink[index] = links.length;
+    links.push({ id: pipe.id, role: "pipe", from, to, index });
+  }
   const partById = lazyLookup<Part>((map) => doc.parts.forEach((part) => map.set(part.id, part)));
   const linkOfPipe = lazyLookup<number>((map) => doc.pipes.forEach((pipe, i) => pipeLink[i]! >= 0 && map.set(pipe.id, pipeLink[i]!)));
   const linksOfPart = lazyLookup<number[]>((map) =>
