@@ -3,7 +3,7 @@
  * unconnected parts and ports, ports with more than one pipe, missing heat
  * source / pump / expansion vessel / safety valve, pump curves that rise.
  */
-import { partRegistry, portsOf } from "@/lib/schematic/parts";
+import { partRegistry, sharedPortsOf } from "@/lib/schematic/parts";
 import { pumpCurveIssues } from "@/lib/hydraulics/pumps/curve";
 import type { Schematic } from "@/lib/schematic/schema";
 import { components, type NetworkModel } from "@/lib/hydraulics/network/model";
@@ -11,7 +11,7 @@ import type { Findings } from "./finding";
 
 export function topologyFindings(doc: Schematic, model: NetworkModel, f: Findings): void {
   for (const part of doc.parts) {
-    const ports = portsOf(part);
+    const ports = sharedPortsOf(part);
     const pipesAt = ports.map((port) => model.pipesAtPort.get(`${part.id}.${port}`) ?? []);
     const used = ports.filter((_, i) => pipesAt[i]!.length > 0);
     const role = partRegistry[part.type].role;

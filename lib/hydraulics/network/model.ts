@@ -15,7 +15,7 @@
  * near-zero-conductance links, as EPANET does — so the symbolic factorisation
  * is computed once.
  */
-import { partRegistry, portsOf, splitPortRef } from "@/lib/schematic/parts";
+import { partRegistry, sharedPortsOf, splitPortRef } from "@/lib/schematic/parts";
 import type { Part, Schematic } from "@/lib/schematic/schema";
 
 export type LinkRole =
@@ -114,16 +114,12 @@ export function buildModel(doc: Schematic): NetworkModel {
   // "part.port" key is built or hashed per port (ids are unique: parse checks that).
   const firstNode = new Int32Array(doc.parts.length);
   const portLists: (readonly string[])[] = new Array(doc.parts.length);
-  // one port list per part type (a manifold's per outlet count): not an array per part
-  const sharedPorts = new Map<string, readonly string[]>();
   const junction = new Uint8Array(doc.parts.length);
   let nodeCount = 0;
   doc.parts.forEach((part, index) => {
     partIndex.set(part.id, index);
     const role = partRegistry[part.type].role;
-    const key = part.type === "manifold" ? `manifold/${(part.props as { outlets: number }).outlets}` : part.type;
-    let ports = sharedPorts.get(key);
-    if (!ports) sharedPorts.set(key, (ports = portsOf(part)));
+    const ports = sharedPortsOf(part);
     portLists[index] = ports;
     firstNode[index] = nodeCount;
     if (role === "junction") {
