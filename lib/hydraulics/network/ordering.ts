@@ -97,23 +97,19 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
     nbrs.length = 0;
     const av = adj[v]!;
     for (let i = 0; i < len[v]!; i++) if (!done[av[i]!]) nbrs.push(av[i]!);
+    // v's neighbours stamped once: each of them keeps its other neighbours
+    // and takes the whole of nbrs (less itself) in their place
+    const t = ++tick;
+    for (const u of nbrs) stamp[u] = t;
     for (const u of nbrs) {
-      // u loses v and gains every other neighbour of v it is not adjacent to yet
-      const t = ++tick;
       const list = adj[u]!;
       let n = 0;
       for (let i = 0; i < len[u]!; i++) {
         const w = list[i]!;
-        if (done[w]) continue;
+        if (done[w] || stamp[w] === t) continue;
         list[n++] = w;
-        stamp[w] = t;
       }
-      for (const w of nbrs) {
-        if (w !== u && stamp[w] !== t) {
-          list[n++] = w;
-          stamp[w] = t;
-        }
-      }
+      for (const w of nbrs) if (w !== u) list[n++] = w;
       len[u] = n;
       lists.remove(u);
       lists.insert(u, n);
