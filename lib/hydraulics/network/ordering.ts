@@ -115,6 +115,30 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
       lists.insert(u, n);
     }
     len[v] = 0;
+    // Mass elimination (George & Liu 1981 §5.4; their indistinguishable nodes): a
+    // neighbour now joined to v's clique only has degree |nbrs| − 1, the least of
+    // all, and makes no fill, so minimum degree takes it next — and then every
+    // other such neighbour. Taken here as one group, the rest of the clique is
+    // tidied once for all of them instead of once per member.
+    let group = 0;
+    for (const u of nbrs) {
+      if (len[u] !== nbrs.length - 1) continue;
+      done[u] = 1;
+      order[++k] = u;
+      lists.remove(u);
+      len[u] = 0;
+      group++;
+    }
+    if (group === 0) continue;
+    for (const w of nbrs) {
+      if (done[w]) continue;
+      const list = adj[w]!;
+      let n = 0;
+      for (let i = 0; i < len[w]!; i++) if (!done[list[i]!]) list[n++] = list[i]!;
+      len[w] = n;
+      lists.remove(w);
+      lists.insert(w, n);
+    }
   }
   return order;
 }
