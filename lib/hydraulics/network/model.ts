@@ -69,6 +69,10 @@ export interface NetworkModel {
   partById: Lookup<Part>;
   /** pipes attached to each port, "part.port" → pipe ids (built on first use) */
   pipesAtPort: Lookup<string[]>;
+  /** every part's ports in one sequence: doc.parts[i]'s port j (portsOf order) is slot portSlot[i] + j */
+  portSlot: Int32Array;
+  /** by port slot: how many pipe ends name that port */
+  endsAtPort: Int32Array;
   /** one fixed-head node per connected component (an expansion vessel where there is one) */
   fixed: Uint8Array;
   component: Int32Array;
@@ -115,12 +119,14 @@ export function buildModel(doc: Schematic): NetworkModel {
   const firstNode = new Int32Array(doc.parts.length);
   const portLists: (readonly string[])[] = new Array(doc.parts.length);
   const junction = new Uint8Array(doc.parts.length);
+  const portSlot = new Int32Array(doc.parts.length + 1);
   let nodeCount = 0;
   doc.parts.forEach((part, index) => {
     partIndex.set(part.id, index);
     const role = partRegistry[part.type].role;
     const ports = sharedPortsOf(part);
     portLists[index] = ports;
+    portSlot[index + 1] = portSlot[index]! + ports.length;
     firstNode[index] = nodeCount;
     if (role === "junction") {
       junction[index] = 1;
@@ -128,20 +134,33 @@ export function buildModel(doc: Schematic): NetworkModel {
     } else nodeCount += ports.length;
     if (role === "vessel") vesselNodes.push(firstNode[index]! + ports.indexOf("connection"));
   });
-  const nodeAt = (index: number, j: number): number | undefined => (j < 0 ? undefined : firstNode[index]! + (junction[index] ? 0 : j));
-  const nodeOf = (index: number, port: string): number | undefined => nodeAt(index, portLists[index]!.indexOf(port));
+  const slotPart = new Int32Array(portSlot[doc.parts.length]!);
+  for (let index = 0; index < doc.parts.length; index++) slotPart.fill(index, portSlot[index]!, portSlot[index + 1]!);
+  const nodeOfSlot = (slot: number): number => {
+    const index = slotPart[slot]!;
+    return firstNode[index]! + (junction[index] ? 0 : slot - portSlot[index]!);
+  };
+  const nodeOf = (index: number, port: string): number | undefined => {
+    const j = portLists[index]!.indexOf(port);
+    return j < 0 ? undefined : nodeOfSlot(portSlot[index]! + j);
+  };
+  /** The slot of the port a "part.port" reference names, −1 when there is none. */
+  const slotOf = (ref: string): number => {
+    // the last dot by charCodeAt: String#lastIndexOf is a runtime call, not compiled inline
+    let dot = ref.length - 1;
+    while (dot >= 0 && ref.charCodeAt(dot) !== 46) dot--;
+    const index = partIndex.get(ref.slice(0, dot));
+    if (index === undefined) return -1;
+    // the port matched in place (its name is the ref's tail): no string cut per pipe end
+    const ports = portLists[index]!;
+    let j = ports.length - 1;
+    while (j >= 0 && !(ports[j]!.length === ref.length - dot - 1 && ref.endsWith(ports[j]!))) j--;
+    return j < 0 ? -1 : portSlot[index]! + j;
+  };
   const portNode: Lookup<number> = {
     get(ref) {
-      // the last dot by charCodeAt: String#lastIndexOf is a runtime call, not compiled inline
-      let dot = ref.length - 1;
-      while (dot >= 0 && ref.charCodeAt(dot) !== 46) dot--;
-      const index = partIndex.get(ref.slice(0, dot));
-      if (index === undefined) return undefined;
-      // the port matched in place (its name is the ref's tail): no string cut per pipe end
-      const ports = portLists[index]!;
-      let j = ports.length - 1;
-      while (j >= 0 && !(ports[j]!.length === ref.length - dot - 1 && ref.endsWith(ports[j]!))) j--;
-      return nodeAt(index, j);
+      const slot = slotOf(ref);
+      return slot < 0 ? undefined : nodeOfSlot(slot);
     },
   };
   const links: ModelLink[] = [];
@@ -153,13 +172,16 @@ export function buildModel(doc: Schematic): NetworkModel {
     }
   });
   const pipeLink = new Int32Array(doc.pipes.length).fill(-1);
+  const endsAtPort = new Int32Array(slotPart.length);
   for (let index = 0; index < doc.pipes.length; index++) {
     const pipe = doc.pipes[index]!;
-    const from = portNode.get(pipe.from);
-    const to = portNode.get(pipe.to);
-    if (from === undefined || to === undefined) continue; // parse has rejected this already
+    const a = slotOf(pipe.from);
+    const b = slotOf(pipe.to);
+    if (a >= 0) endsAtPort[a]!++;
+    if (b >= 0) endsAtPort[b]!++;
+    if (a < 0 || b < 0) continue; // parse has rejected this already
     pipeLink[index] = links.length;
-    links.push({ id: pipe.id, role: "pipe", from, to, index });
+    links.push({ id: pipe.id, role: "pipe", from: nodeOfSlot(a), to: nodeOfSlot(b), index });
   }
   const partById = lazyLookup<Part>((map) => doc.parts.forEach((part) => map.set(part.id, part)));
   const linkOfPipe = lazyLookup<number>((map) => doc.pipes.forEach((pipe, i) => pipeLink[i]! >= 0 && map.set(pipe.id, pipeLink[i]!)));
@@ -197,7 +219,7 @@ export function buildModel(doc: Schematic): NetworkModel {
       hasFixed.add(c);
     }
   }
-  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, pipeLink, partById, pipesAtPort, fixed, component };
+  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, pipeLink, partById, pipesAtPort, portSlot, endsAtPort, fixed, component };
 }
 
 /** Connected components by union–find with path halving (Tarjan 1975). */
