@@ -84,7 +84,9 @@ export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Ar
   rest.sort((a, b) => touched[a]! - touched[b]! || a - b);
   for (const v of rest) {
     len[v] = g.len[v]!;
-    adj[v] = Array.from(g.adj.subarray(g.start[v]!, g.start[v]! + len[v]!));
+    const list: number[] = []; // copied by hand: Array.from over a subarray goes through the iterator
+    for (let e = g.start[v]!; e < g.start[v]! + len[v]!; e++) list.push(g.adj[e]!);
+    adj[v] = list;
     lists.insert(v, len[v]!);
   }
   const stamp = new Int32Array(m).fill(-1);
