@@ -12,9 +12,14 @@
  * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { RE_LAMINAR_MAX, RE_TURBULENT_MIN, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
-import { PIPE_DROP_SLOTS, pipeDropInto, pipePressureDrop } from "@/lib/hydraulics/pipes";
+import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
+import { PIPE_DROP_SLOTS, pipeDropInto as pipeDropIntoImport, pipePressureDrop } from "@/lib/hydraulics/pipes/pressure-drop";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
+
+// Used per link per solver iteration: bound once at load (friction/darcy.ts says why).
+const RE_LAMINAR_MAX = laminarMax;
+const RE_TURBULENT_MIN = turbulentMin;
+const pipeDropInto = pipeDropIntoImport;
 
 /**
  * Resistance of an open "loss-free" link, kPa per m³/h: 1e-4 kPa at 1 m³/h,
