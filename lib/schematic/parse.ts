@@ -5,7 +5,7 @@
  */
 import type { z } from "zod";
 import { migrate } from "./migrate";
-import { portsOf, splitPortRef } from "./parts";
+import { sharedPortsOf, splitPortRef } from "./parts";
 import { schematicSchema, type Schematic } from "./schema";
 
 export interface Issue {
@@ -44,8 +44,6 @@ function referenceIssues(doc: Schematic): Issue[] {
   const issues: Issue[] = [];
   const parts = new Map<string, Schematic["parts"][number]>();
   const seen = new Set<string>();
-  // One port set per part: a manifold's port list grows with its outlets.
-  const portSets = new Map<string, Set<string>>();
   // Paths are formatted only for an issue: a valid 20,000-pipe document would
   // otherwise build 60,000 path strings here for nothing.
   const dup = (list: "parts" | "pipes", i: number, id: string) => {
@@ -65,23 +63,18 @@ function referenceIssues(doc: Schematic): Issue[] {
       const ref = pipe[end];
       const dot = ref.lastIndexOf(".");
       const part = parts.get(ref.slice(0, dot));
-      if (part) {
-        let ports = portSets.get(part.id);
-        if (!ports) portSets.set(part.id, (ports = new Set(portsOf(part))));
-        if (ports.has(ref.slice(dot + 1))) continue; // the common case: nothing to report
-      }
+      if (part && sharedPortsOf(part).includes(ref.slice(dot + 1))) continue; // the common case: nothing to report
       const path = `pipes[${i}].${end}`;
       const { partId, port } = splitPortRef(ref);
       if (!part) {
         issues.push({ path, message: `${path}: pipe '${pipe.id}' names part '${partId}', which does not exist` });
         continue;
       }
-      let ports = portSets.get(partId);
-      if (!ports) portSets.set(partId, (ports = new Set(portsOf(part))));
-      if (!ports.has(port)) {
+      const ports = sharedPortsOf(part);
+      if (!ports.includes(port)) {
         issues.push({
           path,
-          message: `${path}: '${port}' is not a port of ${part.type} '${partId}' (ports: ${[...ports].join(", ")})`,
+          message: `${path}: '${port}' is not a port of ${part.type} '${partId}' (ports: ${ports.join(", ")})`,
         });
       }
     }

@@ -159,6 +159,18 @@ export function portsOf(part: Pick<Part, "type" | "props">): string[] {
   return [...info.ports];
 }
 
+/**
+ * portsOf as one shared, frozen list per part type (a manifold's per outlet
+ * count), for loops over thousands of parts that only read it: no array per part.
+ */
+const sharedPortLists = new Map<string, readonly string[]>();
+export function sharedPortsOf(part: Pick<Part, "type" | "props">): readonly string[] {
+  const key = part.type === "manifold" ? `manifold/${(part.props as { outlets: number }).outlets}` : part.type;
+  let ports = sharedPortLists.get(key);
+  if (!ports) sharedPortLists.set(key, (ports = Object.freeze(portsOf(part))));
+  return ports;
+}
+
 /** Split "partId.port" at its last dot. */
 export function splitPortRef(ref: string): { partId: string; port: string } {
   const dot = ref.lastIndexOf(".");

@@ -3,29 +3,31 @@
  * unconnected parts and ports, ports with more than one pipe, missing heat
  * source / pump / expansion vessel / safety valve, pump curves that rise.
  */
-import { partRegistry, portsOf } from "@/lib/schematic/parts";
+import { partRegistry, sharedPortsOf } from "@/lib/schematic/parts";
 import { pumpCurveIssues } from "@/lib/hydraulics/pumps/curve";
 import type { Schematic } from "@/lib/schematic/schema";
 import { components, type NetworkModel } from "@/lib/hydraulics/network/model";
 import type { Findings } from "./finding";
 
 export function topologyFindings(doc: Schematic, model: NetworkModel, f: Findings): void {
-  for (const part of doc.parts) {
-    const ports = portsOf(part);
-    const pipesAt = ports.map((port) => model.pipesAtPort.get(`${part.id}.${port}`) ?? []);
-    const used = ports.filter((_, i) => pipesAt[i]!.length > 0);
+  doc.parts.forEach((part, index) => {
+    const ports = sharedPortsOf(part);
+    // pipe ends per port counted by the model: no "part.port" key per port
+    const base = model.portSlot[index]!;
+    const ends = (j: number) => model.endsAtPort[base + j]!;
+    let used = 0;
+    for (let j = 0; j < ports.length; j++) if (ends(j) > 0) used++;
     const role = partRegistry[part.type].role;
-    if (used.length === 0) {
+    if (used === 0) {
       f.warning("part.unconnected", `${part.id}: no pipe is connected to it`, [part.id]);
-    } else if (role !== "junction" && role !== "header" && used.length < ports.length) {
-      const open = ports.filter((p) => !used.includes(p));
+    } else if (role !== "junction" && role !== "header" && used < ports.length) {
+      const open = ports.filter((_, j) => ends(j) === 0);
       f.warning("part.open-port", `${part.id}: port${open.length > 1 ? "s" : ""} ${open.join(", ")} not connected`, [part.id]);
     }
-    for (const [i, port] of ports.entries()) {
-      const pipes = pipesAt[i]!;
-      if (pipes.length > 1) {
-        f.error("port.two-pipes", `${part.id}.${port}: ${pipes.length} pipes meet at one port (use a tee)`, [part.id, ...pipes]);
-      }
+    for (let j = 0; j < ports.length; j++) {
+      if (ends(j) <= 1) continue;
+      const pipes = model.pipesAtPort.get(`${part.id}.${ports[j]}`)!;
+      f.error("port.two-pipes", `${part.id}.${ports[j]}: ${pipes.length} pipes meet at one port (use a tee)`, [part.id, ...pipes]);
     }
     const curve = part.type === "pump" ? part.props.curve : part.type === "heat-pump" || part.type === "boiler" ? part.props.pumpCurve : null;
     if (curve) {
@@ -36,7 +38,7 @@ export function topologyFindings(doc: Schematic, model: NetworkModel, f: Finding
       if (rising.length) f.warning("pump.curve-rising", `${part.id}: pump curve ${rising.join("; ")}`, [part.id]);
       if (invalid.length) f.warning("pump.curve-invalid", `${part.id}: pump curve ${invalid.join("; ")}`, [part.id]);
     }
-  }
+  });
   const of = (...types: string[]) => doc.parts.filter((p) => types.includes(p.type));
   const sources = of("heat-pump", "boiler");
   if (sources.length === 0 && doc.parts.length > 0) f.error("system.no-heat-source", "no heat pump or boiler in the schematic");

@@ -1,4 +1,9 @@
-import { colebrook, colebrookUnchecked, laminar } from "./colebrook";
+import { colebrook, colebrookUnchecked as colebrookUncheckedImport, laminar } from "./colebrook";
+
+// Hot-path binding, read once at load: run as CommonJS (tsx runs the bench and the CLIs
+// so), every use of an imported name is a getter call on the other module's exports —
+// per pipe per solver iteration, about a fifth of a network solve.
+const colebrookUnchecked = colebrookUncheckedImport;
 
 export type FlowRegime = "laminar" | "transition" | "turbulent";
 

@@ -12,9 +12,14 @@
  * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { RE_LAMINAR_MAX, RE_TURBULENT_MIN, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
-import { PIPE_DROP_SLOTS, pipeDropInto, pipePressureDrop } from "@/lib/hydraulics/pipes";
+import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
+import { PIPE_DROP_SLOTS, pipeDropInto as pipeDropIntoImport, pipePressureDrop } from "@/lib/hydraulics/pipes/pressure-drop";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
+
+// Used per link per solver iteration: bound once at load (friction/darcy.ts says why).
+const RE_LAMINAR_MAX = laminarMax;
+const RE_TURBULENT_MIN = turbulentMin;
+const pipeDropInto = pipeDropIntoImport;
 
 /**
  * Resistance of an open "loss-free" link, kPa per m³/h: 1e-4 kPa at 1 m³/h,
@@ -79,8 +84,10 @@ export class LinkTable {
   private readonly lastG: Float64Array;
   /** 1/√f at the last turbulent evaluation: Colebrook's warm start (0: none yet) */
   private readonly lastX: Float64Array;
-  /** Colebrook's f at Re 4000 for a pipe met in the transition (0: not yet), so the interpolation does not solve it again */
+  /** Colebrook's f at Re 4000 (transitionAnchorF) for each pipe, so the transition's interpolation never solves it (0: not usable) */
   private readonly anchorF: Float64Array;
+  /** the same by ε/D: pipes of one catalogue size share it, so it is solved once per size */
+  private readonly anchorByRelRough = new Map<number, number>();
   private readonly pumps = new Map<number, PumpData>();
   /** per-pipe constants, filled by setPipe: cross-section πD²/4 and relative roughness ε/D */
   private readonly area: Float64Array;
@@ -135,6 +142,12 @@ export class LinkTable {
       usable(this.nu, false) && usable(g.sumK, true) && g.roughnessM < g.innerDiameterM
         ? 0
         : 1;
+    if (!this.badPipe[k]) {
+      const rel = this.relRough[k]!;
+      let anchor = this.anchorByRelRough.get(rel);
+      if (anchor === undefined) this.anchorByRelRough.set(rel, (anchor = transitionAnchorF(rel)));
+      this.anchorF[k] = anchor;
+    }
     this.set(k, law, LAW.pipe);
   }
   /** A pump on its curve (pumps/curve.ts, linear between points), with a Kv device in series (coefficient c). */
@@ -233,7 +246,6 @@ export class LinkTable {
       pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, this.lastX[k]!, this.anchorF[k]!);
       const re = r[2]!;
       if (re >= RE_TURBULENT_MIN) this.lastX[k] = 1 / Math.sqrt(r[3]!);
-      else if (re >= RE_LAMINAR_MAX && this.anchorF[k] === 0) this.anchorF[k] = transitionAnchorF(this.relRough[k]!);
       if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
       const fr = r[0]! / 1000;
       const fit = r[1]! / 1000;

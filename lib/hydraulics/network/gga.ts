@@ -33,24 +33,32 @@ export function prepare(topo: Topology): Prepared {
 }
 
 export function prepareUncached(topo: Topology): Prepared {
-  const natural = new Int32Array(topo.nodeCount).fill(-1);
+  const L = topo.from.length;
+  const unknownOf = new Int32Array(topo.nodeCount).fill(-1);
   let m = 0;
-  for (let n = 0; n < topo.nodeCount; n++) if (!topo.fixed[n]) natural[n] = m++;
-  const pairOfLink = new Int32Array(topo.from.length).fill(-1);
-  const pairs: number[] = [];
-  for (let k = 0; k < topo.from.length; k++) {
-    const a = natural[topo.from[k]!]!;
-    const b = natural[topo.to[k]!]!;
-    if (a >= 0 && b >= 0 && a !== b) pairOfLink[k] = pairs.push(a, b) / 2 - 1;
+  for (let n = 0; n < topo.nodeCount; n++) if (!topo.fixed[n]) unknownOf[n] = m++;
+  // pairs in typed arrays, at most one per link (no growing array, no map callbacks: this runs once per topology)
+  const pairOfLink = new Int32Array(L).fill(-1);
+  const all = new Int32Array(2 * L);
+  let count = 0;
+  for (let k = 0; k < L; k++) {
+    const a = unknownOf[topo.from[k]!]!;
+    const b = unknownOf[topo.to[k]!]!;
+    if (a < 0 || b < 0 || a === b) continue;
+    all[2 * count] = a;
+    all[2 * count + 1] = b;
+    pairOfLink[k] = count++;
   }
+  const pairs = all.subarray(0, 2 * count);
   // Unknowns renumbered by elimination position once here, so no solve permutes.
   const order = minimumDegreeOrder(m, pairs);
   const pos = new Int32Array(m);
   for (let i = 0; i < m; i++) pos[order[i]!] = i;
   for (let t = 0; t < pairs.length; t++) pairs[t] = pos[pairs[t]!]!;
-  const unknownOf = natural.map((u) => (u >= 0 ? pos[u]! : -1));
+  for (let n = 0; n < topo.nodeCount; n++) if (unknownOf[n]! >= 0) unknownOf[n] = pos[unknownOf[n]!]!;
   const { sym, entryOfPair } = symbolicFactor(m, pairs);
-  const linkSlot = pairOfLink.map((t) => (t >= 0 ? entryOfPair[t]! : -1));
+  const linkSlot = new Int32Array(L);
+  for (let k = 0; k < L; k++) linkSlot[k] = pairOfLink[k]! >= 0 ? entryOfPair[pairOfLink[k]!]! : -1;
   return { topo, unknownOf, m, sym, linkSlot };
 }
 

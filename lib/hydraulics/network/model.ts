@@ -15,7 +15,7 @@
  * near-zero-conductance links, as EPANET does — so the symbolic factorisation
  * is computed once.
  */
-import { partRegistry, portsOf, splitPortRef } from "@/lib/schematic/parts";
+import { partRegistry, sharedPortsOf, splitPortRef } from "@/lib/schematic/parts";
 import type { Part, Schematic } from "@/lib/schematic/schema";
 
 export type LinkRole =
@@ -69,41 +69,45 @@ export interface NetworkModel {
   partById: Lookup<Part>;
   /** pipes attached to each port, "part.port" → pipe ids (built on first use) */
   pipesAtPort: Lookup<string[]>;
+  /** every part's ports in one sequence: doc.parts[i]'s port j (portsOf order) is slot portSlot[i] + j */
+  portSlot: Int32Array;
+  /** by port slot: how many pipe ends name that port */
+  endsAtPort: Int32Array;
   /** one fixed-head node per connected component (an expansion vessel where there is one) */
   fixed: Uint8Array;
   component: Int32Array;
 }
 
-function partLinks(part: Part, node: (port: string) => number): [LinkRole, number, number][] {
+/** A through-link of a part: its role and the ports it joins, from → to. */
+type LinkSpec = readonly [LinkRole, string, string];
+
+const HEADER_LINKS: readonly LinkSpec[] = [
+  ["header-primary", "p1", "p2"],
+  ["header-secondary", "p4", "p3"],
+  ["header-top", "p1", "p3"],
+  ["header-bottom", "p4", "p2"],
+];
+const FIXED_LINKS: Partial<Record<string, readonly LinkSpec[]>> = {
+  "heat-source": [["heat-source", "return", "flow"]],
+  pump: [["pump", "in", "out"]],
+  link: [["link", "a", "b"]],
+  bypass: [["bypass", "a", "b"]],
+  diverter: [
+    ["diverter-a", "ab", "a"],
+    ["diverter-b", "ab", "b"],
+  ],
+  header: HEADER_LINKS,
+};
+/** A load's one link by part type (its through ports differ by type), made on first use. */
+const loadLinks = new Map<string, readonly LinkSpec[]>();
+
+/** The part's through-links (none for junctions, vessels and accessories): shared constant lists, nothing made per part. */
+function partLinks(part: Part): readonly LinkSpec[] {
   const info = partRegistry[part.type];
-  switch (info.role) {
-    case "heat-source":
-      return [["heat-source", node("return"), node("flow")]];
-    case "pump":
-      return [["pump", node("in"), node("out")]];
-    case "link":
-      return [["link", node("a"), node("b")]];
-    case "bypass":
-      return [["bypass", node("a"), node("b")]];
-    case "load": {
-      const [i, o] = info.through!;
-      return [["load", node(i), node(o)]];
-    }
-    case "diverter":
-      return [
-        ["diverter-a", node("ab"), node("a")],
-        ["diverter-b", node("ab"), node("b")],
-      ];
-    case "header":
-      return [
-        ["header-primary", node("p1"), node("p2")],
-        ["header-secondary", node("p4"), node("p3")],
-        ["header-top", node("p1"), node("p3")],
-        ["header-bottom", node("p4"), node("p2")],
-      ];
-    default:
-      return [];
-  }
+  if (info.role !== "load") return FIXED_LINKS[info.role] ?? [];
+  let specs = loadLinks.get(part.type);
+  if (!specs) loadLinks.set(part.type, (specs = [["load", info.through![0], info.through![1]]]));
+  return specs;
 }
 
 export function buildModel(doc: Schematic): NetworkModel {
@@ -113,14 +117,16 @@ export function buildModel(doc: Schematic): NetworkModel {
   // so a port's node is its part's first node plus the port's index: no
   // "part.port" key is built or hashed per port (ids are unique: parse checks that).
   const firstNode = new Int32Array(doc.parts.length);
-  const portLists: string[][] = new Array(doc.parts.length);
+  const portLists: (readonly string[])[] = new Array(doc.parts.length);
   const junction = new Uint8Array(doc.parts.length);
+  const portSlot = new Int32Array(doc.parts.length + 1);
   let nodeCount = 0;
   doc.parts.forEach((part, index) => {
     partIndex.set(part.id, index);
     const role = partRegistry[part.type].role;
-    const ports = portsOf(part);
+    const ports = sharedPortsOf(part);
     portLists[index] = ports;
+    portSlot[index + 1] = portSlot[index]! + ports.length;
     firstNode[index] = nodeCount;
     if (role === "junction") {
       junction[index] = 1;
@@ -128,30 +134,55 @@ export function buildModel(doc: Schematic): NetworkModel {
     } else nodeCount += ports.length;
     if (role === "vessel") vesselNodes.push(firstNode[index]! + ports.indexOf("connection"));
   });
+  const slotPart = new Int32Array(portSlot[doc.parts.length]!);
+  for (let index = 0; index < doc.parts.length; index++) slotPart.fill(index, portSlot[index]!, portSlot[index + 1]!);
+  const nodeOfSlot = (slot: number): number => {
+    const index = slotPart[slot]!;
+    return firstNode[index]! + (junction[index] ? 0 : slot - portSlot[index]!);
+  };
   const nodeOf = (index: number, port: string): number | undefined => {
     const j = portLists[index]!.indexOf(port);
-    return j < 0 ? undefined : firstNode[index]! + (junction[index] ? 0 : j);
+    return j < 0 ? undefined : nodeOfSlot(portSlot[index]! + j);
+  };
+  /** The slot of the port a "part.port" reference names, −1 when there is none. */
+  const slotOf = (ref: string): number => {
+    // the last dot by charCodeAt: String#lastIndexOf is a runtime call, not compiled inline
+    let dot = ref.length - 1;
+    while (dot >= 0 && ref.charCodeAt(dot) !== 46) dot--;
+    const index = partIndex.get(ref.slice(0, dot));
+    if (index === undefined) return -1;
+    // the port matched in place (its name is the ref's tail): no string cut per pipe end
+    const ports = portLists[index]!;
+    let j = ports.length - 1;
+    while (j >= 0 && !(ports[j]!.length === ref.length - dot - 1 && ref.endsWith(ports[j]!))) j--;
+    return j < 0 ? -1 : portSlot[index]! + j;
   };
   const portNode: Lookup<number> = {
     get(ref) {
-      const dot = ref.lastIndexOf(".");
-      const index = partIndex.get(ref.slice(0, dot));
-      return index === undefined ? undefined : nodeOf(index, ref.slice(dot + 1));
+      const slot = slotOf(ref);
+      return slot < 0 ? undefined : nodeOfSlot(slot);
     },
   };
   const links: ModelLink[] = [];
   doc.parts.forEach((part, index) => {
-    const info = partRegistry[part.type];
-    if (info.role === "junction" || info.role === "vessel") return; // no through-links (partLinks' default)
-    for (const [role, from, to] of partLinks(part, (port) => nodeOf(index, port)!)) links.push({ id: part.id, role, from, to, index });
+    const specs = partLinks(part);
+    for (let i = 0; i < specs.length; i++) {
+      const [role, a, b] = specs[i]!;
+      links.push({ id: part.id, role, from: nodeOf(index, a)!, to: nodeOf(index, b)!, index });
+    }
   });
   const pipeLink = new Int32Array(doc.pipes.length).fill(-1);
-  doc.pipes.forEach((pipe, index) => {
-    const from = portNode.get(pipe.from);
-    const to = portNode.get(pipe.to);
-    if (from === undefined || to === undefined) return; // parse has rejected this already
-    pipeLink[index] = links.push({ id: pipe.id, role: "pipe", from, to, index }) - 1;
-  });
+  const endsAtPort = new Int32Array(slotPart.length);
+  for (let index = 0; index < doc.pipes.length; index++) {
+    const pipe = doc.pipes[index]!;
+    const a = slotOf(pipe.from);
+    const b = slotOf(pipe.to);
+    if (a >= 0) endsAtPort[a]!++;
+    if (b >= 0) endsAtPort[b]!++;
+    if (a < 0 || b < 0) continue; // parse has rejected this already
+    pipeLink[index] = links.length;
+    links.push({ id: pipe.id, role: "pipe", from: nodeOfSlot(a), to: nodeOfSlot(b), index });
+  }
   const partById = lazyLookup<Part>((map) => doc.parts.forEach((part) => map.set(part.id, part)));
   const linkOfPipe = lazyLookup<number>((map) => doc.pipes.forEach((pipe, i) => pipeLink[i]! >= 0 && map.set(pipe.id, pipeLink[i]!)));
   const linksOfPart = lazyLookup<number[]>((map) =>
@@ -188,7 +219,7 @@ export function buildModel(doc: Schematic): NetworkModel {
       hasFixed.add(c);
     }
   }
-  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, pipeLink, partById, pipesAtPort, fixed, component };
+  return { nodeCount, portNode, links, linksOfPart, linkOfPipe, pipeLink, partById, pipesAtPort, portSlot, endsAtPort, fixed, component };
 }
 
 /** Connected components by union–find with path halving (Tarjan 1975). */

@@ -12,33 +12,19 @@
  * fill and O(n^1.5) work, the known bounds for such graphs (Hoffman, Martin &
  * Rose 1973; Lipton, Rose & Tarjan 1979).
  */
+import { graphOf } from "./low-degree";
 import { minimumDegreeOrder } from "./ordering";
 
 const LEAF = 64;
 
 export function nestedDissection(m: number, pairs: ArrayLike<number>): Int32Array {
-  const start = new Int32Array(m + 1);
-  for (let t = 0; t + 1 < pairs.length; t += 2) {
-    if (pairs[t] === pairs[t + 1]) continue;
-    start[pairs[t]! + 1]!++;
-    start[pairs[t + 1]! + 1]!++;
-  }
-  for (let i = 0; i < m; i++) start[i + 1]! += start[i]!;
-  const adj = new Int32Array(start[m]!);
-  const fill = start.slice(0, m);
-  for (let t = 0; t + 1 < pairs.length; t += 2) {
-    const a = pairs[t]!;
-    const b = pairs[t + 1]!;
-    if (a === b) continue;
-    adj[fill[a]!++] = b;
-    adj[fill[b]!++] = a;
-  }
+  const { start, len, adj } = graphOf(m, pairs);
   const alive = new Uint8Array(m).fill(1); // not yet numbered
   const level = new Int32Array(m);
   const stamp = new Int32Array(m).fill(-1);
   let tick = 0;
   const live = (v: number, each: (w: number) => void) => {
-    for (let e = start[v]!; e < start[v + 1]!; e++) if (alive[adj[e]!]) each(adj[e]!);
+    for (let e = start[v]!; e < start[v]! + len[v]!; e++) if (alive[adj[e]!]) each(adj[e]!);
   };
   /** Breadth-first levels from root over alive nodes: the visit list and the deepest level. */
   const bfs = (root: number) => {

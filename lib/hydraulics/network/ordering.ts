@@ -6,9 +6,13 @@
  * 1981, ch. 5) on the explicit elimination graph. Heating networks are
  * near-trees, so it peels leaves first and creates almost no fill.
  *
+ * Nodes of degree ≤ 2 are taken first in linear time (low-degree.ts), then
+ * the rest by the degree lists below.
+ *
  * Input: m unknown nodes and the node pairs that share a link (either order,
  * duplicates allowed). Output: order[k] = node eliminated k-th.
  */
+import { eliminateLowDegree, graphOf } from "./low-degree";
 
 /**
  * Nodes by current degree: one doubly linked list per degree (George & Liu
@@ -59,65 +63,84 @@ class DegreeLists {
 }
 
 export function minimumDegreeOrder(m: number, pairs: ArrayLike<number>): Int32Array {
-  // Adjacency as plain arrays with lazy removal of eliminated nodes; a stamp
-  // array answers "already adjacent?" while forming the fill clique.
-  const adj: number[][] = Array.from({ length: m }, () => []);
-  const stamp = new Int32Array(m).fill(-1);
-  for (let i = 0; i + 1 < pairs.length; i += 2) {
-    const a = pairs[i]!;
-    const b = pairs[i + 1]!;
-    if (a === b) continue;
-    adj[a]!.push(b);
-    adj[b]!.push(a);
-  }
-  const lists = new DegreeLists(m);
-  // Merge parallel links: deduplicate each list once.
-  for (let v = 0; v < m; v++) {
-    const list = adj[v]!;
-    let len = 0;
-    for (let i = 0; i < list.length; i++) {
-      const u = list[i]!;
-      if (stamp[u] === v) continue;
-      stamp[u] = v;
-      list[len++] = u; // compacted in place, first occurrence kept
-    }
-    list.length = len;
-  }
-  for (let v = 0; v < m; v++) lists.insert(v, adj[v]!.length);
-  stamp.fill(-1);
-  const done = new Uint8Array(m);
+  const g = graphOf(m, pairs);
   const order = new Int32Array(m);
+  const done = new Uint8Array(m);
+  const touched = new Int32Array(m);
+  const first = eliminateLowDegree(g, order, done, touched);
+  if (first === m) return order;
+  // The rest, all of degree ≥ 3: adjacency as plain arrays whose live part is
+  // adj[v][0 .. len[v]) (eliminated nodes removed lazily; no array shrunk);
+  // a stamp array answers "already adjacent?" while forming the fill clique.
+  const adj: number[][] = new Array(m);
+  const len = new Int32Array(m);
+  const lists = new DegreeLists(m);
+  // Ties broken as if the first stage had run on the degree lists: a node whose
+  // neighbours changed moves to the tail of its list, so the rest enter in the
+  // order of their last change, untouched ones first (that order measurably
+  // lowers the fill on meshes: the factorisation's work, not only the order's).
+  const rest: number[] = [];
+  for (let v = 0; v < m; v++) if (!done[v]) rest.push(v);
+  rest.sort((a, b) => touched[a]! - touched[b]! || a - b);
+  for (const v of rest) {
+    len[v] = g.len[v]!;
+    const list: number[] = []; // copied by hand: Array.from over a subarray goes through the iterator
+    for (let e = g.start[v]!; e < g.start[v]! + len[v]!; e++) list.push(g.adj[e]!);
+    adj[v] = list;
+    lists.insert(v, len[v]!);
+  }
+  const stamp = new Int32Array(m).fill(-1);
   const nbrs: number[] = [];
   let tick = 0;
-  for (let k = 0; k < m; k++) {
+  for (let k = first; k < m; k++) {
     const v = lists.popMin();
     done[v] = 1;
     order[k] = v;
     nbrs.length = 0;
-    for (const u of adj[v]!) if (!done[u]) nbrs.push(u);
+    const av = adj[v]!;
+    for (let i = 0; i < len[v]!; i++) if (!done[av[i]!]) nbrs.push(av[i]!);
+    // v's neighbours stamped once: each of them keeps its other neighbours
+    // and takes the whole of nbrs (less itself) in their place
+    const t = ++tick;
+    for (const u of nbrs) stamp[u] = t;
     for (const u of nbrs) {
-      // u loses v and gains every other neighbour of v it is not adjacent to
-      // yet; its list is compacted in place (no allocation per elimination).
-      const t = ++tick;
       const list = adj[u]!;
-      let len = 0;
-      for (let i = 0; i < list.length; i++) {
+      let n = 0;
+      for (let i = 0; i < len[u]!; i++) {
         const w = list[i]!;
-        if (done[w]) continue;
-        list[len++] = w;
-        stamp[w] = t;
+        if (done[w] || stamp[w] === t) continue;
+        list[n++] = w;
       }
-      list.length = len;
-      for (const w of nbrs) {
-        if (w !== u && stamp[w] !== t) {
-          list.push(w);
-          stamp[w] = t;
-        }
-      }
+      for (const w of nbrs) if (w !== u) list[n++] = w;
+      len[u] = n;
       lists.remove(u);
-      lists.insert(u, list.length);
+      lists.insert(u, n);
     }
-    adj[v] = [];
+    len[v] = 0;
+    // Mass elimination (George & Liu 1981 §5.4; their indistinguishable nodes): a
+    // neighbour now joined to v's clique only has degree |nbrs| − 1, the least of
+    // all, and makes no fill, so minimum degree takes it next — and then every
+    // other such neighbour. Taken here as one group, the rest of the clique is
+    // tidied once for all of them instead of once per member.
+    let group = 0;
+    for (const u of nbrs) {
+      if (len[u] !== nbrs.length - 1) continue;
+      done[u] = 1;
+      order[++k] = u;
+      lists.remove(u);
+      len[u] = 0;
+      group++;
+    }
+    if (group === 0) continue;
+    for (const w of nbrs) {
+      if (done[w]) continue;
+      const list = adj[w]!;
+      let n = 0;
+      for (let i = 0; i < len[w]!; i++) if (!done[list[i]!]) list[n++] = list[i]!;
+      len[w] = n;
+      lists.remove(w);
+      lists.insert(w, n);
+    }
   }
   return order;
 }

@@ -1,4 +1,8 @@
-import { darcyF, flowRegimeOf, RE_LAMINAR_MAX, type FlowRegime } from "../friction/darcy";
+import { darcyF as darcyFImport, flowRegimeOf, RE_LAMINAR_MAX as laminarMax, type FlowRegime } from "../friction/darcy";
+
+// Used per pipe per solver iteration: bound once at load (friction/darcy.ts says why).
+const darcyF = darcyFImport;
+const RE_LAMINAR_MAX = laminarMax;
 
 export interface PipePressureDropInput {
   /** Volume flow Q, m³/s; sign = direction (from → to). */
