@@ -17,18 +17,26 @@ type Curve = [number, number][];
 const STRONG: Curve = [[0, 60], [0.5, 55], [1, 40], [2, 0]];
 const WEAK: Curve = [[0, 9], [0.5, 8], [1, 5], [2, 0]];
 
-interface Opts { curve: Curve; valveKv: number; opening?: number | null; reversed?: boolean; zv2Open?: boolean; onFlowMain?: boolean }
+interface Opts {
+  curve: Curve; valveKv: number; opening?: number | null; reversed?: boolean; zv2Open?: boolean; onFlowMain?: boolean;
+  /** the bypass's flow end on the heat pump's flow port itself (two pipes there) */
+  atHeatPump?: boolean;
+  /** a third, stiff load from the flow manifold back to a tee on the return main, past the return manifold */
+  outsideLoad?: boolean;
+}
 function run(o: Opts) {
   const cu = (id: string, from: string, to: string, size: string, lengthM: number) => ({ id, from, to, material: "copper", size, lengthM });
   const rad = (id: string, heatLoadW: number) => ({ id, type: "radiator", props: { outputAtDt50W: 8000, heatLoadW, valveKv: o.valveKv, waterVolumeL: 8 } });
-  const [endA, endB] = o.onFlowMain ? ["mf.p3", "tx.c"] : o.reversed ? ["mr.p3", "mf.p3"] : ["mf.p3", "mr.p3"];
+  const [endA, endB] = o.onFlowMain ? ["mf.p3", "tx.c"] : o.reversed ? ["mr.p3", "mf.p3"] : o.atHeatPump ? ["hp.flow", "mr.p3"] : ["mf.p3", "mr.p3"];
   const out = calculate({
     format: "loopwright/schematic", version: 1, name: "bypass cases", fluid: { kind: "water" },
     design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 1000 },
     parts: [
       { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, minFlowM3h: 0, kv: 5, waterVolumeL: 2, pumpCurve: o.curve } },
       { id: "tx", type: "tee" },
-      { id: "mf", type: "manifold", props: { outlets: 3 } },
+      { id: "mf", type: "manifold", props: { outlets: 4 } },
+      { id: "ty", type: "tee" },
+      { id: "h3", type: "heat-load", props: { heatLoadW: o.outsideLoad ? 800 : 0, kv: 0.1, waterVolumeL: 1 } },
       { id: "mr", type: "manifold", props: { outlets: 3 } },
       { id: "zv1", type: "zone-valve", props: { kvs: 4, open: true } },
       { id: "zv2", type: "zone-valve", props: { kvs: 4, open: o.zv2Open ?? true } },
@@ -37,7 +45,8 @@ function run(o: Opts) {
       { id: "bp", type: "dp-bypass-valve", props: { kvs: 2, openingKpa: o.opening ?? null } },
     ],
     pipes: [
-      cu("fm0", "hp.flow", "tx.a", "22", 1.5), cu("fm", "tx.b", "mf.common", "22", 1.5), cu("rm", "mr.common", "hp.return", "22", 3),
+      cu("fm0", "hp.flow", "tx.a", "22", 1.5), cu("fm", "tx.b", "mf.common", "22", 1.5), cu("rm0", "mr.common", "ty.a", "22", 1.5), cu("rm", "ty.b", "hp.return", "22", 1.5),
+      cu("c0", "mf.p4", "h3.flow", "15", 2), cu("c1", "h3.return", "ty.c", "15", 2),
       cu("a0", "mf.p1", "zv1.a", "15", 1), cu("a1", "zv1.b", "r1.flow", "15", 4), cu("a2", "r1.return", "mr.p1", "15", 5),
       cu("b0", "mf.p2", "zv2.a", "15", 1), cu("b1", "zv2.b", "r2.flow", "15", 4), cu("b2", "r2.return", "mr.p2", "15", 5),
       cu("y1", endA, "bp.a", "15", 0.5), cu("y2", "bp.b", endB, "15", 0.5),
@@ -96,6 +105,20 @@ describe("how the bypass is drawn", () => {
     const open = run({ curve: STRONG, valveKv: 0.3 }).bp;
     const shut = run({ curve: STRONG, valveKv: 0.3, zv2Open: false }).bp;
     expect(shut.openZonesDpKpa!).toBeCloseTo(open.openZonesDpKpa!, 6);
+  });
+
+  it("the bypass joined at the heat pump's own flow port: still across the zones", () => {
+    const { bp, of } = run({ curve: STRONG, valveKv: 0.3, atHeatPump: true });
+    expect(of("bypass.not-across-zones")).toEqual([]);
+    // from the flow port: the zones' Δp plus the 3 m of flow main and more, so above the manifold-to-manifold Δp
+    expect(bp.zonesDpKpa!).toBeGreaterThan(run({ curve: STRONG, valveKv: 0.3 }).bp.zonesDpKpa!);
+  });
+
+  it("a load leaving from the flow manifold but returning past the return manifold does not count: the zones' Δp is unchanged", () => {
+    const without = run({ curve: STRONG, valveKv: 0.3 }).bp;
+    const withOutside = run({ curve: STRONG, valveKv: 0.3, outsideLoad: true }).bp;
+    // the zones' flows are their design flows either way, so the Δp across them is the same
+    expect(withOutside.zonesDpKpa!).toBeCloseTo(without.zonesDpKpa!, 9);
   });
 
   it("both ends on the flow side: bypass.not-across-zones, no Δp and no opening recommended", () => {
