@@ -107,6 +107,11 @@ describe("how the bypass is drawn", () => {
     expect(shut.openZonesDpKpa!).toBeCloseTo(open.openZonesDpKpa!, 6);
   });
 
+  it("the all-zones-open case opens the zone valves only: no other part is taken for a valve", () => {
+    const { r } = run({ curve: STRONG, valveKv: 0.3 });
+    expect(r.findings.filter((f) => f.code === "scenario.unknown-valve")).toEqual([]);
+  });
+
   it("the bypass joined at the heat pump's own flow port: still across the zones", () => {
     const { bp, of } = run({ curve: STRONG, valveKv: 0.3, atHeatPump: true });
     expect(of("bypass.not-across-zones")).toEqual([]);

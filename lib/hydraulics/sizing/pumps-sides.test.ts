@@ -68,6 +68,21 @@ describe("a low-loss header: one duty per side", () => {
   });
 });
 
+describe("a side with a pump but no load", () => {
+  it("a pump circulating only through the header's secondary pass drives no circuit: no duty for it", () => {
+    const { mode } = results(
+      [
+        { id: "hp", type: "heat-pump", props: { ratedOutputKw: 8, kv: 2, waterVolumeL: 2, pumpCurve: [[0, 40], [1, 30], [2, 0]] } },
+        { id: "llh", type: "low-loss-header", props: {} },
+        { id: "pu", type: "pump", props: { curve: [[0, 10], [1, 8], [2, 0]] } },
+      ],
+      [cu("a", "hp.flow", "llh.p1", 2), cu("b", "llh.p2", "hp.return", 2), cu("c", "llh.p3", "pu.in", 1), cu("d", "pu.out", "llh.p4", 1)],
+    );
+    expect(mode.circuits.map((c) => c.load)).toEqual(["llh"]);
+    expect(mode.pumps.map((p) => p.id)).toEqual(["hp"]);
+  });
+});
+
 describe("the root of a side", () => {
   const hpCurve: Curve = [[0, 30], [1, 20], [2, 0]];
   const puCurve: Curve = [[0, 10], [1, 8], [2, 0]];
