@@ -83,6 +83,33 @@ describe("circuit paths", () => {
     expect(c("h2").path).toEqual(["hp", "a", "d", "h2", "e", "r"]);
   });
 
+  it("a short-circuit between flow and return (a balancing valve) never sends a path backwards through the pump", () => {
+    // pump → 4 valves → t1 → h1 → t2 → heat pump → pump; the bridge t1–t2 makes the way back round
+    // through the pump (pu, p0, hp, p8, p10, bv, p9, p6: 8 links) shorter than the way forward (10)
+    const cu = (id: string, from: string, to: string) => ({ id, from, to, material: "copper", size: "22", lengthM: 1 });
+    const iv = (id: string) => ({ id, type: "isolation-valve", props: { kv: 10 } });
+    const out = calculate({
+      format: "loopwright/schematic", version: 1, name: "bridge", fluid: { kind: "water" },
+      design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 500 },
+      parts: [
+        { id: "hp", type: "heat-pump", props: { ratedOutputKw: 8, kv: 2, waterVolumeL: 2 } },
+        { id: "pu", type: "pump", props: { curve: [[0, 20], [1, 15], [2, 0]] } },
+        iv("v1"), iv("v2"), iv("v3"), iv("v4"), { id: "t1", type: "tee" }, { id: "t2", type: "tee" },
+        { id: "bv", type: "balancing-valve", props: { kv: 0.2 } },
+        { id: "h1", type: "heat-load", props: { heatLoadW: 3000, kv: 1, waterVolumeL: 1 } },
+      ],
+      pipes: [
+        cu("p0", "hp.flow", "pu.in"), cu("p1", "pu.out", "v1.a"), cu("p2", "v1.b", "v2.a"), cu("p3", "v2.b", "v3.a"), cu("p4", "v3.b", "v4.a"),
+        cu("p5", "v4.b", "t1.a"), cu("p6", "t1.b", "h1.flow"), cu("p7", "h1.return", "t2.a"), cu("p8", "t2.b", "hp.return"),
+        cu("p9", "t1.c", "bv.a"), cu("p10", "bv.b", "t2.c"),
+      ],
+    });
+    if (!out.ok) throw new Error(JSON.stringify(out.issues));
+    expect(out.results.modes[0]!.circuits.map((x) => x.path)).toEqual([
+      ["p1", "v1", "p2", "v2", "p3", "v3", "p4", "v4", "p5", "p6", "h1", "p7", "p8", "hp", "p0"],
+    ]);
+  });
+
   it("a load drawn the wrong way round has no path; the other circuit keeps its own", () => {
     const { c } = run({ extraM: 1, h2Reversed: true });
     expect(c("h2").path).toEqual([]);
