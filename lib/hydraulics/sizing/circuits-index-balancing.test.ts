@@ -116,6 +116,27 @@ describe("circuit paths", () => {
     expect(c("h1").path).toEqual(["hp", "a", "b", "h1", "c", "r"]);
   });
 
+  it("a load with both ends on the flow side has no path (no way back to the pump's inlet), and the drawing still calculates", () => {
+    const cu = (id: string, from: string, to: string) => ({ id, from, to, material: "copper", size: "22", lengthM: 1 });
+    const out = calculate({
+      format: "loopwright/schematic", version: 1, name: "flow-side load", fluid: { kind: "water" },
+      design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 500 },
+      parts: [
+        { id: "hp", type: "heat-pump", props: { ratedOutputKw: 6, kv: 2, waterVolumeL: 2, pumpCurve: [[0, 40], [1, 30], [2, 0]] } },
+        { id: "tx", type: "tee" }, { id: "t1", type: "tee" },
+        { id: "h1", type: "heat-load", props: { heatLoadW: 2000, kv: 1, waterVolumeL: 1 } },
+        { id: "h2", type: "heat-load", props: { heatLoadW: 500, kv: 1, waterVolumeL: 1 } },
+      ],
+      pipes: [
+        cu("a", "hp.flow", "tx.a"), cu("a2", "tx.b", "t1.a"), cu("b", "t1.b", "h1.flow"), cu("c", "h1.return", "hp.return"),
+        cu("d", "t1.c", "h2.flow"), cu("e", "h2.return", "tx.c"),
+      ],
+    });
+    if (!out.ok) throw new Error(JSON.stringify(out.issues));
+    const paths = Object.fromEntries(out.results.modes[0]!.circuits.map((x) => [x.load, x.path]));
+    expect(paths).toEqual({ h1: ["hp", "a", "a2", "b", "h1", "c"], h2: [] });
+  });
+
   it("no pump at all: circuit.no-pump, and each circuit has no pump, path, drop, index, excess or Kv", () => {
     const { r, mode } = run({ extraM: 1, pumpCurve: null });
     expect(r.findings.filter((f) => f.code === "circuit.no-pump").map((f) => f.refs)).toEqual([["h1", "h2"]]);
