@@ -102,7 +102,7 @@ describe("gradient above the target", () => {
   });
 
   it("no size would do: the message stops at the target", () => {
-    // 0.26 m³/h in copper 54: laminar-free but R well above 0.01 Pa/m (Re ≈ 2,800)
+    // 0.26 m³/h in copper 54 (d 51.6 mm): v 0.0345 m/s, Re ≈ 2,800, R of order 32·ρ·ν·v/d² ≈ 0.26 Pa/m or more — far above 0.01 Pa/m
     const { ctx, findings, q } = run({ targetGradientPaPerM: 0.01 });
     pipeResults(ctx, q, "heating");
     expect(about(findings, "pipe.gradient-high")[0]!.message).toBe(`pipe p1: ${P1.gradientPaPerM.toFixed(0)} Pa/m in heating mode is above the 0.01 Pa/m target`);

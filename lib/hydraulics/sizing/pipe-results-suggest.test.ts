@@ -132,6 +132,12 @@ describe("no size", () => {
     expect(pipeFlow(0.26, 51.6, COPPER_EPS_MM, 1, W).v).toBeGreaterThan(0.03);
     expect(suggestSize(ctx, 0, 0.26)).toBeNull();
   });
+
+  it("null, not an error, for a flow too large for any size's Reynolds number to be computed", () => {
+    // 1e308 m³/h: v = Q/A is 1e307 m/s or more in every bore (Re = v·d/ν overflows): above the limit, so no size is tried
+    const { ctx } = contextOf();
+    expect(suggestSize(ctx, 0, 1e308)).toBeNull();
+  });
 });
 
 describe("fluid checks", () => {
