@@ -68,6 +68,8 @@ describe("inputs Darcy–Weisbach cannot take", () => {
       refuse((s) => geom(s, { sumK: bad }), `sumK must be ≥ 0 and finite, got ${bad}`);
     }
     refuse((s) => geom(s, { roughnessM: -1e-6 }), "roughnessM must be ≥ 0 and finite, got -0.000001");
+    // all three at once: the first named is the length, as pipePressureDrop checks it first
+    refuse((s) => geom(s, { lengthM: -1, roughnessM: -1e-6, sumK: -1 }), "lengthM must be ≥ 0 and finite, got -1");
   });
 
   it("a length, roughness and ΣK of 0 are fine", () => {
