@@ -77,6 +77,7 @@ describe("findings", () => {
     ["input.pipe-length", (d) => void (pipe(d, "p3").lengthM = -2), ["p3"]],
     ["input.pipe-diameter", (d) => void (pipe(d, "p3").innerDiameterMm = 0), ["p3"]],
     ["input.pipe-size", (d) => void (pipe(d, "p3").size = "99"), ["p3"]],
+    ["input.pipe-roughness", (d) => void Object.assign(pipe(d, "p3"), { innerDiameterMm: 5, roughnessMm: 6 }), ["p3"]],
     ["input.delta-t", (d) => { d.design.flowTemperatureC = 40; d.design.returnTemperatureC = 40; }, []],
     ["input.fill-pressure", (d) => void (d.design.coldFillPressureBar = 3.5), []],
     ["bypass.opening-low", (d) => withBypass(d, 1), ["bp"]],

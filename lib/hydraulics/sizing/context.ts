@@ -66,6 +66,11 @@ function pipeGeometry(doc: Schematic, findings: Findings): (PipeGeometry | null)
       findings.error("input.pipe-diameter", `pipe ${pipe.id}: inner diameter ${dMm} mm is not a usable pipe bore (≥ 1 mm)`, [pipe.id]);
       ok = false;
     }
+    // Colebrook's ε/D must stay below 1 (a roughness as deep as the bore is no pipe): typed values can give it.
+    if (ok && !(epsMm < dMm)) {
+      findings.error("input.pipe-roughness", `pipe ${pipe.id}: roughness ${epsMm} mm is not below its inner diameter ${dMm} mm`, [pipe.id]);
+      ok = false;
+    }
     if (!(pipe.lengthM >= 0)) {
       findings.error("input.pipe-length", `pipe ${pipe.id}: length ${pipe.lengthM} m is negative`, [pipe.id]);
       ok = false;
