@@ -84,3 +84,15 @@ describe("header on the primary, diverter and cylinder on the secondary", () => 
     expect(codes(r)).not.toContain("header.primary-unconnected");
   });
 });
+
+describe("a header with nothing on its primary and no heat source drawn", () => {
+  it("no primary pass is sized (0 W rated), so no header.primary-unconnected; the secondary load still gets its flow", () => {
+    const r = run([
+      { id: "h", type: "low-loss-header", props: { volumeL: 20 } },
+      { id: "pu", type: "pump", props: { curve: PUMP } },
+      { id: "hl", type: "heat-load", props: { heatLoadW: 3000, kv: 2, waterVolumeL: 10 } },
+    ], [cu("c", "h.p3", "pu.in"), cu("d", "pu.out", "hl.flow"), cu("e", "hl.return", "h.p4")]);
+    expect(codes(r)).not.toContain("header.primary-unconnected");
+    near(flow(r, "heating", "hl"), flowM3h(3000, 10, W40));
+  });
+});
