@@ -89,9 +89,12 @@ describe("inputs Darcy–Weisbach cannot take", () => {
   });
 
   it("a typed roughness at or above the typed bore", () => {
-    // the schema allows ε up to 10 mm and the context a bore from 1 mm: ε ≥ D has no relative roughness below 1
+    // the schema allows ε up to 10 mm and a bore from 1 mm: ε ≥ D has no relative roughness below 1, so the
+    // context refuses the pipe (input.pipe-roughness, findings.test.ts); given one anyway, Darcy–Weisbach throws
     for (const eps of [5, 6]) {
       const s = setUp((d) => Object.assign(d.pipes[0]!, { innerDiameterMm: 5, roughnessMm: eps }));
+      expect(s.ctx.pipeGeom[0]).toBeNull();
+      s.ctx.pipeGeom[0] = { innerDiameterM: 0.005, roughnessM: eps / 1000, lengthM: 5, sumK: 0 };
       expect(() => pipeResults(s.ctx, s.q, "heating")).toThrow(new RangeError(`roughnessM ${eps / 1000} must be below innerDiameterM 0.005`));
     }
   });
