@@ -19,13 +19,14 @@ interface Loop {
   reversed?: boolean;
   load?: { id: string; type: string; props: Record<string, unknown> };
   mode?: "heating" | "hot-water";
+  curve?: [number, number][];
 }
 function loopDoc(o: Loop) {
   const cu = (id: string, from: string, to: string) => ({ id, from, to, material: "copper", size: "22", lengthM: 5 });
   const load = o.load ?? { id: "r1", type: "radiator", props: { outputAtDt50W: 4000, heatLoadW: 1500, valveKv: 4 } };
   const [i, x] = o.load?.type === "cylinder" ? ["coilFlow", "coilReturn"] : ["flow", "return"];
   const parts: unknown[] = [
-    { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, kv: 5, waterVolumeL: 2, pumpCurve: CURVE } },
+    { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, kv: 5, waterVolumeL: 2, pumpCurve: o.curve ?? CURVE } },
     load,
     { id: "ev", type: "expansion-vessel", props: { volumeL: 8 } },
     { id: "t", type: "tee" },
@@ -124,5 +125,21 @@ describe("a load's own resistance is in series with the loop", () => {
     const part = r.modes[0]!.parts.find((p) => p.id === "u")!;
     near(part.pressureDropKpa!, loop(q));
     near(r.modes[0]!.circuits[0]!.pressureDropKpa!, loop(q) + mains(q));
+  });
+});
+
+describe("which pump curves the heat pump runs on", () => {
+  it("a curve whose head rises at first (30 → 35 kPa) is still run on: the flow meets it where the loop's losses do", () => {
+    const rising: [number, number][] = [[0, 30], [0.5, 35], [2, 0]];
+    const r = run({ curve: rising });
+    const want = bisect((q) => curveHeadKpa(rising, q) - mains(q) - kvDpKpa(q, 4, W.rho), 0.6, 1.99);
+    near(flowOf(r), want);
+    expect(r.findings.some((f) => f.code === "pump.curve-rising")).toBe(true);
+  });
+
+  it("a curve whose flows do not increase cannot be read: no head, no flow, and the calculation still answers", () => {
+    const r = run({ curve: [[0, 40], [1, 30], [1, 10]] });
+    expect(r.scenarios[0]!.heatSourceFlowM3h).toBe(0);
+    expect(r.modes[0]!.heatSourceFlowM3h).toBeGreaterThan(0); // design flows follow the load, pump or not
   });
 });
