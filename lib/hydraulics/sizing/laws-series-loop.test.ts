@@ -85,11 +85,14 @@ describe("a two-port device's Kv is in series with the loop, both ways round", (
     expect(back.scenarios[0]!.heatSourceFlowM3h).toBe(0);
   });
 
-  it("a zone valve drawn shut passes nothing when simulated; opened by the scenario it passes its Kvs flow", () => {
+  it("a zone valve drawn shut cuts the loop at design and passes nothing simulated; opened by the scenario it passes its Kvs flow", () => {
     const doc = loopDoc({ device: { type: "zone-valve", props: { kvs: 1.2, open: false } } });
     const shut = calculate(doc);
     if (!shut.ok) throw new Error("refused");
     expect(shut.results.scenarios[0]!.heatSourceFlowM3h).toBe(0);
+    // at design the shut valve cuts the loop: the radiator has no return path, and the valve is reported shut
+    expect(shut.results.findings.filter((f) => f.code === "load.no-return-path").map((f) => f.refs)).toEqual([["r1"]]);
+    expect(shut.results.findings.some((f) => f.code === "valve.shut" && f.refs.includes("d"))).toBe(true);
     const opened = calculate({ ...doc, scenarios: [{ name: "run", mode: "heating", valves: { d: true } }] });
     if (!opened.ok) throw new Error("refused");
     near(opened.results.scenarios[0]!.heatSourceFlowM3h!, operatingPoint((q) => kvDpKpa(q, 1.2, W.rho) + kvDpKpa(q, 4, W.rho)));
