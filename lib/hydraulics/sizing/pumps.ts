@@ -66,6 +66,17 @@ export function pumpDuties(ctx: EngineContext, sol: DesignSolution, ca: CircuitA
     }
     const designFlow = Math.abs(sol.q[root]!);
     const pumps = ca.pumpsOfSide.get(side) ?? [];
+    // Heads are added for pumps in series, which every circuit of the side passes; a pump off the index
+    // circuit's path sits beside the others (in parallel), which this sizing does not model.
+    const indexPath = new Set(circuits.find((c) => c.index)?.path ?? []);
+    const beside = pumps.filter((k) => k !== root).map((k) => ctx.model.links[k]!.id).filter((id) => !indexPath.has(id));
+    if (beside.length > 0) {
+      ctx.findings.warning(
+        "pump.not-in-series",
+        `${beside.join(", ")}: not on the index circuit's path through ${rootId}, so in parallel with it or beside it; pumps on one side are sized as in series (heads added), so this ${sol.mode} duty and the flows through ${beside.join(", ")} are not reliable. Draw pumps in parallel as one pump with their combined curve`,
+        [rootId, ...beside],
+      );
+    }
     const surplus = available !== null && ok ? available - required : null;
     // several pumps on a side run in series (their heads were added above): one combined curve, one speed for all
     const curves = pumps.map((k) => usableCurve(curveOf(ctx, k)));

@@ -1,0 +1,43 @@
+/**
+ * Pumps on one side are sized as in series (heads added, pumps/curve.ts seriesCurve). Two pumps drawn
+ * in parallel are not modelled: the one off the index circuit's path is named, with the duty it
+ * makes unreliable, instead of a quiet answer; pumps in series get no such finding.
+ */
+import { describe, expect, it } from "vitest";
+import { calculate } from "@/lib/hydraulics/calculate";
+import { SERIES_PUMP_CURVE, smallSystem, withPumpInSeries } from "@/lib/hydraulics/testing/small-system";
+
+const findingsOf = (doc: unknown) => {
+  const r = calculate(doc);
+  if (!r.ok) throw new Error(JSON.stringify(r.issues));
+  return r.results.findings.filter((f) => f.code === "pump.not-in-series");
+};
+
+describe("pumps beside each other on one side", () => {
+  it("a second pump across the first one's ports (in parallel) is named, with the duty it makes unreliable", () => {
+    // ts ─p6c─ tp1 ─ pump ─ tp2 ─p7─ hp.return, and tp1 ─ pump2 ─ tp2
+    const d = smallSystem();
+    d.parts.push({ id: "tp1", type: "tee" }, { id: "tp2", type: "tee" }, { id: "pump2", type: "pump", props: { curve: SERIES_PUMP_CURVE.map(([q, h]) => [q, h]) } });
+    const cu = (id: string, from: string, to: string) => ({ id, from, to, material: "copper", size: "22", lengthM: 0.3 });
+    d.pipes = d.pipes.filter((p) => p.id !== "p6c" && p.id !== "p7");
+    d.pipes.push(
+      { ...cu("p6c", "ts.b", "tp1.a"), lengthM: 0.5 },
+      cu("q1", "tp1.b", "pump.in"),
+      cu("q2", "pump.out", "tp2.a"),
+      cu("q3", "tp1.c", "pump2.in"),
+      cu("q4", "pump2.out", "tp2.b"),
+      { ...cu("p7", "tp2.c", "hp.return"), lengthM: 5 },
+    );
+    const [f, ...rest] = findingsOf(d);
+    expect(rest).toEqual([]);
+    expect(f).toMatchObject({ severity: "warning" });
+    expect(f!.refs.slice().sort()).toEqual(["pump", "pump2"]);
+    expect(f!.message).toMatch(/heating duty/);
+    expect(f!.message).toMatch(/combined curve/);
+  });
+
+  it("two pumps in series, and a single pump, get no such finding", () => {
+    expect(findingsOf(withPumpInSeries())).toEqual([]);
+    expect(findingsOf(smallSystem())).toEqual([]);
+  });
+});
