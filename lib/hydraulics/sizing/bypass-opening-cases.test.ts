@@ -12,10 +12,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
-
-type Curve = [number, number][];
-const STRONG: Curve = [[0, 60], [0.5, 55], [1, 40], [2, 0]];
-const WEAK: Curve = [[0, 9], [0.5, 8], [1, 5], [2, 0]];
+import { STRONG, WEAK, type Curve } from "@/lib/hydraulics/testing/two-zone-bypass";
 
 interface Opts {
   curve: Curve; valveKv: number; opening?: number | null; reversed?: boolean; zv2Open?: boolean; onFlowMain?: boolean;

@@ -12,57 +12,20 @@
  */
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
-import { bisect, copperDpKpa, curveHeadKpa, flowM3h, kvDpKpa, WATER } from "@/lib/hydraulics/testing/hand-calc";
+import { bisect, copperDpKpa, curveHeadKpa, flowM3h, kvDpKpa } from "@/lib/hydraulics/testing/hand-calc";
+import { designDp, mains, STRONG, twoZoneBypass, W, WEAK, withMargin, zoneDp, type Curve, type Opts } from "@/lib/hydraulics/testing/two-zone-bypass";
 
-const W = WATER[40];
-type Curve = [number, number][];
-const STRONG: Curve = [[0, 60], [0.5, 55], [1, 40], [2, 0]];
-const WEAK: Curve = [[0, 9], [0.5, 8], [1, 5], [2, 0]];
-
-interface Opts { curve: Curve; valveKv: number; opening?: number | null; minFlow?: number; bypassKvs?: number }
-function zones(o: Opts) {
-  const cu = (id: string, from: string, to: string, size: string, lengthM: number) => ({ id, from, to, material: "copper", size, lengthM });
-  const rad = (id: string, heatLoadW: number) => ({ id, type: "radiator", props: { outputAtDt50W: 8000, heatLoadW, valveKv: o.valveKv, waterVolumeL: 8 } });
-  return {
-    format: "loopwright/schematic", version: 1, name: "bypass verdict", fluid: { kind: "water" },
-    design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 1000 },
-    parts: [
-      { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, minFlowM3h: o.minFlow ?? 0, kv: 5, waterVolumeL: 2, pumpCurve: o.curve } },
-      { id: "mf", type: "manifold", props: { outlets: 3 } },
-      { id: "mr", type: "manifold", props: { outlets: 3 } },
-      { id: "zv1", type: "zone-valve", props: { kvs: 4, open: true } },
-      { id: "zv2", type: "zone-valve", props: { kvs: 4, open: true } },
-      rad("r1", 1500),
-      rad("r2", 1000),
-      { id: "bp", type: "dp-bypass-valve", props: { kvs: o.bypassKvs ?? 2, openingKpa: o.opening ?? null } },
-    ],
-    pipes: [
-      cu("fm", "hp.flow", "mf.common", "22", 3), cu("rm", "mr.common", "hp.return", "22", 3),
-      cu("a0", "mf.p1", "zv1.a", "15", 1), cu("a1", "zv1.b", "r1.flow", "15", 4), cu("a2", "r1.return", "mr.p1", "15", 5),
-      cu("b0", "mf.p2", "zv2.a", "15", 1), cu("b1", "zv2.b", "r2.flow", "15", 4), cu("b2", "r2.return", "mr.p2", "15", 5),
-      cu("y1", "mf.p3", "bp.a", "15", 0.5), cu("y2", "bp.b", "mr.p3", "15", 0.5),
-    ],
-  };
-}
 function run(o: Opts) {
-  const out = calculate(zones(o));
+  const out = calculate(twoZoneBypass(o));
   if (!out.ok) throw new Error(JSON.stringify(out.issues));
   return out.results;
 }
 
-/** Hand: a zone between the manifolds = 10 m Cu 15 + zone valve Kvs 4 + radiator valve. */
-const zoneDp = (q: number, valveKv: number) => copperDpKpa(q, "15", 10, W) + kvDpKpa(q, 4, W.rho) + kvDpKpa(q, valveKv, W.rho);
-/** Outside the manifolds: heat pump Kv 5 + 6 m Cu 22. */
-const mains = (q: number) => kvDpKpa(q, 5, W.rho) + copperDpKpa(q, "22", 6, W);
-/** Zones' Δp between the bypass ends at design flow: the larger of the two zones. */
-const designDp = (valveKv: number) => Math.max(zoneDp(flowM3h(1500, 10, W), valveKv), zoneDp(flowM3h(1000, 10, W), valveKv));
 /** Every zone open, bypass shut: the identical zones share Q equally; pump curve = mains + zone. */
 function openDp(curve: Curve, valveKv: number) {
   const q = bisect((x) => curveHeadKpa(curve, x) - mains(x) - zoneDp(x / 2, valveKv), 0.01, 1.99);
   return zoneDp(q / 2, valveKv);
 }
-/** The margin written out: the larger of +10 % and +2 kPa (common practice). */
-const withMargin = (need: number) => Math.max(1.1 * need, need + 2);
 
 describe("recommended bypass opening: need + max(10 %, 2 kPa)", () => {
   it("strong pump, stiff radiator valves (Kv 0.3): all-zones-open Δp ≈ 55 kPa governs, the 10 % margin is the larger", () => {

@@ -12,6 +12,4 @@ export interface DesignSolution {
   laws: LinkTable;
   q: Float64Array;
   head: Float64Array;
-  converged: boolean;
-  iterations: number;
 }

@@ -13,12 +13,18 @@ import type { EngineContext } from "./context";
 import { isPumpLink, requiredHeads, traceCircuits } from "./circuits";
 import { buildLaws, isCut, type NetworkState } from "./laws";
 import { designLoads, type DesignLoad } from "./loads";
+import { settleBySecant } from "./secant-settle";
 import { baseState } from "./state";
 import type { DesignSolution } from "./design-solution";
 
 export type { DesignSolution };
 
 const NO_WATCH: ReadonlySet<number> = new Set();
+/** Gradient-method iterations for a design solve: a tree takes one or two, loops a handful. */
+export const DESIGN_MAX_ITERATIONS = 40;
+/** Secant rounds for the heads of pumps beside passive paths, and when a head counts as settled (kPa). */
+export const HEAD_ROUNDS = 30;
+export const HEAD_TOLERANCE_KPA = 1e-7;
 
 /**
  * Pump links (pumps, heat sources with a curve) that lie on a loop of links open
@@ -93,45 +99,35 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
     demand[load.outNode] = demand[load.outNode]! - load.flowM3h;
     q0[load.link] = load.flowM3h;
   }
-  let r = solveNetwork(ctx.prep, laws, demand, q0, { maxIterations: 40 });
+  let r = solveNetwork(ctx.prep, laws, demand, q0, { maxIterations: DESIGN_MAX_ITERATIONS });
   // The load links were cut (near-zero conductance): put their design flow back.
   for (const load of served) r.q[load.link] = load.flowM3h;
   const looped = pumpsOnLoops(ctx, state);
-  let unsettledKpa = 0;
-  if (looped.length > 0) {
-    // A passive path beside a pump (a fixed bypass, a short circuit, a check
-    // valve between flow and return) carries what the pump's head drives
-    // through it, from the pump's outlet side to its inlet side; with the pumps
-    // loss-free it would share the return flow backwards instead. So each such
-    // pump gives its required head (its index circuit's pressure drop, which
-    // depends on that flow in turn): a fixed point, reached in a few rounds.
-    // Secant steps on f(g) = H(g) − g per pump (Burden & Faires, Numerical Analysis, §2.3): plain
-    // substitution g ← H(g) diverges where the pump's own drop grows faster with the bypass flow
-    // than the bypass flow grows with the head (a small heat-source Kv beside a fixed bypass).
-    const last = new Map<number, { gain: number; f: number }>();
-    let change = 0;
-    for (let round = 0; round < 30; round++) {
-      const sol = { mode, state, loads, served, laws, q: r.q, head: r.head, converged: r.converged, iterations: r.iterations };
-      const heads = requiredHeads(traceCircuits(ctx, sol, NO_WATCH));
-      const f = looped.map((k) => (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1) - laws.gain[k]!);
-      change = Math.max(...f.map(Math.abs));
-      if (change < 1e-7) break;
-      looped.forEach((k, i) => {
-        const gain = laws.gain[k]!;
-        const before = last.get(k);
-        const secant = before && f[i] !== before.f ? gain - (f[i]! * (gain - before.gain)) / (f[i]! - before.f) : gain + f[i]!;
-        last.set(k, { gain, f: f[i]! });
-        laws.gain[k] = Number.isFinite(secant) ? secant : gain + f[i]!;
-      });
-      r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: 40 });
+  // A passive path beside a pump (a fixed bypass, a short circuit, a check
+  // valve between flow and return) carries what the pump's head drives
+  // through it, from the pump's outlet side to its inlet side; with the pumps
+  // loss-free it would share the return flow backwards instead. So each such
+  // pump gives its required head (its index circuit's pressure drop, which
+  // depends on that flow in turn): a fixed point g = H(g). Plain substitution
+  // diverges where the pump's own drop grows faster with the bypass flow than
+  // the bypass flow grows with the head (a small heat-source Kv beside a fixed
+  // bypass), so it is solved by secant steps on f(g) = H(g) − g.
+  let atStart = true; // r already holds the solution at the starting heads
+  const headError = (gains: readonly number[]): number[] => {
+    if (!atStart) {
+      looped.forEach((k, i) => (laws.gain[k] = gains[i]!));
+      r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: DESIGN_MAX_ITERATIONS });
       for (const load of served) r.q[load.link] = load.flowM3h;
     }
-    if (change >= 1e-7) unsettledKpa = change;
-  }
-  if (unsettledKpa > 0) {
+    atStart = false;
+    const heads = requiredHeads(traceCircuits(ctx, { mode, state, loads, served, laws, q: r.q, head: r.head }, NO_WATCH));
+    return looped.map((k) => (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1) - laws.gain[k]!);
+  };
+  const heads = looped.length > 0 ? settleBySecant(looped.map((k) => laws.gain[k]!), headError, HEAD_ROUNDS, HEAD_TOLERANCE_KPA) : null;
+  if (heads && !heads.settled) {
     ctx.findings.warning(
       "design.not-converged",
-      `${mode} design flows did not settle: the head of a pump beside a bypass or other passive path changed by ${unsettledKpa.toPrecision(2)} kPa after 30 rounds, so its required head and the flows it drives are not reliable`,
+      `${mode} design flows did not settle: the head of a pump beside a bypass or other passive path changed by ${heads.residual.toPrecision(2)} kPa after ${heads.rounds} rounds, so its required head and the flows it drives are not reliable`,
       looped.map((k) => ctx.doc.parts[ctx.model.links[k]!.index]!.id),
     );
   } else if (!r.converged) {
@@ -140,5 +136,5 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
       `${mode} design flows did not converge in ${r.iterations} iterations; loops in the network may be badly conditioned`,
     );
   }
-  return { mode, state, loads, served, laws, q: r.q, head: r.head, converged: r.converged && unsettledKpa === 0, iterations: r.iterations };
+  return { mode, state, loads, served, laws, q: r.q, head: r.head };
 }

@@ -8,7 +8,7 @@ import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { bisect, COPPER_ID_MM, copperDpKpa, en12828NominalL, en442LogW, kvDpKpa, kvForDp, litresPerM, WATER, WATER_EXPANSION_FROM_10C, type Water } from "@/lib/hydraulics/testing/hand-calc";
 import { resultsSchema, type Results } from "@/lib/schematic/results";
-import { smallSystem } from "@/lib/hydraulics/testing/small-system";
+import { fixedBypass, smallSystem } from "@/lib/hydraulics/testing/small-system";
 import { perTest } from "@/lib/hydraulics/testing/per-test";
 
 function run(doc: unknown = smallSystem()): Results {
@@ -134,20 +134,7 @@ describe("design sizing with a fixed bypass beside the radiator (hand-checked)",
   // At design the radiator takes its design flow; the bypass takes what the
   // radiator branch's Δp between the tees drives through it, from ta to tb; the
   // heat source (its own pump) carries both and must give the index circuit's Δp.
-  const part = (id: string, type: string, props: Record<string, unknown> = {}) => ({ id, type, props });
-  const cu = (id: string, from: string, to: string, lengthM: number) => ({ id, from, to, material: "copper", size: "22", lengthM });
-  const doc = {
-    ...smallSystem(),
-    design: { ...smallSystem().design, flowTemperatureC: 45, returnTemperatureC: 35 },
-    parts: [
-      part("hp", "heat-pump", { ratedOutputKw: 5, minFlowM3h: 0, kv: 4, waterVolumeL: 2, pumpCurve: [[0, 30], [1, 22], [2, 8], [3, 0]] }),
-      part("ta", "tee"),
-      part("tb", "tee"),
-      part("rad", "radiator", { outputAtDt50W: 8000, heatLoadW: 2000, valveKv: 1.5, waterVolumeL: 10 }),
-      part("bv", "balancing-valve", { kv: 0.5 }),
-    ],
-    pipes: [cu("p1", "hp.flow", "ta.a", 2), cu("p2", "ta.b", "rad.flow", 5), cu("p3", "rad.return", "tb.a", 5), cu("p4", "tb.b", "hp.return", 2), cu("x1", "ta.c", "bv.a", 0.5), cu("x2", "bv.b", "tb.c", 0.5)],
-  };
+  const doc = fixedBypass();
   const w40 = WATER[40]; // mean of 45/35 °C, a table point (references §1.1)
   const kv40 = (q: number, kv: number) => kvDpKpa(q, kv, w40.rho);
   const cu22 = (q: number, lengthM: number) => copperDpKpa(q, "22", lengthM, w40);

@@ -73,3 +73,25 @@ export function withPumpInSeries(): SmallSystem {
     { id: "p8", from: "pump2.out", to: "hp.return", material: "copper", size: "22", lengthM: 2.5 });
   return d;
 }
+
+/**
+ * The small system's design conditions at 45/35 °C around one radiator with a fixed bypass beside it:
+ * hp.flow ─p1─ ta ─p2─ rad ─p3─ tb ─p4─ hp.return, and ta ─x1─ bv (Kv 0.5) ─x2─ tb. The heat
+ * source's own pump is on a loop through the bypass, so its head is a fixed point (sizing/design.ts).
+ */
+export function fixedBypass() {
+  const part = (id: string, type: string, props: Record<string, unknown> = {}) => ({ id, type, props });
+  const cu = (id: string, from: string, to: string, lengthM: number) => ({ id, from, to, material: "copper", size: "22", lengthM });
+  return {
+    ...smallSystem(),
+    design: { ...smallSystem().design, flowTemperatureC: 45, returnTemperatureC: 35 },
+    parts: [
+      part("hp", "heat-pump", { ratedOutputKw: 5, minFlowM3h: 0, kv: 4, waterVolumeL: 2, pumpCurve: [[0, 30], [1, 22], [2, 8], [3, 0]] }),
+      part("ta", "tee"),
+      part("tb", "tee"),
+      part("rad", "radiator", { outputAtDt50W: 8000, heatLoadW: 2000, valveKv: 1.5, waterVolumeL: 10 }),
+      part("bv", "balancing-valve", { kv: 0.5 }),
+    ],
+    pipes: [cu("p1", "hp.flow", "ta.a", 2), cu("p2", "ta.b", "rad.flow", 5), cu("p3", "rad.return", "tb.a", 5), cu("p4", "tb.b", "hp.return", 2), cu("x1", "ta.c", "bv.a", 0.5), cu("x2", "bv.b", "tb.c", 0.5)],
+  };
+}
