@@ -18,7 +18,7 @@ export interface Simulation {
   iterations: number;
 }
 
-export function simulate(ctx: EngineContext, state: NetworkState, warm: Float64Array | null): Simulation {
+export function simulate(ctx: EngineContext, state: NetworkState, warm: Float64Array | null, maxIterations = 50): Simulation {
   const { model } = ctx;
   const laws = buildLaws(ctx, state);
   const q0 = new Float64Array(model.links.length);
@@ -29,7 +29,7 @@ export function simulate(ctx: EngineContext, state: NetworkState, warm: Float64A
     const w = warm ? warm[k]! : 0;
     q0[k] = Math.abs(w) > NO_FLOW_M3H ? w : 0.01;
   });
-  const r = solveNetwork(ctx.prep, laws, new Float64Array(model.nodeCount), q0, { maxIterations: 50, accuracy: 1e-5 });
+  const r = solveNetwork(ctx.prep, laws, new Float64Array(model.nodeCount), q0, { maxIterations, accuracy: 1e-5 });
   for (let k = 0; k < r.q.length; k++) if (Math.abs(r.q[k]!) < NO_FLOW_M3H) r.q[k] = 0;
   return { state, laws, q: r.q, head: r.head, converged: r.converged, iterations: r.iterations };
 }

@@ -32,15 +32,16 @@ export interface BypassSizing {
 }
 
 /** Heads with every zone valve open and every dp-bypass shut, pumps on their curves; null if it did not converge. */
-function allZonesOpenHeads(ctx: EngineContext, heating: ModeRun): Float64Array | null {
+function allZonesOpenHeads(ctx: EngineContext, heating: ModeRun, maxIterations?: number): Float64Array | null {
   const zones = ctx.doc.parts.filter((p) => p.type === "zone-valve").map((p) => p.id);
   const spec = { name: "all zones open", mode: "heating" as const, valves: Object.fromEntries(zones.map((z) => [z, true])) };
   // No opening given to any bypass: simulated as shut (laws.ts), so the heads are the Δp it must hold.
-  const sim = simulate(ctx, scenarioState(ctx, spec, new Map()), heating.solution.q);
+  const sim = simulate(ctx, scenarioState(ctx, spec, new Map()), heating.solution.q, maxIterations);
   return sim.converged ? sim.head : null;
 }
 
-export function sizeBypasses(ctx: EngineContext, heating: ModeRun | null): BypassSizing[] {
+/** `openIterations`: the all-zones-open simulation's iteration limit (simulate.ts's own unless given). */
+export function sizeBypasses(ctx: EngineContext, heating: ModeRun | null, openIterations?: number): BypassSizing[] {
   const out: BypassSizing[] = [];
   const branch = bypassBranchPoints(ctx);
   let open: Float64Array | null | undefined;
@@ -76,7 +77,7 @@ export function sizeBypasses(ctx: EngineContext, heating: ModeRun | null): Bypas
     }
     let openDp: number | null = null;
     if (zones !== null && heating) {
-      if (open === undefined) open = allZonesOpenHeads(ctx, heating);
+      if (open === undefined) open = allZonesOpenHeads(ctx, heating, openIterations);
       const dp = open === null ? NaN : Math.abs(open[endA]! - open[endB]!);
       if (Number.isFinite(dp)) openDp = dp;
       else {

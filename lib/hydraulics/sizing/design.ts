@@ -20,11 +20,18 @@ import type { DesignSolution } from "./design-solution";
 export type { DesignSolution };
 
 const NO_WATCH: ReadonlySet<number> = new Set();
-/** Gradient-method iterations for a design solve: a tree takes one or two, loops a handful. */
-export const DESIGN_MAX_ITERATIONS = 40;
-/** Secant rounds for the heads of pumps beside passive paths, and when a head counts as settled (kPa). */
-export const HEAD_ROUNDS = 30;
-export const HEAD_TOLERANCE_KPA = 1e-7;
+/**
+ * How long a design solve may take: gradient-method iterations (a tree takes one or two, loops a
+ * handful) and secant rounds for the heads of pumps beside passive paths. Tests cut them to reach
+ * what no drawing found so far does.
+ */
+export interface DesignLimits {
+  maxIterations: number;
+  headRounds: number;
+}
+const DESIGN_LIMITS: DesignLimits = { maxIterations: 40, headRounds: 30 };
+/** A pump head counts as settled when its index circuit's drop is within this of it (kPa). */
+const HEAD_TOLERANCE_KPA = 1e-7;
 
 /**
  * Pump links (pumps, heat sources with a curve) that lie on a loop of links open
@@ -67,7 +74,7 @@ export function designHasLoops(ctx: EngineContext, state: NetworkState): boolean
   return open.length - nodes.size + pieces.size > 0;
 }
 
-export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): DesignSolution {
+export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"], limits: DesignLimits = DESIGN_LIMITS): DesignSolution {
   const { model } = ctx;
   const state = baseState(ctx, "design", mode);
   const laws = buildLaws(ctx, state);
@@ -99,7 +106,7 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
     demand[load.outNode] = demand[load.outNode]! - load.flowM3h;
     q0[load.link] = load.flowM3h;
   }
-  let r = solveNetwork(ctx.prep, laws, demand, q0, { maxIterations: DESIGN_MAX_ITERATIONS });
+  let r = solveNetwork(ctx.prep, laws, demand, q0, { maxIterations: limits.maxIterations });
   // The load links were cut (near-zero conductance): put their design flow back.
   for (const load of served) r.q[load.link] = load.flowM3h;
   const looped = pumpsOnLoops(ctx, state);
@@ -116,14 +123,14 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"]): Des
   const headError = (gains: readonly number[]): number[] => {
     if (!atStart) {
       looped.forEach((k, i) => (laws.gain[k] = gains[i]!));
-      r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: DESIGN_MAX_ITERATIONS });
+      r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: limits.maxIterations });
       for (const load of served) r.q[load.link] = load.flowM3h;
     }
     atStart = false;
     const heads = requiredHeads(traceCircuits(ctx, { mode, state, loads, served, laws, q: r.q, head: r.head }, NO_WATCH));
     return looped.map((k) => (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1) - laws.gain[k]!);
   };
-  const heads = looped.length > 0 ? settleBySecant(looped.map((k) => laws.gain[k]!), headError, HEAD_ROUNDS, HEAD_TOLERANCE_KPA) : null;
+  const heads = looped.length > 0 ? settleBySecant(looped.map((k) => laws.gain[k]!), headError, limits.headRounds, HEAD_TOLERANCE_KPA) : null;
   if (heads && !heads.settled) {
     ctx.findings.warning(
       "design.not-converged",
