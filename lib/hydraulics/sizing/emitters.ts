@@ -118,8 +118,8 @@ export function hotWaterResult(ctx: EngineContext): Results["hotWater"] {
   // temperature does: water at that temperature cannot bring the store above it.
   const { hotWaterFlowTemperatureC: hw, maxFlowTemperatureC: max } = ctx.doc.design;
   const hottestC = hw ?? max;
-  const field = hw !== null && hw !== undefined ? "design.hotWaterFlowTemperatureC" : "design.maxFlowTemperatureC";
-  if (hottestC !== null && hottestC !== undefined && cyl.props.storeTemperatureC >= hottestC) {
+  const field = hw !== null ? "design.hotWaterFlowTemperatureC" : "design.maxFlowTemperatureC";
+  if (hottestC !== null && cyl.props.storeTemperatureC >= hottestC) {
     ctx.findings.warning(
       "hot-water.flow-too-cool",
       `${cyl.id}: store set to ${cyl.props.storeTemperatureC} °C but the hot-water flow is ${hottestC} °C, so the coil cannot reheat it (no reheat time); raise that flow temperature in Design conditions or lower the store setting`,
@@ -127,7 +127,7 @@ export function hotWaterResult(ctx: EngineContext): Results["hotWater"] {
       [field],
     );
   } else {
-    if (hottestC === null || hottestC === undefined) {
+    if (hottestC === null) {
       ctx.findings.info(
         "hot-water.flow-unknown",
         `${cyl.id}: no hot-water flow temperature stated, so the reheat time assumes the heat source can bring the store to ${cyl.props.storeTemperatureC} °C; state it in Design conditions to have that checked`,
