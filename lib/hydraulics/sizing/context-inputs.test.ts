@@ -5,20 +5,15 @@
  * and fluid.* findings for what cannot be used, naming the pipe or field and number.
  */
 import { describe, expect, it } from "vitest";
-import { parseSchematic } from "@/lib/schematic/parse";
-import { Findings } from "@/lib/hydraulics/findings/finding";
 import { COPPER_EPS_MM, COPPER_ID_MM } from "@/lib/hydraulics/testing/hand-calc";
+import { contextOf } from "@/lib/hydraulics/testing/context-of";
 import { smallSystem, type SmallSystem } from "@/lib/hydraulics/testing/small-system";
-import { createContext } from "./context";
 
 function context(change: (d: SmallSystem) => void = () => {}) {
   const d = smallSystem();
   change(d);
-  const parsed = parseSchematic(d);
-  if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
-  const findings = new Findings();
-  const ctx = createContext(parsed.doc, findings);
-  const geom = (id: string) => ctx.pipeGeom[parsed.doc.pipes.findIndex((p) => p.id === id)];
+  const { ctx, findings } = contextOf(d);
+  const geom = (id: string) => ctx.pipeGeom[ctx.doc.pipes.findIndex((p) => p.id === id)];
   const of = (code: string) => findings.list.filter((f) => f.code === code);
   return { ctx, geom, of, findings };
 }

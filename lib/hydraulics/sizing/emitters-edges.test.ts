@@ -5,6 +5,7 @@
  * the cylinder's reheat (V·ρ·cp·ΔT/P, references §1.1) with the coil limited to the source.
  */
 import { describe, expect, it } from "vitest";
+import { teeChain } from "@/lib/hydraulics/testing/tee-chain";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { en442LogW, WATER } from "@/lib/hydraulics/testing/hand-calc";
 
@@ -20,21 +21,9 @@ function parallel(loads: { id: string; type: string; props: Props }[], design: P
     parts.push(loads[0]);
     pipes.push(cu("f", "hp.flow", `${loads[0]!.id}.flow`), cu("ret", `${loads[0]!.id}.return`, "hp.return"));
   } else {
-    // hp.flow → tf0 → tf1 … ; each load from tf<i>.c / last tee's b, returns likewise
-    let flowFrom = "hp.flow";
-    let retTo = "hp.return";
-    loads.forEach((l, i) => {
-      parts.push(l);
-      const last = i === loads.length - 1;
-      if (last) {
-        pipes.push(cu(`f${i}`, flowFrom, `${l.id}.flow`), cu(`ret${i}`, `${l.id}.return`, retTo));
-        return;
-      }
-      parts.push({ id: `tf${i}`, type: "tee" }, { id: `tr${i}`, type: "tee" });
-      pipes.push(cu(`f${i}`, flowFrom, `tf${i}.a`), cu(`fl${i}`, `tf${i}.c`, `${l.id}.flow`), cu(`rl${i}`, `${l.id}.return`, `tr${i}.c`), cu(`ret${i}`, `tr${i}.a`, retTo));
-      flowFrom = `tf${i}.b`;
-      retTo = `tr${i}.b`;
-    });
+    const chain = teeChain(loads, cu);
+    parts.push(...chain.parts);
+    pipes.push(...chain.pipes);
   }
   return {
     format: "loopwright/schematic", version: 1, name: "emitter edges", fluid: { kind: "water" },

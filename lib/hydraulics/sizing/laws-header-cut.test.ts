@@ -10,31 +10,11 @@
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { flowM3h, WATER } from "@/lib/hydraulics/testing/hand-calc";
-
-function doc() {
-  const cu = (id: string, from: string, to: string, lengthM: number) => ({ id, from, to, material: "copper", size: "22", lengthM });
-  return {
-    format: "loopwright/schematic", version: 1, name: "header, assumed exchanger Kv", fluid: { kind: "water" },
-    design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 1000 },
-    parts: [
-      { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, waterVolumeL: 2, pumpCurve: [[0, 50], [1, 40], [2, 0]] } },
-      { id: "llh", type: "low-loss-header", props: { volumeL: 2 } },
-      { id: "pump", type: "pump", props: { curve: [[0, 50], [1, 40], [2, 0]] } },
-      { id: "r1", type: "radiator", props: { outputAtDt50W: 20000, heatLoadW: 4000, valveKv: 1, waterVolumeL: 8 } },
-      { id: "t", type: "tee" },
-      { id: "ev", type: "expansion-vessel", props: { volumeL: 12 } },
-    ],
-    pipes: [
-      cu("pf", "hp.flow", "llh.p1", 3), cu("pr", "llh.p2", "t.a", 2), cu("pr2", "t.b", "hp.return", 1),
-      { ...cu("v", "t.c", "ev.connection", 0.5), size: "15" },
-      cu("sf", "llh.p3", "pump.in", 3), cu("s1", "pump.out", "r1.flow", 2), cu("s2", "r1.return", "llh.p4", 5),
-    ],
-  };
-}
+import { headerDoc } from "@/lib/hydraulics/testing/header-system";
 
 describe("a header's primary pass is cut at design", () => {
   it("the primary carries the rated 5 kW at ΔT 10 K and no design flow rests on the assumed exchanger Kv", () => {
-    const out = calculate(doc());
+    const out = calculate(headerDoc({ ratedW: 5000, loadW: 4000, hpKv: null }));
     if (!out.ok) throw new Error(JSON.stringify(out.issues));
     const r = out.results;
     expect(r.assumptions.length).toBeGreaterThan(0); // the exchanger Kv is assumed

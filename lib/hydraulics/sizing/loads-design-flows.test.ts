@@ -8,6 +8,7 @@
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { flowM3h, WATER } from "@/lib/hydraulics/testing/hand-calc";
+import { teeChain } from "@/lib/hydraulics/testing/tee-chain";
 
 type Props = Record<string, unknown>;
 const cu = (id: string, from: string, to: string, lengthM = 2) => ({ id, from, to, material: "copper", size: "22", lengthM });
@@ -27,22 +28,9 @@ const near = (got: number | null, want: number) => expect(Math.abs(got! / want -
 
 /** heat pump → tee chain → loads in parallel → back. */
 function parallel(loads: { id: string; type: string; props: Props }[], design: Props = {}, fluid: Props = { kind: "water" }) {
-  const parts: unknown[] = [{ id: "hp", type: "heat-pump", props: { ratedOutputKw: 8, kv: 4, waterVolumeL: 20, pumpCurve: PUMP } }];
-  const pipes: unknown[] = [];
-  let flowFrom = "hp.flow";
-  let retTo = "hp.return";
-  loads.forEach((l, i) => {
-    parts.push(l);
-    if (i === loads.length - 1) {
-      pipes.push(cu(`f${i}`, flowFrom, `${l.id}.flow`), cu(`ret${i}`, `${l.id}.return`, retTo));
-      return;
-    }
-    parts.push({ id: `tf${i}`, type: "tee" }, { id: `tr${i}`, type: "tee" });
-    pipes.push(cu(`f${i}`, flowFrom, `tf${i}.a`), cu(`fl${i}`, `tf${i}.c`, `${l.id}.flow`), cu(`rl${i}`, `${l.id}.return`, `tr${i}.c`), cu(`ret${i}`, `tr${i}.a`, retTo));
-    flowFrom = `tf${i}.b`;
-    retTo = `tr${i}.b`;
-  });
-  return { format: "loopwright/schematic", version: 1, name: "loads", fluid, design: { ...DESIGN, ...design }, parts, pipes };
+  const hp = { id: "hp", type: "heat-pump", props: { ratedOutputKw: 8, kv: 4, waterVolumeL: 20, pumpCurve: PUMP } };
+  const chain = teeChain(loads, cu);
+  return { format: "loopwright/schematic", version: 1, name: "loads", fluid, design: { ...DESIGN, ...design }, parts: [hp, ...chain.parts], pipes: chain.pipes };
 }
 
 describe("heating: each kind of load gets q = P/(ρ·cp·ΔT)", () => {

@@ -14,32 +14,9 @@
 import { describe, expect, it } from "vitest";
 import { calculate } from "@/lib/hydraulics/calculate";
 import { bisect, copperDpKpa, curveHeadKpa, flowM3h, kvDpKpa, WATER } from "@/lib/hydraulics/testing/hand-calc";
+import { CURVE, headerDoc, type Opts } from "@/lib/hydraulics/testing/header-system";
 
 const W = WATER[40];
-const CURVE: [number, number][] = [[0, 50], [1, 40], [2, 0]];
-
-interface Opts { ratedW: number; loadW: number; hpKv?: number; valveKv?: number }
-function headerDoc(o: Opts) {
-  const cu = (id: string, from: string, to: string, lengthM: number) => ({ id, from, to, material: "copper", size: "22", lengthM });
-  return {
-    format: "loopwright/schematic", version: 1, name: "header", fluid: { kind: "water" },
-    design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 1000 },
-    parts: [
-      { id: "hp", type: "heat-pump", props: { ratedOutputKw: o.ratedW / 1000, kv: o.hpKv ?? 5, waterVolumeL: 2, pumpCurve: CURVE } },
-      { id: "llh", type: "low-loss-header", props: { volumeL: 2 } },
-      { id: "pump", type: "pump", props: { curve: CURVE } },
-      { id: "r1", type: "radiator", props: { outputAtDt50W: 20000, heatLoadW: o.loadW, valveKv: o.valveKv ?? 1, waterVolumeL: 8 } },
-      { id: "t", type: "tee" },
-      { id: "ev", type: "expansion-vessel", props: { volumeL: 12 } },
-    ],
-    pipes: [
-      cu("pf", "hp.flow", "llh.p1", 3), cu("pr", "llh.p2", "t.a", 2), cu("pr2", "t.b", "hp.return", 1),
-      { ...cu("v", "t.c", "ev.connection", 0.5), size: "15" },
-      cu("sf", "llh.p3", "pump.in", 3), cu("s1", "pump.out", "r1.flow", 2), cu("s2", "r1.return", "llh.p4", 5),
-    ],
-    scenarios: [{ name: "run", mode: "heating", valves: {} }],
-  };
-}
 function run(o: Opts) {
   const out = calculate(headerDoc(o));
   if (!out.ok) throw new Error(JSON.stringify(out.issues));

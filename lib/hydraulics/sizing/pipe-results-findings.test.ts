@@ -7,9 +7,8 @@
 import { describe, expect, it } from "vitest";
 import { Findings } from "@/lib/hydraulics/findings/finding";
 import { COPPER_EPS_MM, COPPER_ID_MM, pipeFlow, WATER } from "@/lib/hydraulics/testing/hand-calc";
+import { contextOf } from "@/lib/hydraulics/testing/context-of";
 import { smallSystem, type SmallSystem } from "@/lib/hydraulics/testing/small-system";
-import { parseSchematic } from "@/lib/schematic/parse";
-import { createContext } from "./context";
 import { pipeResults } from "./pipe-results";
 
 /** Water at the small system's 42.5 °C mean, references §1.1, linearly between 40 and 45 °C. */
@@ -21,10 +20,7 @@ const P1 = pipeFlow(0.26, COPPER_ID_MM["22"], COPPER_EPS_MM, 1, W);
 function run(limits: { maxVelocityMps?: number; targetGradientPaPerM?: number }, noFlow: string[] = [], edit: (d: SmallSystem) => void = () => {}) {
   const d = smallSystem();
   edit(d);
-  const parsed = parseSchematic(d);
-  if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
-  const findings = new Findings();
-  const ctx = createContext(parsed.doc, findings);
+  const { ctx, findings } = contextOf(d);
   Object.assign(ctx.doc.design, { maxVelocityMps: 5, targetGradientPaPerM: 5000 }, limits);
   const q = new Float64Array(ctx.model.links.length);
   ctx.doc.pipes.forEach((p, i) => (q[ctx.model.pipeLink[i]!] = noFlow.includes(p.id) ? 0 : 0.26));

@@ -6,11 +6,9 @@
  * is tested on both sides and exactly at the edge.
  */
 import { describe, expect, it, vi } from "vitest";
-import { Findings } from "@/lib/hydraulics/findings/finding";
 import { COPPER_EPS_MM, COPPER_ID_MM, pipeFlow, WATER } from "@/lib/hydraulics/testing/hand-calc";
+import { contextOf } from "@/lib/hydraulics/testing/context-of";
 import { smallSystem, type SmallSystem } from "@/lib/hydraulics/testing/small-system";
-import { parseSchematic } from "@/lib/schematic/parse";
-import { createContext } from "./context";
 import { pipeResults, suggestSize } from "./pipe-results";
 
 /** Water at the small system's 42.5 °C mean, references §1.1, linearly between 40 and 45 °C (ν to 0.15 %). */
@@ -18,13 +16,10 @@ const W = { rho: (WATER[40].rho + WATER[45].rho) / 2, cp: 0, nu: (WATER[40].nu +
 /** EN 10255 medium series OD × wall: DN15 21.3 × 2.6 → d 16.1 mm, DN20 26.9 × 2.6 → d 21.7 mm; ε 0.045 mm new steel (references §3.3). */
 const STEEL = { DN15: 16.1, DN20: 21.7, EPS: 0.045 };
 
-function contextOf(edit: (d: SmallSystem) => void = () => {}) {
+function edited(edit: (d: SmallSystem) => void = () => {}) {
   const d = smallSystem();
   edit(d);
-  const parsed = parseSchematic(d);
-  if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
-  const findings = new Findings();
-  return { ctx: createContext(parsed.doc, findings), findings };
+  return contextOf(d);
 }
 
 /** p1 (index 0 of the small system) as a steel pipe. */
@@ -38,7 +33,7 @@ describe("suggested size against the velocity limit", () => {
   it("15 mm when the limit is 2 % above its velocity, 22 mm when 2 % below", () => {
     const v15 = pipeFlow(0.26, COPPER_ID_MM["15"], COPPER_EPS_MM, 1, W).v;
     expect(v15).toBeCloseTo(0.497, 3);
-    const { ctx } = contextOf();
+    const { ctx } = edited();
     ctx.doc.design.targetGradientPaPerM = 5000;
     ctx.doc.design.maxVelocityMps = 1.02 * v15;
     expect(suggestSize(ctx, 0, 0.26)).toBe("15");
@@ -50,7 +45,7 @@ describe("suggested size against the velocity limit", () => {
 
   it("a velocity exactly at the limit passes (≤)", () => {
     // the engine's own velocity in a 15 mm pipe at 0.26 m³/h, read from a first run, is made the limit
-    const { ctx } = contextOf((d) => (d.pipes[0]!.size = "15"));
+    const { ctx } = edited((d) => (d.pipes[0]!.size = "15"));
     const q = new Float64Array(ctx.model.links.length);
     q[ctx.model.pipeLink[0]!] = 0.26;
     const v = pipeResults(ctx, q, "heating")[0]!.velocityMps!;
@@ -68,7 +63,7 @@ describe("suggested size against the gradient target", () => {
     const r15 = pipeFlow(1.5, STEEL.DN15, STEEL.EPS, 1, W).gradientPaPerM;
     const smooth = pipeFlow(1.5, STEEL.DN15, 0, 1, W).gradientPaPerM;
     expect(r15 / smooth).toBeGreaterThan(1.2);
-    const { ctx } = contextOf(steelP1);
+    const { ctx } = edited(steelP1);
     ctx.doc.design.maxVelocityMps = 5;
     ctx.doc.design.targetGradientPaPerM = 1.03 * r15;
     expect(suggestSize(ctx, 0, 1.5)).toBe("DN15");
@@ -79,7 +74,7 @@ describe("suggested size against the gradient target", () => {
   });
 
   it("a gradient exactly at the target passes (≤)", () => {
-    const { ctx } = contextOf((d) => {
+    const { ctx } = edited((d) => {
       steelP1(d);
       d.pipes[0]!.size = "DN15";
     });
@@ -97,14 +92,14 @@ describe("suggested size against the gradient target", () => {
     vi.resetModules();
     const fresh = await import("./pipe-results");
     const r15 = pipeFlow(1.5, STEEL.DN15, STEEL.EPS, 1, W).gradientPaPerM;
-    const { ctx } = contextOf(steelP1);
+    const { ctx } = edited(steelP1);
     ctx.doc.design.maxVelocityMps = 5;
     ctx.doc.design.targetGradientPaPerM = 0.97 * r15;
     expect(fresh.suggestSize(ctx, 0, 1.5)).toBe("DN20");
     ctx.doc.design.targetGradientPaPerM = 1.03 * r15;
     expect(fresh.suggestSize(ctx, 0, 1.5)).toBe("DN15");
     // copper: 15 mm at 0.26 m³/h (v 0.497 m/s) under a 0.6 m/s limit; 10 mm (1.19 m/s) is over it
-    const cu = contextOf().ctx;
+    const cu = edited().ctx;
     cu.doc.design.maxVelocityMps = 0.6;
     cu.doc.design.targetGradientPaPerM = 5000;
     expect(fresh.suggestSize(cu, 0, 0.26)).toBe("15");
@@ -114,20 +109,20 @@ describe("suggested size against the gradient target", () => {
 
 describe("no size", () => {
   it("no flow, no suggestion", () => {
-    const { ctx } = contextOf();
+    const { ctx } = edited();
     expect(suggestSize(ctx, 0, 0)).toBeNull();
     expect(suggestSize(ctx, 0, 5e-10)).toBeNull();
   });
 
   it("a flow of exactly the 1e-9 m³/h tolerance is sized (≥)", () => {
     // 1e-9 m³/h: v ≈ 1e-9 m/s, laminar, far inside both limits — the smallest copper size, 10 mm
-    const { ctx } = contextOf();
+    const { ctx } = edited();
     expect(suggestSize(ctx, 0, 1e-9)).toBe("10");
   });
 
   it("null when no size of the material meets the limits", () => {
     // 0.26 m³/h in copper 54 (d 51.6 mm): v = 0.0345 m/s, above a 0.03 m/s limit
-    const { ctx } = contextOf();
+    const { ctx } = edited();
     ctx.doc.design.maxVelocityMps = 0.03;
     expect(pipeFlow(0.26, 51.6, COPPER_EPS_MM, 1, W).v).toBeGreaterThan(0.03);
     expect(suggestSize(ctx, 0, 0.26)).toBeNull();
@@ -135,14 +130,14 @@ describe("no size", () => {
 
   it("null, not an error, for a flow too large for any size's Reynolds number to be computed", () => {
     // 1e308 m³/h: v = Q/A is 1e307 m/s or more in every bore (Re = v·d/ν overflows): above the limit, so no size is tried
-    const { ctx } = contextOf();
+    const { ctx } = edited();
     expect(suggestSize(ctx, 0, 1e308)).toBeNull();
   });
 });
 
 describe("fluid checks", () => {
   it("refuses a density or viscosity that is not positive and finite, naming it", () => {
-    const { ctx } = contextOf();
+    const { ctx } = edited();
     const fluid = ctx.fluid!;
     const with_ = (densityKgM3: number, kinematicViscosityM2s: number) => {
       ctx.fluid = { ...fluid, densityKgM3, kinematicViscosityM2s };

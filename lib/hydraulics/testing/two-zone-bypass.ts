@@ -1,6 +1,7 @@
 /**
  * Two radiator zones between manifolds, each behind a zone valve, and a differential bypass between
- * the manifolds' third outlets (bypass-verdict.test.ts, bypass-open-unknown.test.ts), with the hand
+ * the manifolds' third outlets (bypass-verdict.test.ts, bypass-open-unknown.test.ts,
+ * laws-bypass-cut.test.ts), with the hand
  * calculation of its zones: copper by Darcy–Weisbach and Colebrook, Kv drops by Δp = ρ/1000·(Q/Kv)²
  * (IEC 60534-1 in its Kv form), water at the 40 °C mean (IAPWS, references §1.1).
  */
@@ -11,7 +12,8 @@ export type Curve = [number, number][];
 export const STRONG: Curve = [[0, 60], [0.5, 55], [1, 40], [2, 0]];
 export const WEAK: Curve = [[0, 9], [0.5, 8], [1, 5], [2, 0]];
 
-export interface Opts { curve: Curve; valveKv: number; opening?: number | null; minFlow?: number; bypassKvs?: number }
+/** hpKv: the heat pump's exchanger Kv, 5 unless given; null leaves it unstated (a typical value is assumed). */
+export interface Opts { curve: Curve; valveKv: number; opening?: number | null; minFlow?: number; bypassKvs?: number; hpKv?: number | null }
 export function twoZoneBypass(o: Opts) {
   const cu = (id: string, from: string, to: string, size: string, lengthM: number) => ({ id, from, to, material: "copper", size, lengthM });
   const rad = (id: string, heatLoadW: number) => ({ id, type: "radiator", props: { outputAtDt50W: 8000, heatLoadW, valveKv: o.valveKv, waterVolumeL: 8 } });
@@ -19,7 +21,7 @@ export function twoZoneBypass(o: Opts) {
     format: "loopwright/schematic", version: 1, name: "bypass verdict", fluid: { kind: "water" },
     design: { flowTemperatureC: 45, returnTemperatureC: 35, coldFillPressureBar: 1.5, safetyValveBar: 3, staticHeightM: 5, maxVelocityMps: 1.5, targetGradientPaPerM: 1000 },
     parts: [
-      { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, minFlowM3h: o.minFlow ?? 0, kv: 5, waterVolumeL: 2, pumpCurve: o.curve } },
+      { id: "hp", type: "heat-pump", props: { ratedOutputKw: 5, minFlowM3h: o.minFlow ?? 0, ...(o.hpKv === null ? {} : { kv: o.hpKv ?? 5 }), waterVolumeL: 2, pumpCurve: o.curve } },
       { id: "mf", type: "manifold", props: { outlets: 3 } },
       { id: "mr", type: "manifold", props: { outlets: 3 } },
       { id: "zv1", type: "zone-valve", props: { kvs: 4, open: true } },
