@@ -24,6 +24,11 @@ describe("design.not-converged", () => {
     expect(Number(m![1])).toBeGreaterThan(1e-7);
   });
 
+  it("a pump head whose re-solves run out of iterations: a warning", () => {
+    // each secant round re-solves the network: one gradient-method step leaves it unconverged
+    expect(notConverged(fixedBypass(), { maxIterations: 1, headRounds: 30 })).toHaveLength(1);
+  });
+
   it("the same head given its full 30 rounds settles, and says nothing", () => {
     expect(notConverged(fixedBypass(), { maxIterations: 40, headRounds: 30 })).toEqual([]);
   });

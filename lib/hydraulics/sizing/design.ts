@@ -119,18 +119,17 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"], limi
   // diverges where the pump's own drop grows faster with the bypass flow than
   // the bypass flow grows with the head (a small heat-source Kv beside a fixed
   // bypass), so it is solved by secant steps on f(g) = H(g) − g.
-  let atStart = true; // r already holds the solution at the starting heads
-  const headError = (gains: readonly number[]): number[] => {
-    if (!atStart) {
-      looped.forEach((k, i) => (laws.gain[k] = gains[i]!));
-      r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: limits.maxIterations });
-      for (const load of served) r.q[load.link] = load.flowM3h;
-    }
-    atStart = false;
+  const headError = (): number[] => {
     const heads = requiredHeads(traceCircuits(ctx, { mode, state, loads, served, laws, q: r.q, head: r.head }, NO_WATCH));
     return looped.map((k) => (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1) - laws.gain[k]!);
   };
-  const heads = looped.length > 0 ? settleBySecant(looped.map((k) => laws.gain[k]!), headError, limits.headRounds, HEAD_TOLERANCE_KPA) : null;
+  const resolve = (gains: readonly number[]): number[] => {
+    looped.forEach((k, i) => (laws.gain[k] = gains[i]!));
+    r = solveNetwork(ctx.prep, laws, demand, r.q, { maxIterations: limits.maxIterations });
+    for (const load of served) r.q[load.link] = load.flowM3h;
+    return headError();
+  };
+  const heads = looped.length > 0 ? settleBySecant(looped.map((k) => laws.gain[k]!), headError(), resolve, limits.headRounds, HEAD_TOLERANCE_KPA) : null;
   if (heads && !heads.settled) {
     ctx.findings.warning(
       "design.not-converged",

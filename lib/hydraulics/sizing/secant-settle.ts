@@ -16,14 +16,16 @@ export interface Settled {
   rounds: number;
 }
 
+/** `startResidual`: f at `start`, which the caller has already (design.ts solved the network there). */
 export function settleBySecant(
   start: readonly number[],
+  startResidual: readonly number[],
   residual: (values: readonly number[]) => number[],
   maxRounds: number,
   tolerance: number,
 ): Settled {
   let g = [...start];
-  let f = residual(g);
+  let f = [...startResidual];
   let prev: { g: number[]; f: number[] } | null = null;
   for (let rounds = 0; ; rounds++) {
     const worst = Math.max(...f.map(Math.abs));

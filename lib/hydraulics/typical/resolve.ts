@@ -7,7 +7,7 @@
 import { craneFt } from "@/lib/hydraulics/losses/crane";
 import { kvForLossCoefficient, kvForPressureDrop } from "@/lib/hydraulics/losses/kv";
 import { flowForHeat } from "@/lib/hydraulics/flow";
-import type { PipeGeometry } from "@/lib/hydraulics/network/behaviour";
+import { NO_FLOW_M3H, type PipeGeometry } from "@/lib/hydraulics/network/behaviour";
 import { splitPortRef } from "@/lib/schematic/parts";
 import type { Part, Schematic } from "@/lib/schematic/schema";
 import type { Assumption } from "@/lib/schematic/results";
@@ -85,7 +85,8 @@ function typicalValue(part: Part, rule: TypicalRule, c: Ctx): { value: number; w
     }
     case "dp-at-flow": {
       const q = ownFlowM3h(part, c);
-      if (q === null || !c.fluid) return null;
+      // Below no flow a "Δp at its flow" Kv tends to 0 and its resistance past any float (a rating of 1e-300 kW).
+      if (q === null || !c.fluid || q < NO_FLOW_M3H) return null;
       const kv = kvForPressureDrop(q, rule.dpKpa * 1000, c.fluid.densityKgM3);
       return { value: kv, working: `${rule.dpKpa} kPa at its flow ${q.toFixed(3)} m³/h → Kv = q·√((ρ/1000)/(Δp/100 kPa)) = ${kv.toFixed(2)}` };
     }

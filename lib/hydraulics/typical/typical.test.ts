@@ -114,3 +114,24 @@ describe("a boiler without a Kv: no typical value is safe", () => {
     expect(heating(r).parts.find((p) => p.id === "hp")!.pressureDropKpa).toBe(0);
   });
 });
+
+describe("a rating so small its flow is no flow", () => {
+  // 1e-300 kW at 5 K is about 1.7e-301 m³/h, below the 1e-5 m³/h the engine counts as no flow: a Kv
+  // "20 kPa at its flow" would be about 4e-301 and its resistance past any float (a NaN in every flow).
+  const doc = (ratedOutputKw: number) => ({
+    format: "loopwright/schematic", version: 1, fluid: { kind: "water" }, design: { flowTemperatureC: 35, returnTemperatureC: 30 },
+    parts: [{ id: "hp", type: "heat-pump", props: { ratedOutputKw } }],
+    pipes: [{ id: "p", from: "hp.flow", to: "hp.return", material: "copper", size: "15", lengthM: 1 }],
+  });
+  it("gets no Kv assumed from its flow, and sizes without an internal error", () => {
+    const out = calculate(doc(1e-300));
+    if (!out.ok) throw new Error(JSON.stringify(out.issues));
+    resultsSchema.parse(out.results);
+    expect(out.results.assumptions.map((a) => a.ref)).toEqual(["hp.waterVolumeL"]);
+  });
+  it("a real rating (5 kW) does get one", () => {
+    const out = calculate(doc(5));
+    if (!out.ok) throw new Error(JSON.stringify(out.issues));
+    expect(out.results.assumptions.map((a) => a.ref)).toEqual(["hp.kv", "hp.waterVolumeL"]);
+  });
+});
