@@ -17,6 +17,7 @@ import { simulate, type Simulation } from "./scenarios/simulate";
 import { scenarioState } from "./scenarios/run";
 import { sizeBypasses } from "./sizing/bypass";
 import { createContext, type EngineContext } from "./sizing/context";
+import { directionFindings } from "./sizing/direction";
 import { emitterResults, hotWaterResult } from "./sizing/emitters";
 import { runMode, type ModeRun } from "./sizing/mode";
 import { noFlowFinding } from "./sizing/pipe-results";
@@ -105,6 +106,8 @@ export function calculateSchematic(doc: Schematic): Results {
   const heating = hydraulic ? inHeating(() => runMode(ctx, "heating")) : null;
   const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
   const hotWater = hydraulic && hasCylinder ? inHotWater(() => runMode(ctx, "hot-water")) : null;
+  // parts piped the wrong way round: a fact of the drawing, said once whatever the mode
+  directionFindings(ctx, [heating, hotWater].flatMap((m) => (m ? [m] : [])));
   if (heating) inHeating(() => minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode"));
   noFlowFinding(ctx, [...new Set([...(heating?.noFlow ?? []), ...(hotWater?.noFlow ?? [])])]);
   const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];
