@@ -27,7 +27,8 @@ import { resistanceRefs } from "./typical/resolve";
 // 1.1.0: findings name the mode or scenario they were found in; scenario pipes carry their velocity.
 // 1.2.0: typical values for what the designer left empty (assumptions, restsOn), pump settings, magnetic filter.
 // 1.3.0: one finding per code and refs; pipe (and part) flows rest on the assumed resistances where loops split them.
-export const ENGINE_VERSION = "1.3.0";
+// 1.4.0: heat sources, pumps and loads piped the wrong way round are errors (heat-source/pump/load.reversed).
+export const ENGINE_VERSION = "1.4.0";
 
 export type CalculateResult = { ok: true; results: Results } | { ok: false; issues: Issue[] };
 
