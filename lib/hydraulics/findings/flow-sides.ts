@@ -6,8 +6,8 @@
  * flow), loads (flow → return), a buffer's or header's passes — and the
  * dp-bypasses (shut at design); what stays joined by pipes, pumps and valves is
  * one piece at one temperature (pumps and valves do not heat or cool the water).
- * Each port of those parts votes for the side its name says: a heat source's
- * flow port and a load's return port each say which side their piece is on.
+ * Each port of those parts votes for the side it is named for (flow port, or a
+ * buffer's primary or secondary flow: flow; return port: return) on its piece.
  * A piece takes the side most of its ports say (none on a tie); a part whose
  * ports sit more on the wrong sides than the right ones is piped the wrong way
  * round. The majority decides, so one reversed radiator among others, or one
