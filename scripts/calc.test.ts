@@ -20,7 +20,7 @@ describe("npm run calc", () => {
     const r = run(write("ok.json", JSON.stringify(smallSystem())));
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout);
-    expect(out.engine).toBe("1.3.0");
+    expect(out.engine).toBe("1.4.0");
     expect(out.findings.length).toBeGreaterThan(0);
   });
 

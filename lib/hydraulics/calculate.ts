@@ -17,6 +17,7 @@ import { simulate, type Simulation } from "./scenarios/simulate";
 import { scenarioState } from "./scenarios/run";
 import { sizeBypasses } from "./sizing/bypass";
 import { createContext, type EngineContext } from "./sizing/context";
+import { directionFindings } from "./sizing/direction";
 import { emitterResults, hotWaterResult } from "./sizing/emitters";
 import { runMode, type ModeRun } from "./sizing/mode";
 import { noFlowFinding } from "./sizing/pipe-results";
@@ -26,7 +27,8 @@ import { resistanceRefs } from "./typical/resolve";
 // 1.1.0: findings name the mode or scenario they were found in; scenario pipes carry their velocity.
 // 1.2.0: typical values for what the designer left empty (assumptions, restsOn), pump settings, magnetic filter.
 // 1.3.0: one finding per code and refs; pipe (and part) flows rest on the assumed resistances where loops split them.
-export const ENGINE_VERSION = "1.3.0";
+// 1.4.0: heat sources, pumps and loads piped the wrong way round are errors (heat-source/pump/load.reversed).
+export const ENGINE_VERSION = "1.4.0";
 
 export type CalculateResult = { ok: true; results: Results } | { ok: false; issues: Issue[] };
 
@@ -105,6 +107,8 @@ export function calculateSchematic(doc: Schematic): Results {
   const heating = hydraulic ? inHeating(() => runMode(ctx, "heating")) : null;
   const hasCylinder = doc.parts.some((p) => p.type === "cylinder");
   const hotWater = hydraulic && hasCylinder ? inHotWater(() => runMode(ctx, "hot-water")) : null;
+  // parts piped the wrong way round: a fact of the drawing, said once whatever the mode
+  directionFindings(ctx, [heating, hotWater].flatMap((m) => (m ? [m] : [])));
   if (heating) inHeating(() => minFlowCheck(ctx, heating.result.heatSourceFlowM3h, "at design flow in heating mode"));
   noFlowFinding(ctx, [...new Set([...(heating?.noFlow ?? []), ...(hotWater?.noFlow ?? [])])]);
   const sizings = hydraulic ? sizeBypasses(ctx, heating) : [];

@@ -30,6 +30,9 @@ const checkTitles: Record<string, string> = {
   "valve.shut": "Valves drawn shut",
   "part.unconnected": "Parts not connected",
   "part.open-port": "Ports left open",
+  "heat-source.reversed": "Heat source backwards",
+  "pump.reversed": "Pump drawn backwards",
+  "load.reversed": "Emitters piped backwards",
 };
 
 export function checkTitle(code: string): string {

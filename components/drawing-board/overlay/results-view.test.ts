@@ -116,4 +116,10 @@ describe("findings grouped by check", () => {
     expect(groups[1]!.title).toBe("Pipes too fast");
     expect(groups[2]!.title).toBe("Pipes with no flow");
   });
+
+  it("parts piped the wrong way round read in our words", () => {
+    const codes = ["heat-source.reversed", "pump.reversed", "load.reversed"];
+    const backwards = codes.map((code) => ({ severity: "error" as const, code, message: "m", refs: ["x"] }));
+    expect(groupFindings(backwards).map((g) => g.title).sort()).toEqual(["Emitters piped backwards", "Heat source backwards", "Pump drawn backwards"]);
+  });
 });

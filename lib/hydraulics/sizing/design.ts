@@ -121,6 +121,9 @@ export function solveDesign(ctx: EngineContext, mode: NetworkState["mode"], limi
   // bypass), so it is solved by secant steps on f(g) = H(g) − g.
   const headError = (): number[] => {
     const heads = requiredHeads(traceCircuits(ctx, { mode, state, loads, served, laws, q: r.q, head: r.head }, NO_WATCH));
+    // A pump the loads' design flow passes backwards (drawn the wrong way round: pump.reversed or
+    // heat-source.reversed, direction.ts) gets its head the other way, so the flows settle as if it
+    // were turned round; without the sign its head and its bypass flow chase each other and never settle.
     return looped.map((k) => (heads.get(k) ?? 0) * (r.q[k]! < 0 ? -1 : 1) - laws.gain[k]!);
   };
   const resolve = (gains: readonly number[]): number[] => {
