@@ -14,6 +14,7 @@
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
 import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
 import { PIPE_DROP_SLOTS, pipeDropInto as pipeDropIntoImport, pipePressureDrop } from "@/lib/hydraulics/pipes/pressure-drop";
+import { transitionExponent, turbulentExponent } from "./friction-exponent";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 
 // Used per link per solver iteration: bound once at load (friction/darcy.ts says why).
@@ -216,12 +217,12 @@ export class LinkTable {
   }
 
   /**
-   * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope uses
-   * each part's local exponent: friction ∝ q laminar (Hagen–Poiseuille),
-   * ≈ q^1.75…2 turbulent (Blasius … fully rough; 1.9 taken), 2 in the
-   * interpolated transition; fittings ∝ q². An approximate slope only slows
-   * Newton a little; the solution still satisfies the exact law. The last
-   * evaluation is cached: on a tree, design flows repeat exactly.
+   * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope is
+   * exact, each part by its local exponent n = d ln h / d ln q: friction ∝ q
+   * laminar (Hagen–Poiseuille), 2 + d ln f / d ln Re in the turbulent and
+   * transition ranges (friction-exponent.ts); fittings ∝ q². An exact slope
+   * keeps Newton quadratic (Todini & Pilati 1988 use the exact derivative).
+   * The last evaluation is cached: on a tree, design flows repeat exactly.
    */
   private pipe(k: number, q: number, out: Float64Array): void {
     // Below 1e-6 m³/h the flow is laminar in any catalogue pipe: h is linear there.
@@ -249,7 +250,7 @@ export class LinkTable {
       if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
       const fr = r[0]! / 1000;
       const fit = r[1]! / 1000;
-      const n = re < RE_LAMINAR_MAX ? 1 : re >= RE_TURBULENT_MIN ? 1.9 : 2;
+      const n = re < RE_LAMINAR_MAX ? 1 : re >= RE_TURBULENT_MIN ? turbulentExponent(re, this.relRough[k]!, this.lastX[k]!) : transitionExponent(re, r[3]!, this.anchorF[k]!);
       this.lastA[k] = a;
       this.lastH[k] = fr + fit;
       this.lastG[k] = (n * fr + 2 * fit) / a + OPEN_R;
