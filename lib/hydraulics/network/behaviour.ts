@@ -167,6 +167,15 @@ export class LinkTable {
     this.set(k, law, LAW.pump);
   }
 
+  /**
+   * Where the gradient method starts a pump that runs on its curve: the middle
+   * of the curve's flow range, m³/h (EPANET starts a pump at its design flow,
+   * Rossman, EPANET 2.2 manual §12.2 — recalled from memory); 0 for any other link.
+   */
+  startFlow(k: number): number {
+    return this.law[k] === LAW.pump ? this.pumps.get(k)!.qMax / 2 : 0;
+  }
+
   evaluate(k: number, q: number, out: Float64Array): void {
     this.evaluateAs(this.law[k]!, k, q, out);
     out[0] = out[0]! - this.gain[k]!;

@@ -111,4 +111,13 @@ describe("gradient method (Todini & Pilati 1988)", () => {
     const r = solveNetwork(prep, t, new Float64Array(2), Float64Array.from([0.1, 0.1]));
     expect(Math.abs(r.q[0]!)).toBeLessThan(1e-5);
   });
+
+  it("start flow: a pump on its curve starts mid-range (last point 2 m³/h → 1), in design (loss-free) and any other link 0", () => {
+    const t = new LinkTable(3, 1000, 1e-6);
+    t.setPump(0, [[0, 20], [1, 10], [2, 0]], 0);
+    t.setPump(1, [[0, 20], [1, 10], [2, 0]], 0, LAW.zero);
+    t.c[2] = kvCoefficient(2, 1000);
+    t.set(2, LAW.kv);
+    expect([t.startFlow(0), t.startFlow(1), t.startFlow(2)]).toEqual([1, 0, 0]);
+  });
 });
