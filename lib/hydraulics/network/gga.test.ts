@@ -30,6 +30,15 @@ describe("gradient method (Todini & Pilati 1988)", () => {
     expect(r.head[1]! - r.head[0]!).toBeCloseTo(6 - 4 * (6 / 7), 6);
   });
 
+  it("stops once the error left is estimated below a tenth of the accuracy: Newton (Heron's steps from Q 0.5) is done after 4 solves at accuracy 1e-4", () => {
+    // Steps |ΔQ|/Q by hand: 0.548, 0.177, 0.0159, 1.27e-4, 8e-9. The fourth is above 1e-4, but it shrank by
+    // ρ = 0.008, so the error left is ≈ ρ/(1 − ρ)·1.27e-4 = 1.0e-6 < 1e-5: converged without a fifth solve.
+    const r = solveNetwork(prepare(topo(2, [[0, 1], [1, 0]], [0])), quadraticLoop(6, 4, 3), new Float64Array(2), Float64Array.from([0.5, 0.5]), { accuracy: 1e-4 });
+    expect(r.converged).toBe(true);
+    expect(r.iterations).toBe(4);
+    expect(r.q[0]).toBeCloseTo(Math.sqrt(6 / 7), 7);
+  });
+
   it("the same loop at 80 % speed (H0 × 0.64) moves along the affinity parabola: Q × 0.8 exactly", () => {
     const r = solveNetwork(prepare(topo(2, [[0, 1], [1, 0]], [0])), quadraticLoop(3.84, 4, 3), new Float64Array(2), Float64Array.from([0.5, 0.5]));
     expect(r.converged).toBe(true);
