@@ -12,7 +12,7 @@
  * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
+import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorIn } from "@/lib/hydraulics/friction/darcy";
 import { PIPE_DROP_SLOTS, pipeDropInto as pipeDropIntoImport, pipePressureDrop } from "@/lib/hydraulics/pipes/pressure-drop";
 import { transitionExponent, turbulentExponent } from "./friction-exponent";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
@@ -144,10 +144,7 @@ export class LinkTable {
         ? 0
         : 1;
     if (!this.badPipe[k]) {
-      const rel = this.relRough[k]!;
-      let anchor = this.anchorByRelRough.get(rel);
-      if (anchor === undefined) this.anchorByRelRough.set(rel, (anchor = transitionAnchorF(rel)));
-      this.anchorF[k] = anchor;
+      this.anchorF[k] = transitionAnchorIn(this.anchorByRelRough, this.relRough[k]!);
     }
     this.set(k, law, LAW.pipe);
   }
