@@ -17,7 +17,7 @@
  */
 import { partRegistry, sharedPortsOf, splitPortRef } from "@/lib/schematic/parts";
 import type { Part, Schematic } from "@/lib/schematic/schema";
-import { IdIndex } from "./id-index";
+import { IdIndex, portIndex } from "@/lib/schematic/id-index";
 
 export type LinkRole =
   | "pipe"
@@ -111,13 +111,6 @@ function partLinks(part: Part): readonly LinkSpec[] {
   return specs;
 }
 
-/** ref[start ..] equals name, compared in place (String#endsWith is a runtime call, not compiled inline). */
-function tailIs(ref: string, start: number, name: string): boolean {
-  if (name.length !== ref.length - start) return false;
-  for (let c = 0; c < name.length; c++) if (ref.charCodeAt(start + c) !== name.charCodeAt(c)) return false;
-  return true;
-}
-
 export function buildModel(doc: Schematic): NetworkModel {
   const vesselNodes: number[] = [];
   // A part's ports get consecutive nodes in portsOf order (a junction: one node),
@@ -161,9 +154,7 @@ export function buildModel(doc: Schematic): NetworkModel {
     const index = dot < 0 ? -1 : partIndex.prefixOf(ref, dot);
     if (index < 0) return -1;
     // the port matched in place (its name is the ref's tail): no string cut per pipe end
-    const ports = portLists[index]!;
-    let j = ports.length - 1;
-    while (j >= 0 && !tailIs(ref, dot + 1, ports[j]!)) j--;
+    const j = portIndex(portLists[index]!, ref, dot + 1);
     return j < 0 ? -1 : portSlot[index]! + j;
   };
   const portNode: Lookup<number> = {

@@ -1,6 +1,6 @@
-/** IdIndex against a Map built from the same ids (its documented equivalent). */
+/** IdIndex against a Map and a Set built from the same ids (its documented equivalents); portIndex against indexOf. */
 import { describe, expect, it } from "vitest";
-import { IdIndex } from "./id-index";
+import { IdIndex, portIndex } from "./id-index";
 
 describe("IdIndex: ids → position, looked up by a reference's prefix", () => {
   it("finds every id of 500 (the table fills past a quarter, so probes collide) as a Map does", () => {
@@ -20,5 +20,21 @@ describe("IdIndex: ids → position, looked up by a reference's prefix", () => {
     const ids = ["a", "b", "a"];
     const map = new Map(ids.map((id, i) => [id, i]));
     expect(new IdIndex(ids).prefixOf("a.x", 1)).toBe(map.get("a"));
+  });
+  it("repeats flags each later occurrence, as a Set of the ids seen so far would", () => {
+    const ids = ["a", "b", "a", "c", "b", "a"];
+    const seen = new Set<string>();
+    const expected = ids.map((id) => (seen.has(id) ? 1 : (seen.add(id), 0)));
+    expect([...new IdIndex(ids).repeats]).toEqual(expected);
+  });
+});
+
+describe("portIndex: the port a reference's tail names", () => {
+  it("finds each port as indexOf of the cut tail does, and −1 for a longer, shorter or unknown name", () => {
+    const ports = ["flow", "return", "p1", "p10"];
+    for (const ref of ["m.flow", "m.return", "m.p1", "m.p10", "m.p", "m.p100", "m.flows", "m.retur", "m."]) {
+      const dot = ref.lastIndexOf(".");
+      expect(portIndex(ports, ref, dot + 1), ref).toBe(ports.indexOf(ref.slice(dot + 1)));
+    }
   });
 });
