@@ -5,7 +5,7 @@
  * Counted through Math.log10: one call for the Haaland start, one per Newton step (g(x) = x + 2·log10(…)).
  */
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { colebrookUnchecked } from "./colebrook";
+import { colebrookUnchecked, haaland, haalandRoughTerm, haalandStartX } from "./colebrook";
 
 afterEach(() => vi.restoreAllMocks());
 
@@ -49,5 +49,12 @@ describe("Colebrook by Newton on x = 1/√f: step counts", () => {
     const { calls, f } = log10Calls(() => colebrookUnchecked(1e5, 0, 1e6));
     expect(calls).toBe(50);
     expect(f).toBeNaN();
+  });
+  it("the Haaland start from a kept rough term is haaland()'s 1/√f, and Newton from it gives the cold result to the last bit", () => {
+    for (const [re, rr] of [[4000, 0], [1e5, 1e-4], [2e6, 0.01]] as const) {
+      const start = haalandStartX(re, haalandRoughTerm(rr));
+      expect(start).toBeCloseTo(1 / Math.sqrt(haaland(re, rr)), 12);
+      expect(colebrookUnchecked(re, rr, start)).toBe(colebrookUnchecked(re, rr));
+    }
   });
 });

@@ -44,6 +44,17 @@ export function colebrook(re: number, relRoughness: number): number {
   return colebrookUnchecked(re, relRoughness);
 }
 
+/** Haaland's (ε/D/3.7)^1.11 (Haaland 1983): the part of its 1/√f that depends on the pipe alone, kept per pipe by a solver. */
+export function haalandRoughTerm(relRoughness: number): number {
+  return (relRoughness / 3.7) ** 1.11;
+}
+
+/** Haaland's 1/√f = |−1.8·log10(roughTerm + 6.9/Re)| (Haaland 1983), Colebrook's Newton start. */
+export function haalandStartX(re: number, roughTerm: number): number {
+  const h = -1.8 * Math.log10(roughTerm + 6.9 / re); // Haaland, as haaland()
+  return 1 / Math.sqrt(1 / (h * h));
+}
+
 /**
  * colebrook() without the argument checks, for hot loops whose caller has
  * already validated Re > 0 and 0 ≤ ε/D < 1 (same iteration, same result to
@@ -58,10 +69,7 @@ export function colebrookUnchecked(re: number, relRoughness: number, guessX = 0)
     // Warm start: a network solver passes the x = 1/√f this pipe had at its
     // previous flow; Newton then needs one or two steps to the same 1e-10.
     x = guessX;
-  } else {
-    const h = -1.8 * Math.log10((relRoughness / 3.7) ** 1.11 + 6.9 / re); // Haaland, as haaland()
-    x = 1 / Math.sqrt(1 / (h * h));
-  }
+  } else x = haalandStartX(re, haalandRoughTerm(relRoughness));
   for (let k = 0; k < 50; k++) {
     const arg = a + b * x;
     const g = x + 2 * Math.log10(arg);

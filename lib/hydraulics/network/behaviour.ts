@@ -14,6 +14,7 @@
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
 import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorIn } from "@/lib/hydraulics/friction/darcy";
 import { PIPE_DROP_SLOTS, pipeDropInto as pipeDropIntoImport, pipePressureDrop } from "@/lib/hydraulics/pipes/pressure-drop";
+import { haalandRoughTerm, haalandStartX } from "@/lib/hydraulics/friction/colebrook";
 import { transitionExponent, turbulentExponent } from "./friction-exponent";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 
@@ -89,6 +90,9 @@ export class LinkTable {
   private readonly anchorF: Float64Array;
   /** the same by ε/D: pipes of one catalogue size share it, so it is solved once per size */
   private readonly anchorByRelRough = new Map<number, number>();
+  /** Haaland's rough term (ε/D/3.7)^1.11 of each pipe, by ε/D like the anchor: Colebrook's first start costs no power */
+  private readonly roughTerm: Float64Array;
+  private readonly roughTermByRelRough = new Map<number, number>();
   private readonly pumps = new Map<number, PumpData>();
   /** per-pipe constants, filled by setPipe: cross-section πD²/4 and relative roughness ε/D */
   private readonly area: Float64Array;
@@ -122,6 +126,7 @@ export class LinkTable {
     this.anchorF = new Float64Array(count);
     this.area = new Float64Array(count);
     this.relRough = new Float64Array(count);
+    this.roughTerm = new Float64Array(count);
     this.badPipe = new Uint8Array(count);
     this.rho = densityKgM3;
     this.nu = kinematicViscosityM2s;
@@ -144,7 +149,11 @@ export class LinkTable {
         ? 0
         : 1;
     if (!this.badPipe[k]) {
-      this.anchorF[k] = transitionAnchorIn(this.anchorByRelRough, this.relRough[k]!);
+      const rel = this.relRough[k]!;
+      this.anchorF[k] = transitionAnchorIn(this.anchorByRelRough, rel);
+      let term = this.roughTermByRelRough.get(rel);
+      if (term === undefined) this.roughTermByRelRough.set(rel, (term = haalandRoughTerm(rel)));
+      this.roughTerm[k] = term;
     }
     this.set(k, law, LAW.pipe);
   }
@@ -250,7 +259,14 @@ export class LinkTable {
         });
       }
       const r = this.drop;
-      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, this.lastX[k]!, this.anchorF[k]!);
+      let start = this.lastX[k]!;
+      if (start === 0) {
+        // no earlier turbulent point: Colebrook's Haaland start made here from the pipe's kept
+        // rough term (Re as pipeDropInto computes it), the same start colebrookUnchecked makes
+        const re = (Math.abs(a / 3600 / this.area[k]!) * this.d[k]!) / this.nu;
+        if (re >= RE_TURBULENT_MIN) start = haalandStartX(re, this.roughTerm[k]!);
+      }
+      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, start, this.anchorF[k]!);
       const re = r[2]!;
       if (re >= RE_TURBULENT_MIN) this.lastX[k] = 1 / Math.sqrt(r[3]!);
       if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
