@@ -212,7 +212,10 @@ export class LinkTable {
         this.kv(k, q, out);
         return;
       case LAW.pipe:
-        this.pipe(k, q, out);
+        // q handed over in out[0], not as an argument: pipe() is too large to be inlined into
+        // the solver, and a double passed to a call that is not inlined is boxed (a heap number per link per iteration)
+        out[0] = q;
+        this.pipe(k, out);
         return;
       case LAW.pump:
         this.pump(k, q, out);
@@ -239,7 +242,8 @@ export class LinkTable {
    * keeps Newton quadratic (Todini & Pilati 1988 use the exact derivative).
    * The last evaluation is cached: on a tree, design flows repeat exactly.
    */
-  private pipe(k: number, q: number, out: Float64Array): void {
+  private pipe(k: number, out: Float64Array): void {
+    const q = out[0]!;
     // Below 1e-6 m³/h the flow is laminar in any catalogue pipe: h is linear there.
     const qTiny = 1e-6;
     const a = Math.max(Math.abs(q), qTiny);
