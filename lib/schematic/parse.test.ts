@@ -52,6 +52,17 @@ describe("parseSchematic", () => {
     expect(issues[1]!.message).toContain("ports: flow, return");
   });
 
+  it("a pipe id repeating a part id is a duplicate (parts come first); an end naming a pipe's id names no part", () => {
+    const doc = smallSystem();
+    doc.pipes[0]!.id = "r1";
+    doc.pipes[1]!.from = `${doc.pipes[2]!.id}.a`;
+    const issues = issuesOf(doc);
+    expect(issues.map((i) => i.message)).toEqual([
+      "pipes[0].id: id 'r1' is used more than once",
+      `pipes[1].from: pipe '${doc.pipes[1]!.id}' names part '${doc.pipes[2]!.id}', which does not exist`,
+    ]);
+  });
+
   it("manifold ports come from its outlets", () => {
     expect(portsOf({ type: "manifold", props: { outlets: 3 } } as never)).toEqual(["common", "p1", "p2", "p3"]);
   });

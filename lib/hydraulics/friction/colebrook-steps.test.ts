@@ -5,7 +5,7 @@
  * Counted through Math.log10: one call for the Haaland start, one per Newton step (g(x) = x + 2·log10(…)).
  */
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { colebrookUnchecked } from "./colebrook";
+import { colebrookUnchecked, haaland, haalandRoughTerm, haalandStartX } from "./colebrook";
 
 afterEach(() => vi.restoreAllMocks());
 
@@ -36,11 +36,25 @@ describe("Colebrook by Newton on x = 1/√f: step counts", () => {
     const x = 1 / Math.sqrt(colebrookUnchecked(1e5, 1e-4));
     expect(log10Calls(() => colebrookUnchecked(1e5, 1e-4, x)).calls).toBe(1);
   });
+  it("from a warm start 0.1 % off the root: two steps — the second's error estimate (|g''/2g'|·Δx² < 1e-12) ends it, no confirming third", () => {
+    // Δx₁ ≈ 0.008 of x ≈ 8 leaves ≈ 0.003·Δx₁² ≈ 2e-7; Δx₂ ≈ 2e-7 leaves ≈ 1e-16 < 1e-12 (a |Δx| < 1e-10 test alone needs a third)
+    const x = 1 / Math.sqrt(colebrookUnchecked(1e5, 1e-4));
+    const { calls, f } = log10Calls(() => colebrookUnchecked(1e5, 1e-4, x * 1.001));
+    expect(calls).toBe(2);
+    expect(f).toBeCloseTo(1 / (x * x), 14);
+  });
   it("from a start Newton cannot recover from it gives up after exactly 50 steps (NaN, no hang)", () => {
     // smooth pipe, Re 1e5: b = 2.51e-5; from x = 1e6 the first step lands at x ≈ −1.9 (g ≈ 1e6, g' ≈ 1),
     // where a + b·x < 0: log10 gives NaN, |NaN| < 1e-10 is never true, and only the 50-step cap ends the loop
     const { calls, f } = log10Calls(() => colebrookUnchecked(1e5, 0, 1e6));
     expect(calls).toBe(50);
     expect(f).toBeNaN();
+  });
+  it("the Haaland start from a kept rough term is haaland()'s 1/√f, and Newton from it gives the cold result to the last bit", () => {
+    for (const [re, rr] of [[4000, 0], [1e5, 1e-4], [2e6, 0.01]] as const) {
+      const start = haalandStartX(re, haalandRoughTerm(rr));
+      expect(start).toBeCloseTo(1 / Math.sqrt(haaland(re, rr)), 12);
+      expect(colebrookUnchecked(re, rr, start)).toBe(colebrookUnchecked(re, rr));
+    }
   });
 });

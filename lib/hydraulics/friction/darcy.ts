@@ -73,6 +73,13 @@ export function transitionAnchorF(relRoughness: number): number {
   return colebrookUnchecked(RE_TURBULENT_MIN, relRoughness);
 }
 
+/** transitionAnchorF kept in the caller's map by ε/D: pipes of one catalogue size share it, so it is solved once per size. */
+export function transitionAnchorIn(cache: Map<number, number>, relRoughness: number): number {
+  let anchor = cache.get(relRoughness);
+  if (anchor === undefined) cache.set(relRoughness, (anchor = transitionAnchorF(relRoughness)));
+  return anchor;
+}
+
 /** The regime darcyFrictionFactor reports for this Re (Re ≥ 0). */
 export function flowRegimeOf(re: number): FlowRegime {
   return re < RE_LAMINAR_MAX ? "laminar" : re < RE_TURBULENT_MIN ? "transition" : "turbulent";

@@ -12,8 +12,10 @@
  * very large resistance (Rossman, EPANET 2.2 manual §12.2).
  */
 import { kvPressureDropPa } from "@/lib/hydraulics/losses";
-import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorF } from "@/lib/hydraulics/friction/darcy";
+import { RE_LAMINAR_MAX as laminarMax, RE_TURBULENT_MIN as turbulentMin, transitionAnchorIn } from "@/lib/hydraulics/friction/darcy";
 import { PIPE_DROP_SLOTS, pipeDropInto as pipeDropIntoImport, pipePressureDrop } from "@/lib/hydraulics/pipes/pressure-drop";
+import { haalandRoughTerm, haalandStartX } from "@/lib/hydraulics/friction/colebrook";
+import { transitionExponent, turbulentExponent } from "./friction-exponent";
 import { maxFlowM3h, pumpHeadKpa, pumpHeadKpaUnchecked, type PumpCurve } from "@/lib/hydraulics/pumps/curve";
 
 // Used per link per solver iteration: bound once at load (friction/darcy.ts says why).
@@ -88,6 +90,9 @@ export class LinkTable {
   private readonly anchorF: Float64Array;
   /** the same by ε/D: pipes of one catalogue size share it, so it is solved once per size */
   private readonly anchorByRelRough = new Map<number, number>();
+  /** Haaland's rough term (ε/D/3.7)^1.11 of each pipe, by ε/D like the anchor: Colebrook's first start costs no power */
+  private readonly roughTerm: Float64Array;
+  private readonly roughTermByRelRough = new Map<number, number>();
   private readonly pumps = new Map<number, PumpData>();
   /** per-pipe constants, filled by setPipe: cross-section πD²/4 and relative roughness ε/D */
   private readonly area: Float64Array;
@@ -121,6 +126,7 @@ export class LinkTable {
     this.anchorF = new Float64Array(count);
     this.area = new Float64Array(count);
     this.relRough = new Float64Array(count);
+    this.roughTerm = new Float64Array(count);
     this.badPipe = new Uint8Array(count);
     this.rho = densityKgM3;
     this.nu = kinematicViscosityM2s;
@@ -144,9 +150,10 @@ export class LinkTable {
         : 1;
     if (!this.badPipe[k]) {
       const rel = this.relRough[k]!;
-      let anchor = this.anchorByRelRough.get(rel);
-      if (anchor === undefined) this.anchorByRelRough.set(rel, (anchor = transitionAnchorF(rel)));
-      this.anchorF[k] = anchor;
+      this.anchorF[k] = transitionAnchorIn(this.anchorByRelRough, rel);
+      let term = this.roughTermByRelRough.get(rel);
+      if (term === undefined) this.roughTermByRelRough.set(rel, (term = haalandRoughTerm(rel)));
+      this.roughTerm[k] = term;
     }
     this.set(k, law, LAW.pipe);
   }
@@ -164,6 +171,15 @@ export class LinkTable {
     });
     this.c[k] = c;
     this.set(k, law, LAW.pump);
+  }
+
+  /**
+   * Where the gradient method starts a pump that runs on its curve: the middle
+   * of the curve's flow range, m³/h (EPANET starts a pump at its design flow,
+   * Rossman, EPANET 2.2 manual §12.2 — recalled from memory); 0 for any other link.
+   */
+  startFlow(k: number): number {
+    return this.law[k] === LAW.pump ? this.pumps.get(k)!.qMax / 2 : 0;
   }
 
   evaluate(k: number, q: number, out: Float64Array): void {
@@ -196,7 +212,10 @@ export class LinkTable {
         this.kv(k, q, out);
         return;
       case LAW.pipe:
-        this.pipe(k, q, out);
+        // q handed over in out[0], not as an argument: pipe() is too large to be inlined into
+        // the solver, and a double passed to a call that is not inlined is boxed (a heap number per link per iteration)
+        out[0] = q;
+        this.pipe(k, out);
         return;
       case LAW.pump:
         this.pump(k, q, out);
@@ -216,14 +235,15 @@ export class LinkTable {
   }
 
   /**
-   * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope uses
-   * each part's local exponent: friction ∝ q laminar (Hagen–Poiseuille),
-   * ≈ q^1.75…2 turbulent (Blasius … fully rough; 1.9 taken), 2 in the
-   * interpolated transition; fittings ∝ q². An approximate slope only slows
-   * Newton a little; the solution still satisfies the exact law. The last
-   * evaluation is cached: on a tree, design flows repeat exactly.
+   * Darcy–Weisbach pipe with fittings (pipes/pressure-drop.ts). The slope is
+   * exact, each part by its local exponent n = d ln h / d ln q: friction ∝ q
+   * laminar (Hagen–Poiseuille), 2 + d ln f / d ln Re in the turbulent and
+   * transition ranges (friction-exponent.ts); fittings ∝ q². An exact slope
+   * keeps Newton quadratic (Todini & Pilati 1988 use the exact derivative).
+   * The last evaluation is cached: on a tree, design flows repeat exactly.
    */
-  private pipe(k: number, q: number, out: Float64Array): void {
+  private pipe(k: number, out: Float64Array): void {
+    const q = out[0]!;
     // Below 1e-6 m³/h the flow is laminar in any catalogue pipe: h is linear there.
     const qTiny = 1e-6;
     const a = Math.max(Math.abs(q), qTiny);
@@ -243,13 +263,20 @@ export class LinkTable {
         });
       }
       const r = this.drop;
-      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, this.lastX[k]!, this.anchorF[k]!);
+      let start = this.lastX[k]!;
+      if (start === 0) {
+        // no earlier turbulent point: Colebrook's Haaland start made here from the pipe's kept
+        // rough term (Re as pipeDropInto computes it), the same start colebrookUnchecked makes
+        const re = (Math.abs(a / 3600 / this.area[k]!) * this.d[k]!) / this.nu;
+        if (re >= RE_TURBULENT_MIN) start = haalandStartX(re, this.roughTerm[k]!);
+      }
+      pipeDropInto(a / 3600, this.d[k]!, this.area[k]!, this.len[k]!, this.relRough[k]!, this.rho, this.nu, this.sumK[k]!, r, start, this.anchorF[k]!);
       const re = r[2]!;
       if (re >= RE_TURBULENT_MIN) this.lastX[k] = 1 / Math.sqrt(r[3]!);
       if (!Number.isFinite(re)) throw new RangeError(`re must be ≥ 0 and finite, got ${re}`);
       const fr = r[0]! / 1000;
       const fit = r[1]! / 1000;
-      const n = re < RE_LAMINAR_MAX ? 1 : re >= RE_TURBULENT_MIN ? 1.9 : 2;
+      const n = re < RE_LAMINAR_MAX ? 1 : re >= RE_TURBULENT_MIN ? turbulentExponent(re, this.relRough[k]!, this.lastX[k]!) : transitionExponent(re, r[3]!, this.anchorF[k]!);
       this.lastA[k] = a;
       this.lastH[k] = fr + fit;
       this.lastG[k] = (n * fr + 2 * fit) / a + OPEN_R;

@@ -30,6 +30,15 @@ describe("gradient method (Todini & Pilati 1988)", () => {
     expect(r.head[1]! - r.head[0]!).toBeCloseTo(6 - 4 * (6 / 7), 6);
   });
 
+  it("stops once the error left is estimated below a tenth of the accuracy: Newton (Heron's steps from Q 0.5) is done after 4 solves at accuracy 1e-4", () => {
+    // Steps |ΔQ|/Q by hand: 0.548, 0.177, 0.0159, 1.27e-4, 8e-9. The fourth is above 1e-4, but it shrank by
+    // ρ = 0.008, so the error left is ≈ ρ/(1 − ρ)·1.27e-4 = 1.0e-6 < 1e-5: converged without a fifth solve.
+    const r = solveNetwork(prepare(topo(2, [[0, 1], [1, 0]], [0])), quadraticLoop(6, 4, 3), new Float64Array(2), Float64Array.from([0.5, 0.5]), { accuracy: 1e-4 });
+    expect(r.converged).toBe(true);
+    expect(r.iterations).toBe(4);
+    expect(r.q[0]).toBeCloseTo(Math.sqrt(6 / 7), 7);
+  });
+
   it("the same loop at 80 % speed (H0 × 0.64) moves along the affinity parabola: Q × 0.8 exactly", () => {
     const r = solveNetwork(prepare(topo(2, [[0, 1], [1, 0]], [0])), quadraticLoop(3.84, 4, 3), new Float64Array(2), Float64Array.from([0.5, 0.5]));
     expect(r.converged).toBe(true);
@@ -110,5 +119,14 @@ describe("gradient method (Todini & Pilati 1988)", () => {
     const prep = prepare(topo(2, [[0, 1], [0, 1]], [0]));
     const r = solveNetwork(prep, t, new Float64Array(2), Float64Array.from([0.1, 0.1]));
     expect(Math.abs(r.q[0]!)).toBeLessThan(1e-5);
+  });
+
+  it("start flow: a pump on its curve starts mid-range (last point 2 m³/h → 1), in design (loss-free) and any other link 0", () => {
+    const t = new LinkTable(3, 1000, 1e-6);
+    t.setPump(0, [[0, 20], [1, 10], [2, 0]], 0);
+    t.setPump(1, [[0, 20], [1, 10], [2, 0]], 0, LAW.zero);
+    t.c[2] = kvCoefficient(2, 1000);
+    t.set(2, LAW.kv);
+    expect([t.startFlow(0), t.startFlow(1), t.startFlow(2)]).toEqual([1, 0, 0]);
   });
 });

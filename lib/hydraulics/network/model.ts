@@ -17,6 +17,7 @@
  */
 import { partRegistry, sharedPortsOf, splitPortRef } from "@/lib/schematic/parts";
 import type { Part, Schematic } from "@/lib/schematic/schema";
+import { IdIndex, portIndex } from "@/lib/schematic/id-index";
 
 export type LinkRole =
   | "pipe"
@@ -111,7 +112,6 @@ function partLinks(part: Part): readonly LinkSpec[] {
 }
 
 export function buildModel(doc: Schematic): NetworkModel {
-  const partIndex = new Map<string, number>();
   const vesselNodes: number[] = [];
   // A part's ports get consecutive nodes in portsOf order (a junction: one node),
   // so a port's node is its part's first node plus the port's index: no
@@ -121,8 +121,9 @@ export function buildModel(doc: Schematic): NetworkModel {
   const junction = new Uint8Array(doc.parts.length);
   const portSlot = new Int32Array(doc.parts.length + 1);
   let nodeCount = 0;
+  const ids = new Array<string>(doc.parts.length);
   doc.parts.forEach((part, index) => {
-    partIndex.set(part.id, index);
+    ids[index] = part.id;
     const role = partRegistry[part.type].role;
     const ports = sharedPortsOf(part);
     portLists[index] = ports;
@@ -134,6 +135,7 @@ export function buildModel(doc: Schematic): NetworkModel {
     } else nodeCount += ports.length;
     if (role === "vessel") vesselNodes.push(firstNode[index]! + ports.indexOf("connection"));
   });
+  const partIndex = new IdIndex(ids);
   const slotPart = new Int32Array(portSlot[doc.parts.length]!);
   for (let index = 0; index < doc.parts.length; index++) slotPart.fill(index, portSlot[index]!, portSlot[index + 1]!);
   const nodeOfSlot = (slot: number): number => {
@@ -149,12 +151,10 @@ export function buildModel(doc: Schematic): NetworkModel {
     // the last dot by charCodeAt: String#lastIndexOf is a runtime call, not compiled inline
     let dot = ref.length - 1;
     while (dot >= 0 && ref.charCodeAt(dot) !== 46) dot--;
-    const index = partIndex.get(ref.slice(0, dot));
-    if (index === undefined) return -1;
+    const index = dot < 0 ? -1 : partIndex.prefixOf(ref, dot);
+    if (index < 0) return -1;
     // the port matched in place (its name is the ref's tail): no string cut per pipe end
-    const ports = portLists[index]!;
-    let j = ports.length - 1;
-    while (j >= 0 && !(ports[j]!.length === ref.length - dot - 1 && ref.endsWith(ports[j]!))) j--;
+    const j = portIndex(portLists[index]!, ref, dot + 1);
     return j < 0 ? -1 : portSlot[index]! + j;
   };
   const portNode: Lookup<number> = {

@@ -24,10 +24,11 @@ export function simulate(ctx: EngineContext, state: NetworkState, warm: Float64A
   const q0 = new Float64Array(model.links.length);
   model.links.forEach((l, k) => {
     if (isCut(ctx, l, state)) return;
-    // 0.01 m³/h where the design gave nothing: any positive start works for
-    // the pump and Kv laws; it only saves an iteration or two.
+    // Where the design gave nothing: a pump at the middle of its curve
+    // (LinkTable.startFlow), anything else 0.01 m³/h — any positive start works
+    // for the pump and Kv laws; a start on the curve saves iterations.
     const w = warm ? warm[k]! : 0;
-    q0[k] = Math.abs(w) > NO_FLOW_M3H ? w : 0.01;
+    q0[k] = Math.abs(w) > NO_FLOW_M3H ? w : laws.startFlow(k) || 0.01;
   });
   const r = solveNetwork(ctx.prep, laws, new Float64Array(model.nodeCount), q0, { maxIterations, accuracy: 1e-5 });
   for (let k = 0; k < r.q.length; k++) if (Math.abs(r.q[k]!) < NO_FLOW_M3H) r.q[k] = 0;

@@ -15,6 +15,7 @@
  */
 import { pipeCatalogue, pipePressureDrop } from "@/lib/hydraulics/pipes";
 import { PIPE_DROP_SLOTS, pipeDropInto } from "@/lib/hydraulics/pipes/pressure-drop";
+import { transitionAnchorF, transitionAnchorIn } from "@/lib/hydraulics/friction/darcy";
 import type { PipeResult } from "@/lib/schematic/results";
 import type { PipeGeometry } from "@/lib/hydraulics/network/behaviour";
 import type { EngineContext } from "./context";
@@ -30,13 +31,16 @@ interface CatalogueColumns {
   dM: Float64Array;
   areaM2: Float64Array;
   relRoughness: Float64Array;
+  /** transitionAnchorF of each size (darcyF's anchorF), solved once per material, not per pipe */
+  anchorF: Float64Array;
 }
 const columnsByMaterial = new Map<string, CatalogueColumns>();
 function catalogueColumns(material: keyof typeof pipeCatalogue): CatalogueColumns {
   let c = columnsByMaterial.get(material);
   if (c) return c;
   const rows = pipeCatalogue[material];
-  c = { size: [], dM: new Float64Array(rows.length), areaM2: new Float64Array(rows.length), relRoughness: new Float64Array(rows.length) };
+  const n = rows.length;
+  c = { size: [], dM: new Float64Array(n), areaM2: new Float64Array(n), relRoughness: new Float64Array(n), anchorF: new Float64Array(n) };
   rows.forEach((row, j) => {
     // The same expressions, in the same order, as pipePressureDrop on this row: the same bits.
     const dM = row.innerDiameterMm / 1000;
@@ -44,6 +48,7 @@ function catalogueColumns(material: keyof typeof pipeCatalogue): CatalogueColumn
     c!.dM[j] = dM;
     c!.areaM2[j] = (Math.PI * dM * dM) / 4;
     c!.relRoughness[j] = row.roughnessMm / 1000 / dM;
+    c!.anchorF[j] = transitionAnchorF(c!.relRoughness[j]!);
   });
   columnsByMaterial.set(material, c);
   return c;
@@ -69,7 +74,7 @@ export function suggestSize(ctx: EngineContext, pipeIndex: number, flowM3h: numb
     // Velocity first: it needs no friction factor and rules out most small sizes.
     if (qM3s / cat.areaM2[j]! > maxVelocityMps) continue;
     // Darcy–Weisbach at this size without a result object (pipes/pressure-drop.ts, pipeDropInto).
-    pipeDropInto(qM3s, cat.dM[j]!, cat.areaM2[j]!, 1, cat.relRoughness[j]!, densityKgM3, kinematicViscosityM2s, 0, out);
+    pipeDropInto(qM3s, cat.dM[j]!, cat.areaM2[j]!, 1, cat.relRoughness[j]!, densityKgM3, kinematicViscosityM2s, 0, out, 0, cat.anchorF[j]!);
     if (!Number.isFinite(out[2]!)) throw new RangeError(`re must be ≥ 0 and finite, got ${out[2]}`);
     if (Math.abs(out[4]!) <= maxVelocityMps && out[5]! <= targetGradientPaPerM) return cat.size[j]!;
   }
@@ -86,7 +91,7 @@ const nonNegativeFinite = (x: number) => Number.isFinite(x) && x >= 0;
  * checks (pipeDropInto: same formulas, same bits); otherwise pipePressureDrop itself, which throws
  * its RangeError naming the field.
  */
-function pipeDrop(geom: PipeGeometry, flowM3s: number, densityKgM3: number, kinematicViscosityM2s: number) {
+function pipeDrop(geom: PipeGeometry, flowM3s: number, densityKgM3: number, kinematicViscosityM2s: number, anchors: Map<number, number>) {
   const { innerDiameterM, roughnessM, lengthM, sumK } = geom;
   if (
     !Number.isFinite(flowM3s) ||
@@ -102,7 +107,8 @@ function pipeDrop(geom: PipeGeometry, flowM3s: number, densityKgM3: number, kine
     return { velocityMps: r.velocityMps, reynolds: r.reynolds, frictionFactor: r.frictionFactor, dpPa: r.dpPa, gradientPaPerM: r.gradientPaPerM };
   }
   const out = resultScratch;
-  pipeDropInto(flowM3s, innerDiameterM, (Math.PI * innerDiameterM * innerDiameterM) / 4, lengthM, roughnessM / innerDiameterM, densityKgM3, kinematicViscosityM2s, sumK, out);
+  const rel = roughnessM / innerDiameterM;
+  pipeDropInto(flowM3s, innerDiameterM, (Math.PI * innerDiameterM * innerDiameterM) / 4, lengthM, rel, densityKgM3, kinematicViscosityM2s, sumK, out, 0, transitionAnchorIn(anchors, rel));
   if (!Number.isFinite(out[2]!)) throw new RangeError(`re must be ≥ 0 and finite, got ${out[2]}`);
   return { velocityMps: out[4]!, reynolds: out[2]!, frictionFactor: out[3]!, dpPa: out[0]! + out[1]!, gradientPaPerM: out[5]! };
 }
@@ -126,6 +132,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, n
   const fluid = ctx.fluid!;
   const { design } = ctx.doc;
   const noFlow: string[] = [];
+  const anchors = new Map<number, number>();
   const out = ctx.doc.pipes.map((pipe, i) => {
     const k = ctx.model.pipeLink[i]!;
     const raw = q[k]!;
@@ -140,7 +147,7 @@ export function pipeResults(ctx: EngineContext, q: Float64Array, mode: string, n
     if (!geom) {
       return { id: pipe.id, flowM3h: flow, velocityMps: null, reynolds: null, frictionFactor: null, pressureDropKpa: null, gradientPaPerM: null, suggestedSize: flow === null ? null : suggestSize(ctx, i, flowM3h), restsOn: [...restsOn] };
     }
-    const r = pipeDrop(geom, flowM3h / 3600, fluid.densityKgM3, fluid.kinematicViscosityM2s);
+    const r = pipeDrop(geom, flowM3h / 3600, fluid.densityKgM3, fluid.kinematicViscosityM2s, anchors);
     const suggested = suggestSize(ctx, i, flowM3h);
     if (Math.abs(r.velocityMps) > design.maxVelocityMps) {
       ctx.findings.warning(
