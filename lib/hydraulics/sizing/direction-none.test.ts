@@ -78,6 +78,15 @@ describe("nothing backwards, nothing said", () => {
     expect(named(swapPorts(d, "buf.p1", "buf.p2"))).toEqual([]);
     expect(named(swapPorts(d, "buf.p3", "buf.p4"))).toEqual([]);
   });
+
+  it("millbrook-hall's buffer with its primary ports swapped: the primary pump's design flow runs backwards, but the buffer is not judged and no pump is named", () => {
+    const d = swapPorts(demo("millbrook-hall.json"), "buf.p1", "buf.p2");
+    const r = calculate(d);
+    if (!r.ok) throw new Error(JSON.stringify(r.issues));
+    // the buffer's primary pass carries its design flow p1 → p2, now back round through pp
+    expect(r.results.modes[0]!.parts.find((p) => p.id === "pp")!.flowM3h!).toBeLessThan(0);
+    expect(named(d)).toEqual([]);
+  });
 });
 
 const stream = fc.array(fc.double({ min: 0, max: 1, noNaN: true, maxExcluded: true }), { minLength: 120, maxLength: 120 });

@@ -1,7 +1,8 @@
 /**
  * Parts piped the wrong way round (direction.ts), each on both sides: the drawing with one part
  * reversed gets one error naming that part (and no other part), the same drawing the right way
- * round gets none. The expected part is the one the test reversed; the one design flow checked by
+ * round gets none. The expected part is the one the test reversed (where the sides tie or a bypass
+ * joins them and no load can be told, the heat source, as direction.ts documents); the one design flow checked by
  * number is q = P/(ρ·cp·ΔT) (defining equation, water at the 40 °C mean from IAPWS-95 via
  * testing/hand-calc.ts).
  */
@@ -24,6 +25,56 @@ function results(doc: unknown): Results {
 const direction = (doc: unknown) => results(doc).findings.filter((f) => CODES.includes(f.code));
 /** "code [refs]" of every direction finding. */
 const named = (doc: unknown) => direction(doc).map((f) => `${f.code} [${f.refs.join(", ")}]`);
+const cu = (id: string, from: string, to: string) => ({ id, from, to, material: "copper", size: "22", lengthM: 2 });
+const LOOP_CURVE = [[0, 30], [1, 20], [2, 0]];
+
+/** The one-load loop with a 40 L buffer: hp.flow ─ buf.p1, buf.p2 ─ pu ─ hp.return; buf.p3 ─ ps ─ hl ─ buf.p4. */
+function bufferLoop() {
+  const d = oneLoadLoop();
+  d.parts.push({ id: "buf", type: "buffer-vessel", props: { volumeL: 40 } } as never, { id: "ps", type: "pump", props: { curve: LOOP_CURVE } } as never);
+  d.pipes = [cu("f", "hp.flow", "buf.p1"), cu("r", "buf.p2", "pu.in"), cu("r2", "pu.out", "hp.return"), cu("s1", "buf.p3", "ps.in"), cu("s2", "ps.out", "hl.flow"), cu("s3", "hl.return", "buf.p4")];
+  return d;
+}
+
+/**
+ * bufferLoop with hp and pu reversed, and two heat loads l2, l3 each with one port on a primary
+ * side and the other on the secondary: `from`, their flow ports on the primary sides (returns to
+ * the secondary return); `to`, their return ports on the primary sides (flows from the secondary flow).
+ */
+function crossLoads(end: "from" | "to") {
+  const d = reversed(reversed(bufferLoop(), "hp"), "pu");
+  const load = (id: string) => ({ id, type: "heat-load", props: { heatLoadW: 1000, kv: 1, waterVolumeL: 1 } });
+  d.parts.push(...(["t1", "t2", "t3", "t4"].map((id) => ({ id, type: "tee" })) as never[]), load("l2") as never, load("l3") as never);
+  // reversed: f runs hp.return ─ buf.p1, r buf.p2 ─ pu.out
+  const [a, b] = end === "from" ? [["t1.c", "l2.flow"], ["t2.c", "l3.flow"]] : [["l2.return", "t1.c"], ["l3.return", "t2.c"]];
+  const [c, dd] = end === "from" ? [["l2.return", "t3.c"], ["l3.return", "t4.c"]] : [["t3.c", "l2.flow"], ["t4.c", "l3.flow"]];
+  const other = end === "from" ? "s3" : "s2";
+  const [oa, ob] = end === "from" ? ["hl.return", "buf.p4"] : ["ps.out", "hl.flow"];
+  d.pipes = d.pipes.filter((p) => !["f", "r", other].includes(p.id));
+  d.pipes.push(cu("f", "hp.return", "t1.a"), cu("fb", "t1.b", "buf.p1"), cu("x1", a![0]!, a![1]!), cu("r", "buf.p2", "t2.a"), cu("rb", "t2.b", "pu.out"), cu("x2", b![0]!, b![1]!),
+    cu(other, oa, "t3.a"), cu(`${other}b`, "t3.b", "t4.a"), cu(`${other}c`, "t4.b", ob), cu("x3", c![0]!, c![1]!), cu("x4", dd![0]!, dd![1]!));
+  return d;
+}
+
+/** fixedBypass with its heat source's pump drawn as a part in series: tb ─p4─ pu ─p5─ hp.return. */
+function bypassWithPump() {
+  const d = fixedBypass();
+  d.parts[0]!.props = { ...d.parts[0]!.props, pumpCurve: null };
+  d.parts.push({ id: "pu", type: "pump", props: { curve: [[0, 30], [1, 22], [2, 8], [3, 0]] } });
+  d.pipes = d.pipes.filter((p) => p.id !== "p4");
+  d.pipes.push(cu("p4", "tb.b", "pu.in"), cu("p5", "pu.out", "hp.return"));
+  return d;
+}
+
+/** The small system with a pump pz on r2's branch (p3 split around it). */
+function zonePump() {
+  const d = smallSystem();
+  d.parts.push({ id: "pz", type: "pump", props: { curve: SERIES_PUMP_CURVE.map(([q, h]) => [q, h]) } });
+  d.pipes = d.pipes.filter((p) => p.id !== "p3");
+  d.pipes.push({ ...cu("p3", "tf.c", "pz.in"), size: "15" }, { ...cu("p3b", "pz.out", "r2.flow"), size: "15" });
+  return d;
+}
+
 const demo = (name: string) => JSON.parse(readFileSync(path.resolve(__dirname, "../../../db/seeds/data", name), "utf8"));
 
 describe("a heat source piped the wrong way round", () => {
@@ -37,6 +88,8 @@ describe("a heat source piped the wrong way round", () => {
     expect(f!.message).toMatch(/^hp: piped the wrong way round/);
     expect(f!.message).toMatch(/Swap the pipes at its flow and return/);
     expect(f!.message).toMatch(/manufacturer's instructions/);
+    // no pump of its own (the small system's pump is a part): nothing said about one
+    expect(f!.message).toMatch(/can overheat, short-cycle or trip: check the connections/);
   });
 
   it("behind a fixed bypass the sides do not say: its design flow, entering by its flow port, names it", () => {
@@ -54,6 +107,31 @@ describe("a heat source piped the wrong way round", () => {
   it("in a one-load loop with a pump, the pump sides with the load: the heat source is named", () => {
     expect(named(oneLoadLoop())).toEqual([]);
     expect(named(reversed(oneLoadLoop(), "hp"))).toEqual(["heat-source.reversed [hp]"]);
+  });
+
+  it("reversed together with the small system's pump: both are named (the heat source by its sides, the pump by its design flow)", () => {
+    expect(named(reversed(reversed(smallSystem(), "hp"), "pump"))).toEqual(["heat-source.reversed [hp]", "pump.reversed [pump]"]);
+  });
+
+  it("before a buffer's primary, where the heat source and the buffer tie, its design flow names it", () => {
+    expect(named(bufferLoop())).toEqual([]);
+    expect(named(reversed(bufferLoop(), "hp"))).toEqual(["heat-source.reversed [hp]"]);
+  });
+
+  it("behind a fixed bypass, a pump in series: a radiator drawn backwards passes both backwards; no load can be told, the heat source alone is named", () => {
+    expect(named(bypassWithPump())).toEqual([]);
+    expect(named(reversed(bypassWithPump(), "rad"))).toEqual(["heat-source.reversed [hp]"]);
+    expect(named(reversed(reversed(bypassWithPump(), "hp"), "pu"))).toEqual(["heat-source.reversed [hp]"]);
+  });
+
+  it("with its primary pump before a buffer, both reversed: the pump sides with it, no load joins their sides, the heat source is named", () => {
+    expect(named(reversed(reversed(bufferLoop(), "hp"), "pu"))).toEqual(["heat-source.reversed [hp]"]);
+  });
+
+  it.each(["from", "to"] as const)("a load whose %s port alone sits on one of the tied heat source's sides is not the one reversed", (end) => {
+    // hp and pu reversed before a buffer, and two loads whose one port each is on a primary side
+    // (their other port on the secondary): the primary sides still tie, no load joins them both
+    expect(named(crossLoads(end))).toEqual(["heat-source.reversed [hp]"]);
   });
 });
 
@@ -73,6 +151,11 @@ describe("a pump drawn backwards", () => {
     expect(named(withPumpInSeries())).toEqual([]);
     expect(named(reversed(withPumpInSeries(), "pump2"))).toEqual(["pump.reversed [pump2]"]);
     expect(named(reversed(withPumpInSeries(), "pump"))).toEqual(["pump.reversed [pump]"]);
+  });
+
+  it("a zone pump on one radiator's branch, not the pump that drives its side, is named", () => {
+    expect(named(zonePump())).toEqual([]);
+    expect(named(reversed(zonePump(), "pz"))).toEqual(["pump.reversed [pz]"]);
   });
 
   it("two pumps drawn side by side (in parallel, pump.not-in-series) are not called backwards", () => {
