@@ -41,7 +41,7 @@ const LOAD_NOTE: Partial<Record<string, string>> = {
 
 function sourceMessage(id: string, ownPump: boolean, byFlow: Backward | null): string {
   const what = byFlow
-    ? `its design flow (${byFlow.q.toFixed(3)} m³/h in ${byFlow.mode} mode) enters by its flow port and leaves by its return port — flow and return are swapped (if the heat source is piped right, a load on its circuit is drawn the wrong way round)`
+    ? `its design flow (${byFlow.q.toFixed(3)} m³/h in ${byFlow.mode} mode) enters by its flow port and leaves by its return port — flow and return are swapped (if the heat source is piped right, a load on its circuit, or the primary connections of a buffer or low-loss header, are drawn the wrong way round)`
     : "piped the wrong way round — its flow port is joined to the return side of the circuit and its return port to the flow side";
   return `${id}: ${what}. Swap the pipes at its flow and return connections. Run backwards a heat pump or boiler reads its flow and return temperatures the wrong way round and can overheat, short-cycle or trip${ownPump ? ", and its own pump pushes against the circuit" : ""}: ${CHECK}`;
 }
