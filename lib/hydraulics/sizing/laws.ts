@@ -45,14 +45,18 @@ function setLoadKv(t: LinkTable, k: number, v: number | null, rho: number, solve
 }
 
 /** The Kv a part is sized with: the designer's, else the typical one (typical/resolve.ts); null: not counted. */
-const kvOf = (ctx: EngineContext, part: Part): number | null => ctx.inputs.kv.get(part.id) ?? null;
+const kvOf = (ctx: EngineContext, index: number): number | null => {
+  const kv = ctx.inputs.kv[index]!;
+  return Number.isNaN(kv) ? null : kv;
+};
 
-function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design: boolean): void {
+function setLoad(ctx: EngineContext, t: LinkTable, k: number, index: number, design: boolean): void {
+  const part = ctx.doc.parts[index]!;
   const rho = ctx.fluid!.densityKgM3;
   const solver = design ? LAW.closed : undefined;
   switch (part.type) {
     case "radiator":
-      return setLoadKv(t, k, kvOf(ctx, part), rho, solver);
+      return setLoadKv(t, k, kvOf(ctx, index), rho, solver);
     case "ufh-loop": {
       const p = part.props;
       const g = { innerDiameterM: p.innerDiameterMm / 1000, roughnessM: UFH_ROUGHNESS_MM / 1000, lengthM: p.loopLengthM, sumK: 0 };
@@ -60,7 +64,7 @@ function setLoad(ctx: EngineContext, t: LinkTable, k: number, part: Part, design
     }
     case "fan-coil":
     case "heat-load":
-      return setLoadKv(t, k, kvOf(ctx, part), rho, solver);
+      return setLoadKv(t, k, kvOf(ctx, index), rho, solver);
     case "cylinder":
       return setLoadKv(t, k, part.props.coilKv, rho, solver);
     default:
@@ -75,23 +79,24 @@ function setDeviceKv(t: LinkTable, k: number, v: number | null, rho: number, che
 }
 
 /** Set a two-port valve/device part (role "link") on link k. */
-function setDevice(ctx: EngineContext, t: LinkTable, k: number, part: Part, state: NetworkState, rho: number): void {
+function setDevice(ctx: EngineContext, t: LinkTable, k: number, index: number, state: NetworkState, rho: number): void {
+  const part = ctx.doc.parts[index]!;
   switch (part.type) {
     case "zone-valve":
       setDeviceKv(t, k, part.props.kvs, rho, false);
       if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
       return;
     case "isolation-valve":
-      setDeviceKv(t, k, kvOf(ctx, part), rho, false);
+      setDeviceKv(t, k, kvOf(ctx, index), rho, false);
       if (!isOpen(part, state)) t.set(k, LAW.closed, t.own[k] as Law);
       return;
     case "check-valve":
-      return setDeviceKv(t, k, kvOf(ctx, part), rho, true);
+      return setDeviceKv(t, k, kvOf(ctx, index), rho, true);
     case "balancing-valve":
     case "strainer":
     case "magnetic-filter":
     case "heat-meter":
-      return setDeviceKv(t, k, kvOf(ctx, part), rho, false);
+      return setDeviceKv(t, k, kvOf(ctx, index), rho, false);
     default:
       t.set(k, LAW.zero);
   }
@@ -114,7 +119,7 @@ export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
     switch (link.role) {
       case "heat-source": {
         const p = (part as PartOf<"heat-pump">).props;
-        const c = kvCoefficient(kvOf(ctx, part), rho);
+        const c = kvCoefficient(kvOf(ctx, link.index), rho);
         const curve = usableCurve(p.pumpCurve);
         t.c[k] = c;
         if (curve) t.setPump(k, curve, c, design ? LAW.kv : LAW.pump);
@@ -129,7 +134,7 @@ export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
         return;
       }
       case "link":
-        return setDevice(ctx, t, k, part, state, rho);
+        return setDevice(ctx, t, k, link.index, state, rho);
       case "bypass": {
         const opening = state.bypassOpeningKpa.get(part.id) ?? null;
         t.c[k] = kvCoefficient((part as PartOf<"dp-bypass-valve">).props.kvs, rho);
@@ -145,7 +150,7 @@ export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
         return;
       }
       case "load":
-        return setLoad(ctx, t, k, part, design);
+        return setLoad(ctx, t, k, link.index, design);
       case "header-primary":
         return t.set(k, design ? LAW.closed : LAW.zero, LAW.zero);
       case "header-secondary":

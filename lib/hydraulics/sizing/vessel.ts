@@ -35,12 +35,13 @@ export function systemVolume(ctx: EngineContext): SystemVolume {
   let partsL = 0;
   const restsOn: string[] = [];
   const assumed = new Set(ctx.inputs.assumptions.filter((a) => a.kind === "water").map((a) => a.part));
-  for (const part of ctx.doc.parts) {
+  for (let index = 0; index < ctx.doc.parts.length; index++) {
+    const part = ctx.doc.parts[index]!;
     if (part.type === "buffer-vessel" || part.type === "low-loss-header") partsL += part.props.volumeL;
     else if (part.type === "ufh-loop") loopsL += pipeWaterVolumeLPerM(part.props.innerDiameterMm) * part.props.loopLengthM;
     else {
-      const v = ctx.inputs.waterL.get(part.id);
-      if (v === undefined) continue;
+      const v = ctx.inputs.waterL[index]!;
+      if (Number.isNaN(v)) continue;
       partsL += v;
       if (assumed.has(part.id)) restsOn.push(ctx.inputs.assumptions.find((a) => a.part === part.id && a.kind === "water")!.ref);
     }

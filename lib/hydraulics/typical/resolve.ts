@@ -19,10 +19,13 @@ export interface FluidForTypical {
 }
 
 export interface ResolvedInputs {
-  /** part id → Kv used for its own resistance field (given or typical); absent or null: not counted */
-  kv: Map<string, number | null>;
-  /** part id → water content used, L (given or typical); absent: not counted */
-  waterL: Map<string, number>;
+  /**
+   * By doc.parts index: Kv used for its own resistance field (given or typical); NaN: not counted.
+   * Typed arrays, not maps by id: one slot per part costs no hashing and no growing table.
+   */
+  kv: Float64Array;
+  /** by doc.parts index: water content used, L (given or typical); NaN: not counted */
+  waterL: Float64Array;
   assumptions: Assumption[];
   /** part id → ref ("part.field") of its assumed Kv, for the hydraulic numbers resting on it */
   kvRefOfPart: Map<string, string>;
@@ -100,21 +103,23 @@ function typicalValue(part: Part, rule: TypicalRule, c: Ctx): { value: number; w
   }
 }
 
-function store(out: ResolvedInputs, kind: "resistance" | "water", partId: string, v: number): void {
-  if (kind === "resistance") out.kv.set(partId, v);
-  else out.waterL.set(partId, v);
+function store(out: ResolvedInputs, kind: "resistance" | "water", index: number, v: number): void {
+  if (kind === "resistance") out.kv[index] = v;
+  else out.waterL[index] = v;
 }
 
 export function resolveInputs(doc: Schematic, geom: (PipeGeometry | null)[], fluid: FluidForTypical | null, deltaTK: number | null): ResolvedInputs {
-  const out: ResolvedInputs = { kv: new Map(), waterL: new Map(), assumptions: [], kvRefOfPart: new Map(), notCounted: [] };
+  const n = doc.parts.length;
+  const out: ResolvedInputs = { kv: new Float64Array(n).fill(NaN), waterL: new Float64Array(n).fill(NaN), assumptions: [], kvRefOfPart: new Map(), notCounted: [] };
   let bores: Map<string, number> | null = null;
-  for (const part of doc.parts) {
+  for (let index = 0; index < n; index++) {
+    const part = doc.parts[index]!;
     const rows = fields.get(part.type);
     const props = part.props as Record<string, unknown>;
     for (const row of rows ?? []) {
       const given = props[row.field];
       if (typeof given === "number") {
-        store(out, row.kind, part.id, given);
+        store(out, row.kind, index, given);
         continue;
       }
       if (row.empty === "computed") continue;
@@ -125,7 +130,7 @@ export function resolveInputs(doc: Schematic, geom: (PipeGeometry | null)[], flu
       bores ??= boresOf(doc, geom);
       const t = typicalValue(part, row.rule, { bore: bores.get(part.id), fluid, deltaTK });
       if (t === null || !Number.isFinite(t.value) || !(t.value > 0)) continue; // unconnected or no load: nothing flows through it
-      store(out, row.kind, part.id, t.value);
+      store(out, row.kind, index, t.value);
       const ref = `${part.id}.${row.field}`;
       out.assumptions.push({
         ref, part: part.id, field: row.field, kind: row.kind, value: t.value,
@@ -134,7 +139,7 @@ export function resolveInputs(doc: Schematic, geom: (PipeGeometry | null)[], flu
       if (row.kind === "resistance") out.kvRefOfPart.set(part.id, ref);
     }
     // Parts with a Kv field the table does not cover keep their own (nullable) value.
-    if (!out.kv.has(part.id) && typeof props.kv === "number") out.kv.set(part.id, props.kv);
+    if (Number.isNaN(out.kv[index]) && typeof props.kv === "number") out.kv[index] = props.kv;
   }
   return out;
 }
