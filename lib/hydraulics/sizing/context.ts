@@ -35,6 +35,11 @@ export interface EngineContext {
   /** Kv and water content each part is sized with: given, typical (an assumption), or not counted */
   inputs: ResolvedInputs;
   findings: Findings;
+  /**
+   * Converged simulated flows of this calculation by valve state (laws.ts valveStateKey):
+   * a later simulation of the same valves starts from them (scenarios/simulate.ts).
+   */
+  settled: Map<string, Float64Array>;
 }
 
 /**
@@ -142,5 +147,5 @@ export function createContext(doc: Schematic, findings: Findings): EngineContext
   const pipeGeom = pipeGeometry(doc, findings);
   const inputs = resolveInputs(doc, pipeGeom, fluid, deltaTK);
   inputFindings(doc, inputs, findings);
-  return { doc, model, prep, fluid, flowC, returnC, deltaTK, pipeGeom, inputs, findings };
+  return { doc, model, prep, fluid, flowC, returnC, deltaTK, pipeGeom, inputs, findings, settled: new Map() };
 }

@@ -37,7 +37,6 @@ function isOpen(part: Part, state: NetworkState): boolean {
   return state.valveOpen.get(part.id) ?? drawn;
 }
 
-/** Set a load's own resistance (radiator valve, UFH loop pipe, coil Kv) on link k. */
 /** A load's Kv device on link k: own law Kv (or zero for "no Kv"), cut (closed) in design. No closure per call. */
 function setLoadKv(t: LinkTable, k: number, v: number | null, rho: number, solver: Law | undefined): void {
   t.c[k] = kvCoefficient(v, rho);
@@ -161,6 +160,20 @@ export function buildLaws(ctx: EngineContext, state: NetworkState): LinkTable {
     }
   });
   return t;
+}
+
+/**
+ * The valve positions a state comes to — each zone and isolation valve open or shut, each
+ * diverter's side — as one string: two states with equal keys are the same network but for
+ * dp-bypass openings.
+ */
+export function valveStateKey(ctx: EngineContext, state: NetworkState): string {
+  let key = state.mode;
+  for (const part of ctx.doc.parts) {
+    if (part.type === "zone-valve" || part.type === "isolation-valve") key += isOpen(part, state) ? "1" : "0";
+    else if (part.type === "diverter-valve") key += state.diverter.get(part.id) ?? "-";
+  }
+  return key;
 }
 
 /** True when the link is cut (no flow possible) in this state. */
