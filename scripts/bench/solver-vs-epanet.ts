@@ -69,14 +69,18 @@ export async function benchSolverVsEpanet(sizes: number[]): Promise<boolean> {
       const doc = kind === "building" ? generateBuildingWithPipes(n) : generateGridWithPipes(n);
       const file = `${kind}-${n}.inp`;
       (ws as unknown as { writeFile(p: string, d: string): void }).writeFile(file, toInp(doc).inp);
-      // enough runs that both sides are measured warm (the JIT and the wasm both settle): medians of 25 (7 at 10,000 pipes)
-      const runs = n <= 2000 ? 25 : 7;
+      // Both sides measured warm, as a server runs them: untimed rounds first until the JIT, the
+      // wasm tiers and the heap have settled (one round left the engine at 10,000 pipes at 1.5–3×
+      // its settled time), then medians of 25 rounds (11 at 10,000 pipes). BENCH_WARM sets the
+      // untimed rounds.
+      const runs = n <= 2000 ? 25 : 11;
+      const warmRounds = Number(process.env.BENCH_WARM ?? (n <= 2000 ? 30 : 8));
       const ep: { wall: number; cpu: number }[] = [];
       const cold: { wall: number; cpu: number }[] = [];
       const memo: { wall: number; cpu: number }[] = [];
       let epFlow = 0;
       let engine = engineSolve(doc); // warm-up (JIT), the memo filled
-      for (let r = -1; r < runs; r++) {
+      for (let r = -warmRounds; r < runs; r++) {
         const p = new Project(ws as never);
         const e = time(() => {
           p.open(file, `${kind}-${n}.rpt`, "");
@@ -88,7 +92,7 @@ export async function benchSolverVsEpanet(sizes: number[]): Promise<boolean> {
         const c = time(() => engineSolve(doc));
         const m = time(() => engineSolve(doc));
         engine = m.value;
-        if (r < 0) continue; // one more warm-up round for both
+        if (r < 0) continue; // a warm-up round for both
         ep.push({ wall: e.wallMs, cpu: e.cpuMs });
         cold.push({ wall: c.wallMs, cpu: c.cpuMs });
         memo.push({ wall: m.wallMs, cpu: m.cpuMs });
